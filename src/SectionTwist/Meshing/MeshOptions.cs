@@ -1,0 +1,25 @@
+using SectionTwist.Geometry;
+
+namespace SectionTwist.Meshing;
+
+/// <summary>Controls for the quality triangulator. Lengths are in metres.</summary>
+internal sealed record MeshOptions
+{
+    /// <summary>Largest edge length wanted anywhere (metres); null lets the mesher pick from the part size.</summary>
+    public double? MaxEdgeLength { get; init; }
+
+    /// <summary>Smallest angle wanted in every triangle, degrees, except where the input itself has a smaller angle.</summary>
+    public double MinAngleDegrees { get; init; } = 25;
+
+    /// <summary>Largest distance (metres) between an arc and the straight chord between two boundary vertices on it; null: 1e-3 of the local radius.</summary>
+    public double? ChordTolerance { get; init; }
+
+    /// <summary>Optional wanted edge length at a point (metres); the mesh is refined until edges are no longer than this.</summary>
+    public Func<Point2, double>? SizeField { get; init; }
+
+    /// <summary>Grade the mesh toward re-entrant corners and small features.</summary>
+    public bool Grade { get; init; } = true;
+
+    /// <summary>Safety limit on the number of triangles.</summary>
+    public int MaxTriangles { get; init; } = 4_000_000;
+}
