@@ -1,0 +1,25 @@
+namespace SectionTwist.Torsion;
+
+/// <summary>Options for <see cref="SectionAnalyzer"/>.</summary>
+public sealed record AnalysisOptions
+{
+    /// <summary>Requested relative accuracy of J (default 1e-4); the peak shear is resolved to about ten times this.</summary>
+    public double Accuracy { get; init; } = 1e-4;
+
+    /// <summary>Skip the Richardson refinement that estimates the error (faster; the estimate is then reported as unknown, NaN).</summary>
+    public bool EstimateError { get; init; } = true;
+
+    /// <summary>Upper limit on the number of elements of a single solve.</summary>
+    public int MaxElements { get; init; } = 2_000_000;
+
+    /// <summary>Angle (degrees, measured inside the material) above which an unfilleted corner is reported as a singular re-entrant corner.</summary>
+    public double ReentrantWarningAngleDeg { get; init; } = 185;
+
+    /// <summary>The default options.</summary>
+    public static AnalysisOptions Default { get; } = new();
+}
+
+/// <summary>Progress of an analysis: a stage name and the fraction done (0..1).</summary>
+/// <param name="Stage">What is running, e.g. <c>mesh</c>, <c>solve</c>, <c>refine</c>.</param>
+/// <param name="Fraction">Fraction of the whole analysis done, 0 to 1; the last report is 1.</param>
+public readonly record struct AnalysisProgress(string Stage, double Fraction);
