@@ -53,7 +53,9 @@ internal sealed class ShaftAnalysis(ShaftModel model)
             reactions.Add(new SupportReaction(layout.Stations[i].Name, r));
         }
 
-        var segments = BuildSegments(layout, phi);
+        double scale = 0;
+        foreach (var v in f) scale += Math.Abs(v);
+        var segments = BuildSegments(layout, phi, scale);
         var springs = layout.Springs.Select(s => new SpringResult(s.Spring.Label, layout.Stations[s.A].Name, layout.Stations[s.B].Name,
             s.Spring.Stiffness * (phi[s.B] - phi[s.A]), phi[s.B] - phi[s.A])).ToArray();
 
@@ -118,16 +120,18 @@ internal sealed class ShaftAnalysis(ShaftModel model)
         return phi;
     }
 
-    private static SegmentResult[] BuildSegments(ShaftLayout layout, double[] phi)
+    /// <summary>Builds the segment results; internal torques below 1e-10 of the total applied torque are round-off and reported as 0.</summary>
+    private static SegmentResult[] BuildSegments(ShaftLayout layout, double[] phi, double scale)
     {
+        double Clean(double t) => Math.Abs(t) <= 1e-10 * scale ? 0 : t;
         double? limit = layout.Model.TwistRateLimit;
         var list = new List<(double Pos, SegmentResult R)>();
         for (int i = 0; i < layout.Elements.Count; i++)
         {
             var e = layout.Elements[i];
             var seg = layout.Segments[i];
-            double ta = e.TorqueA(phi[e.A], phi[e.B]);
-            double tb = ta - e.Distributed * e.Length;
+            double ta = Clean(e.TorqueA(phi[e.A], phi[e.B]));
+            double tb = Clean(ta - e.Distributed * e.Length);
             double tau = e.MaxShear(ta);
             double rate = e.MaxTwistRate(ta);
             double? lim = seg.Material.LimitShear;

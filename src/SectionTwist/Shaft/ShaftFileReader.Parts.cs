@@ -77,7 +77,7 @@ internal sealed partial class ShaftFileReader
             if (m.Has("shearYield")) ssy = PositiveStress(m, "shearYield");
             string source = m.String("source") ?? (lib is not null && !m.Has("G") && !m.Has("E") && !m.Has("yield") && !m.Has("ultimate") && !m.Has("allowableShear") && !m.Has("shearYield")
                 ? lib.Source : $"given in {_file.FileName}{(lib is null ? "" : $", based on library '{m.String("library")}'")}");
-            result[name] = new Material(m.String("name") ?? lib?.Name ?? name, g, allow, ssy, source);
+            result[name] = new Material(m.String("name") ?? name, g, allow, ssy, source);
         }
         return result;
     }
