@@ -29,5 +29,13 @@ internal static class SpdSolver
 
     /// <summary>Numeric factorization reusing a symbolic analysis of the same pattern.</summary>
     public static ISpdSolver Factorize(SymbolicCholesky symbolic, CscMatrix a, CancellationToken cancellationToken = default)
-        => SimplicialCholesky.Factorize(symbolic, a, cancellationToken);
+        => symbolic.Flops / Math.Max(1, symbolic.NonZerosL) < SupernodalFlopsPerNonzero
+            ? SimplicialCholesky.Factorize(symbolic, a, cancellationToken)
+            : SupernodalCholesky.Factorize(symbolic, a, cancellationToken);
+
+    /// <summary>
+    /// flops / nnz(L) below which the simplicial factorization is used (a common rule of thumb for choosing, about 40;
+    /// see the solver notes).
+    /// </summary>
+    public const double SupernodalFlopsPerNonzero = 40;
 }
