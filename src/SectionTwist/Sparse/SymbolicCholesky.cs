@@ -53,6 +53,11 @@ internal sealed class SymbolicCholesky
     /// <summary>Nonzero count of the original matrix this analysis expects.</summary>
     public int NonZerosA { get; private init; }
 
+    /// <summary>Supernode partition for the supernodal factorization (built on first use).</summary>
+    public Supernodes Supernodes => _supernodes ??= Supernodes.Build(this);
+
+    private Supernodes? _supernodes;
+
     /// <summary>Size above which <see cref="FillOrdering.Auto"/> picks nested dissection.</summary>
     public const int NestedDissectionThreshold = 60_000;
 
