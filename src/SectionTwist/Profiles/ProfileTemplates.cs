@@ -57,16 +57,24 @@ public static class ProfileTemplates
         Definitions.FirstOrDefault(d => string.Equals(d.Info.Name, name, StringComparison.OrdinalIgnoreCase)
             || d.Info.Aliases.Any(a => string.Equals(a, name, StringComparison.OrdinalIgnoreCase)));
 
+    /// <summary>The template named <paramref name="name"/>; throws naming the known templates (or the 3D cross-hole case) otherwise.</summary>
+    internal static TemplateInfo RequireInfo(string name, string specText) => Require(name, specText).Info;
+
+    private static TemplateDefinition Require(string name, string specText)
+    {
+        if (OutOfScope.Any(o => string.Equals(o, name, StringComparison.OrdinalIgnoreCase)))
+            throw new SectionTwistException("out-of-scope",
+                $"{specText}: a shaft with a cross hole is a 3D stress problem, outside a cross-section (Saint-Venant) analysis; analyse the plain section (e.g. circle:d=...) and apply a stress-concentration factor from a handbook for the hole");
+        return FindDefinition(name) ?? throw new SectionTwistException("unknown-template",
+            $"{specText}: unknown template '{name}'; known templates: {string.Join(", ", Definitions.Select(d => d.Info.Name))} (run 'sectiontwist templates' for their parameters)");
+    }
+
     /// <summary>Builds the profile, its outer size (m) and its template description.</summary>
     internal static (Profile Profile, double OuterSize, TemplateInfo Info, TemplateArguments Arguments) Build(string spec, LengthUnit? defaultUnit)
     {
         var parsed = TemplateSpec.Parse(spec);
         string specText = spec.Trim();
-        if (OutOfScope.Any(o => string.Equals(o, parsed.Name, StringComparison.OrdinalIgnoreCase)))
-            throw new SectionTwistException("out-of-scope",
-                $"{specText}: a shaft with a cross hole is a 3D stress problem, outside a cross-section (Saint-Venant) analysis; analyse the plain section (e.g. circle:d=...) and apply a stress-concentration factor from a handbook for the hole");
-        var def = FindDefinition(parsed.Name) ?? throw new SectionTwistException("unknown-template",
-            $"{specText}: unknown template '{parsed.Name}'; known templates: {string.Join(", ", Definitions.Select(d => d.Info.Name))} (run 'sectiontwist templates' for their parameters)");
+        var def = Require(parsed.Name, specText);
         var unit = defaultUnit ?? LengthUnit.Millimetre;
         IReadOnlyList<Region> regions;
         TemplateArguments args;
