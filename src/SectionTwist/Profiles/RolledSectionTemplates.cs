@@ -25,15 +25,15 @@ internal static class RolledSectionTemplates
     {
         yield return new TemplateDefinition(
             new TemplateInfo("ibeam", "I-section, web along y, symmetric flanges", Flanged("overall depth"),
-                "D = max(h, b)", "ibeam:h=200,b=100,tw=5.6,tf=8.5,r=12", ["i", "beam"]),
+                "D = max(h, b)", "ibeam:h=200,b=100,tw=5.6,tf=8.5,r=12", ["beam"]),
             a => [IBeam(a)], (a, _) => Math.Max(a.Length("h"), a.Length("b")));
         yield return new TemplateDefinition(
             new TemplateInfo("channel", "channel (C/U) section, web along y at x = 0, flanges toward +x", Flanged("overall depth"),
-                "D = max(h, b)", "channel:h=100,b=50,tw=6,tf=8.5,r=8.5,taper=8", ["c", "upn"]),
+                "D = max(h, b)", "channel:h=100,b=50,tw=6,tf=8.5,r=8.5,taper=8", []),
             a => [Channel(a)], (a, _) => Math.Max(a.Length("h"), a.Length("b")));
         yield return new TemplateDefinition(
             new TemplateInfo("tee", "T-section, flange on top, web down", Flanged("overall height, flange included"),
-                "D = max(h, b)", "tee:h=50,b=50,tw=6,tf=6,r=6", ["t"]),
+                "D = max(h, b)", "tee:h=50,b=50,tw=6,tf=6,r=6", []),
             a => [Tee(a)], (a, _) => Math.Max(a.Length("h"), a.Length("b")));
         yield return new TemplateDefinition(
             new TemplateInfo("angle", "angle (L) section, heel at the origin, legs along +x and +y",
@@ -42,7 +42,7 @@ internal static class RolledSectionTemplates
                     new TemplateParameter("t", ParameterKind.Length, "leg thickness"),
                     new TemplateParameter("r", ParameterKind.Length, "root fillet radius", "0"),
                     new TemplateParameter("r2", ParameterKind.Length, "toe radius", "0")),
-                "D = max(h, b)", "angle:h=60,t=6,r=8,r2=4", ["l"]),
+                "D = max(h, b)", "angle:h=60,t=6,r=8,r2=4", []),
             a => [Angle(a)], (a, _) => Math.Max(a.Length("h"), a.Length("b", a.Length("h"))));
     }
 
