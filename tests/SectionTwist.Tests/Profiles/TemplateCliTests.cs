@@ -6,11 +6,13 @@ namespace SectionTwist.Tests.Profiles;
 /// <summary>The <c>templates</c> and <c>sweep</c> commands: listings, usage errors (exit code 2) and sweep results.</summary>
 public class TemplateCliTests
 {
-    private static (int Code, string Out, string Err) Run(params string[] argv)
+    private static (int Code, string Out, string Err) Run(params string[] argv) => Run(false, argv);
+
+    private static (int Code, string Out, string Err) Run(bool terminal, params string[] argv)
     {
         var o = new StringWriter();
         var e = new StringWriter();
-        int code = Program.Run(argv, new CliContext(o, e));
+        int code = Program.Run(argv, new CliContext(o, e, terminal));
         return (code, o.ToString(), e.ToString());
     }
 
@@ -55,8 +57,10 @@ public class TemplateCliTests
     [Fact]
     public void Sweep_of_a_circle_is_relative_one_and_scales_as_d4()
     {
-        var (code, output, err) = Run("sweep", "circle:d=20", "--vary", "d=10mm:30mm:3", "--accuracy", "1e-3", "--json");
+        var (code, output, err) = Run(true, "sweep", "circle:d=20", "--vary", "d=10mm:30mm:3", "--accuracy", "1e-3", "--json");
         Assert.True(code == 0, err);
+        Assert.Contains("sweep: 3/3 steps done", err, StringComparison.Ordinal); // progress on a terminal, on stderr only
+        Assert.DoesNotContain("steps done", output, StringComparison.Ordinal);
         using var doc = JsonDocument.Parse(output);
         var steps = doc.RootElement.GetProperty("steps").EnumerateArray().ToList();
         Assert.Equal(3, steps.Count);
@@ -75,6 +79,7 @@ public class TemplateCliTests
     {
         var (code, output, err) = Run("sweep", "keyed:d=40,n=2,b=12", "--vary", "t1=3:7:3", "--accuracy", "1e-3", "--csv");
         Assert.True(code == 0, err);
+        Assert.Equal("", err); // no progress display when stderr is not a terminal
         var rows = output.Split('\n', StringSplitOptions.RemoveEmptyEntries).Skip(1).Select(l => l.Split(',')).ToList();
         Assert.Equal(3, rows.Count);
         double[] rel = rows.Select(r => double.Parse(r[5], System.Globalization.CultureInfo.InvariantCulture)).ToArray();
