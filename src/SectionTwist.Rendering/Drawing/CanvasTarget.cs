@@ -1,4 +1,5 @@
 using System.Text;
+using System.Text.RegularExpressions;
 using SkiaSharp;
 
 namespace SectionTwist.Rendering.Drawing;
@@ -6,8 +7,11 @@ namespace SectionTwist.Rendering.Drawing;
 /// <summary>
 /// Runs one drawing routine against a raster surface (PNG) or Skia's SVG canvas, so both formats share the same code.
 /// </summary>
-internal static class CanvasTarget
+internal static partial class CanvasTarget
 {
+    [GeneratedRegex("\\b(x|y)=\"([^\"]*?)[,\\s]+\"")]
+    private static partial Regex TrailingSeparator();
+
     /// <summary>Draws a <paramref name="width"/> x <paramref name="height"/> picture and returns the encoded file bytes.</summary>
     public static byte[] Render(ImageFormat format, int width, int height, Action<SKCanvas> draw)
     {
@@ -51,6 +55,8 @@ internal static class CanvasTarget
         string svg = Encoding.UTF8.GetString(ms.ToArray());
         // Skia writes the typeface's own family name; add generic fall-backs for viewers without DejaVu Sans.
         svg = svg.Replace("font-family=\"DejaVu Sans\"", $"font-family=\"{Fonts.SvgFamily}\"", StringComparison.Ordinal);
+        // Skia ends glyph position lists with ", " (x="1, 2, "); SVG number lists must not end with a separator
+        svg = TrailingSeparator().Replace(svg, "$1=\"$2\"");
         return Encoding.UTF8.GetBytes(svg);
     }
 }

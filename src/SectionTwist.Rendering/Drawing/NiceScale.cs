@@ -63,6 +63,9 @@ internal static class NiceScale
         int mag = (int)Math.Floor(Math.Log10(Math.Abs(v)));
         if (mag >= 6 || mag < -4) return v.ToString("E" + (digits - 1).ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
         int decimals = Math.Max(0, digits - 1 - mag);
-        return Math.Round(v, decimals).ToString("F" + decimals.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
+        string s = Math.Round(v, decimals).ToString("F" + decimals.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
+        // trailing zeros after the point carry no information in a label
+        if (s.Contains('.', StringComparison.Ordinal)) s = s.TrimEnd('0').TrimEnd('.');
+        return s;
     }
 }
