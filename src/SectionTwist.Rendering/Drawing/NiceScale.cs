@@ -25,8 +25,7 @@ internal static class NiceScale
     {
         if (hi < lo) (lo, hi) = (hi, lo);
         if (hi - lo < 1e-300 * Math.Max(1, Math.Abs(lo))) { hi = lo + 1; lo -= 1; }
-        double range = NiceNumber(hi - lo, false);
-        double step = NiceNumber(range / Math.Max(1, count - 1), true);
+        double step = NiceNumber((hi - lo) / Math.Max(1, count - 1), true);
         double first = Math.Ceiling(lo / step - 1e-9) * step;
         var ticks = new List<double>();
         for (double t = first; t <= hi + 1e-9 * step; t += step)
