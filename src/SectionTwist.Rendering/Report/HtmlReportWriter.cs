@@ -92,11 +92,15 @@ public static class HtmlReportWriter
         {
             h.Append(t.AlertRows.Contains(r) ? "<tr class=\"alert\">" : "<tr>");
             for (int i = 0; i < t.Rows[r].Count; i++)
-                h.Append(i == 0 ? "<th scope=\"row\">" : "<td>").Append(E(t.Rows[r][i])).Append(i == 0 ? "</th>" : "</td>");
+                h.Append(i == 0 ? "<th scope=\"row\">" : IsNumber(t.Rows[r][i]) ? "<td class=\"num\">" : "<td>")
+                 .Append(E(t.Rows[r][i])).Append(i == 0 ? "</th>" : "</td>");
             h.Append("</tr>\n");
         }
         h.Append("</tbody>\n</table>\n");
     }
+
+    private static bool IsNumber(string s) =>
+        double.TryParse(s.Replace('\u2212', '-'), NumberStyles.Float, CultureInfo.InvariantCulture, out _);
 
     private static void Figure(StringBuilder h, ReportFigure f)
     {

@@ -21,7 +21,8 @@ internal static class ReportStyle
         dd { margin: 0; font-size: 18px; font-weight: bold; }
         table { border-collapse: collapse; margin: 12px 0 20px; width: 100%; font-size: 13px; }
         caption { text-align: left; font-weight: bold; padding: 4px 0; }
-        th, td { border: 1px solid #d7dbe3; padding: 4px 8px; text-align: right; vertical-align: top; }
+        th, td { border: 1px solid #d7dbe3; padding: 4px 8px; text-align: left; vertical-align: top; }
+        td.num { text-align: right; font-variant-numeric: tabular-nums; }
         th[scope=row], thead th { text-align: left; }
         thead th { background: #eef1f6; }
         tr.alert td, tr.alert th { background: #fdecea; color: #a4161a; }
