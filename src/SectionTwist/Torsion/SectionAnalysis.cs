@@ -2,16 +2,13 @@ using SectionTwist.Geometry;
 
 namespace SectionTwist.Torsion;
 
-/// <summary>The stateful analysis behind <see cref="SectionAnalyzer"/>; <see cref="Compute"/> runs once and caches.</summary>
+/// <summary>The stateful analysis behind <see cref="SectionAnalyzer"/> (the meshing pass lands with the triangulator).</summary>
 internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, CancellationToken ct, IProgress<AnalysisProgress>? progress)
 {
-    private SectionResult? _result;
-
-    public SectionResult Compute() => _result ??= Run();
-
-    private SectionResult Run()
+    public SectionResult Compute()
     {
-        _ = (profile, options, ct, progress);
-        throw new InvalidOperationException("the torsion solve is being built");
+        _ = (profile, options, progress);
+        ct.ThrowIfCancellationRequested();
+        throw new InvalidOperationException("the triangulator has not landed yet");
     }
 }
