@@ -13,7 +13,8 @@ internal sealed class ShaftCommand : ICommand
         "caution: results assume linear elastic, Saint-Venant torsion; stress concentrations at shoulders, keyseat ends and fillets " +
         "are not included; verify against local codes and licensed engineering practice.";
 
-    /// <summary>Turns template and DXF sections into J and peak shear per unit torque; null until the section analysis is wired in.</summary>
+    /// <summary>Turns template and DXF sections into J and peak shear per unit torque; null: the standard
+    /// <see cref="ShaftSections"/> resolver (templates, profile sources, section analysis) with notes on standard error.</summary>
     internal static Func<SectionSource, SectionStiffness>? SectionResolver { get; set; }
 
     /// <summary>Writes the <c>--report</c> HTML file (set by the rendering code); null: the option is refused.</summary>
@@ -44,7 +45,7 @@ internal sealed class ShaftCommand : ICommand
             throw new UsageException("--report: HTML reports are not available in this build yet; use --json or --csv");
         string path = args.Positional[0];
 
-        var doc = ShaftFile.Load(path, SectionResolver);
+        var doc = ShaftFile.Load(path, SectionResolver ?? ShaftSections.CreateResolver(notes: context.Err.WriteLine));
         ShaftResult result;
         try { result = ShaftSolver.Solve(doc.Model); }
         catch (SectionTwistException e) { throw new SectionTwistException(e.Code, $"{Path.GetFileName(path)}: {e.Message}", e); }
