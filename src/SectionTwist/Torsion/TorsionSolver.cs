@@ -1,0 +1,129 @@
+using SectionTwist.Geometry;
+using SectionTwist.Meshing;
+using SectionTwist.Sparse;
+
+namespace SectionTwist.Torsion;
+
+/// <summary>
+/// Finite-element solve of the Prandtl stress-function problem on one mesh (Timoshenko and Goodier, Theory of
+/// Elasticity, 3rd ed., sec. 101 and 115): Laplacian(phi) = -2 for G theta = 1; phi = 0 on each region's outer boundary;
+/// phi = unknown constant c_k on hole k, fixed by the circulation condition integral(d phi/dn ds) = 2 A_k, which enters the
+/// weak form as one extra unknown per hole with load 2 A_k. Then J = 2 integral(phi dA) + 2 sum(c_k A_k) = u . f.
+/// </summary>
+internal static class TorsionSolver
+{
+    /// <summary>Solves on <paramref name="mesh"/>; <paramref name="holeArea"/> gives the exact area enclosed by each loop (used for holes).</summary>
+    public static TorsionSolution Solve(Mesh mesh, double[] holeArea, CancellationToken ct = default)
+    {
+        int nNodes = mesh.NodeCount, nEl = mesh.ElementCount;
+        var loops = mesh.Loops;
+        // DOF map: outer-boundary nodes fixed (-1); all nodes on hole k share one DOF; interior nodes one each.
+        var dof = new int[nNodes];
+        var holeDof = new int[loops.Length];
+        int nd = 0;
+        for (int l = 0; l < loops.Length; l++) holeDof[l] = loops[l].IsHole ? nd++ : -1;
+        for (int i = 0; i < nNodes; i++)
+        {
+            int l = mesh.NodeLoop[i];
+            dof[i] = l < 0 ? nd++ : holeDof[l];
+        }
+        int n = nd;
+        var f = new double[n];
+        for (int l = 0; l < loops.Length; l++) if (holeDof[l] >= 0) f[holeDof[l]] += 2 * holeArea[l];
+
+        var trip = new TripletMatrix(n, nEl * 36);
+        Span<double> ke = stackalloc double[36];
+        Span<double> fe = stackalloc double[6];
+        Span<double> xe = stackalloc double[6];
+        Span<double> ye = stackalloc double[6];
+        for (int e = 0; e < nEl; e++)
+        {
+            if ((e & 4095) == 0) ct.ThrowIfCancellationRequested();
+            Gather(mesh, e, xe, ye);
+            ElementMatrices(xe, ye, ke, fe);
+            for (int a = 0; a < 6; a++)
+            {
+                int da = dof[mesh.Elements[6 * e + a]];
+                if (da < 0) continue;
+                f[da] += fe[a];
+                for (int b = 0; b < 6; b++)
+                {
+                    int db = dof[mesh.Elements[6 * e + b]];
+                    if (db >= 0) trip.Add(da, db, ke[6 * a + b]);
+                }
+            }
+        }
+        var k = trip.ToCsc();
+        var u = new double[n];
+        if (n > 0) SpdSolver.Create(k, ct).Solve(f, u);
+        double residual = n > 0 ? k.RelativeResidual(u, f) : 0;
+
+        var phi = new double[nNodes];
+        for (int i = 0; i < nNodes; i++) phi[i] = dof[i] < 0 ? 0 : u[dof[i]];
+        var loopValue = new double[loops.Length];
+        for (int l = 0; l < loops.Length; l++) loopValue[l] = holeDof[l] >= 0 ? u[holeDof[l]] : 0;
+
+        // J per region: 2 int(phi) over the region's elements + 2 c_k A_k for its holes.
+        var regionJ = new double[loops.Max(l => l.Region) + 1];
+        for (int e = 0; e < nEl; e++)
+        {
+            Gather(mesh, e, xe, ye);
+            double integral = IntegratePhi(mesh, e, xe, ye, phi);
+            regionJ[mesh.ElementRegion[e]] += 2 * integral;
+        }
+        for (int l = 0; l < loops.Length; l++) if (loops[l].IsHole) regionJ[loops[l].Region] += 2 * loopValue[l] * holeArea[l];
+        double j = regionJ.Sum();
+
+        var raw = BoundaryFluxRecovery.Recover(mesh, phi);
+        var (flux, maxG, where) = BoundaryFluxRecovery.Smooth(mesh, raw);
+        return new TorsionSolution
+        {
+            Mesh = mesh, Phi = phi, LoopValue = loopValue, J = j, RegionJ = regionJ, BoundaryFlux = flux,
+            MaxGradient = maxG, MaxGradientLocation = where, Residual = residual,
+        };
+    }
+
+    internal static void Gather(Mesh mesh, int e, Span<double> xe, Span<double> ye)
+    {
+        for (int a = 0; a < 6; a++) { int nd = mesh.Elements[6 * e + a]; xe[a] = mesh.X[nd]; ye[a] = mesh.Y[nd]; }
+    }
+
+    /// <summary>Element stiffness int(grad Na . grad Nb) and load int(2 Na) for the 6-node triangle.</summary>
+    internal static void ElementMatrices(ReadOnlySpan<double> xe, ReadOnlySpan<double> ye, Span<double> ke, Span<double> fe)
+    {
+        var rule = P2Triangle.IsStraight(xe, ye) ? P2Triangle.Degree2 : P2Triangle.Degree5;
+        ke.Clear(); fe.Clear();
+        Span<double> dx = stackalloc double[6];
+        Span<double> dy = stackalloc double[6];
+        for (int q = 0; q < rule.Count; q++)
+        {
+            double det = P2Triangle.Gradients(rule, q, xe, ye, dx, dy);
+            double w = rule.W[q] * det;
+            var nq = rule.N.AsSpan(q * 6, 6);
+            for (int a = 0; a < 6; a++)
+            {
+                fe[a] += 2 * w * nq[a];
+                double ax = w * dx[a], ay = w * dy[a];
+                for (int b = a; b < 6; b++) ke[6 * a + b] += ax * dx[b] + ay * dy[b];
+            }
+        }
+        for (int a = 0; a < 6; a++) for (int b = 0; b < a; b++) ke[6 * a + b] = ke[6 * b + a];
+    }
+
+    private static double IntegratePhi(Mesh mesh, int e, ReadOnlySpan<double> xe, ReadOnlySpan<double> ye, double[] phi)
+    {
+        var rule = P2Triangle.IsStraight(xe, ye) ? P2Triangle.Degree2 : P2Triangle.Degree5;
+        Span<double> dx = stackalloc double[6];
+        Span<double> dy = stackalloc double[6];
+        double s = 0;
+        for (int q = 0; q < rule.Count; q++)
+        {
+            double det = P2Triangle.Gradients(rule, q, xe, ye, dx, dy);
+            var nq = rule.N.AsSpan(q * 6, 6);
+            double v = 0;
+            for (int a = 0; a < 6; a++) v += nq[a] * phi[mesh.Elements[6 * e + a]];
+            s += rule.W[q] * det * v;
+        }
+        return s;
+    }
+}
