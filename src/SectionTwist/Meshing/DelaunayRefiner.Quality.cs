@@ -17,6 +17,35 @@ internal sealed partial class DelaunayRefiner
     /// <summary>Triangles left with an angle below the target because of a small input angle.</summary>
     public int AcceptedSkinny { get; private set; }
 
+    private readonly List<int> _offCurve = [];
+
+    /// <summary>Vertices that could not be moved onto their curve (left on the chord).</summary>
+    public int OffCurveVertices => _offCurve.Count;
+
+    internal IReadOnlyList<int> OffCurveList => _offCurve;
+    internal (int Curve, double T) VertexCurve(int v) => (_vCurve[v], _vT[v]);
+
+    /// <summary>
+    /// Retries moving boundary vertices left on their chord onto the curve: refinement around them has usually
+    /// opened their star by now. Refines again after each successful round.
+    /// </summary>
+    private void RetryOffCurve()
+    {
+        for (int round = 0; round < 8 && _offCurve.Count > 0; round++)
+        {
+            var moved = new List<int>();
+            foreach (int v in _offCurve)
+            {
+                Point2 p = Curve[_vCurve[v]].PointAt(_vT[v]);
+                if (T.TryMove(v, p.X, p.Y, _scratch)) moved.Add(v);
+            }
+            if (moved.Count == 0) return;
+            _offCurve.RemoveAll(moved.Contains);
+            foreach (int v in moved) AfterInsert(v);
+            RunQueues();
+        }
+    }
+
     private void Refine()
     {
         double theta = _opt.MinAngleDegrees;
@@ -30,7 +59,11 @@ internal sealed partial class DelaunayRefiner
     }
 
     /// <summary>Continues refinement after chords were split from outside (Jacobian repair).</summary>
-    internal void ResumeRefinement() => RunQueues();
+    internal void ResumeRefinement()
+    {
+        RunQueues();
+        RetryOffCurve();
+    }
 
     private void RunQueues()
     {
@@ -109,8 +142,16 @@ internal sealed partial class DelaunayRefiner
         int u = T.V[3 * t + Triangulation.Next(k)], v = T.V[3 * t + Triangulation.Prev(k)], w = T.V[3 * t + k];
         int cu = _vCurve[u], cv = _vCurve[v];
         if (cu < 0 || cv < 0 || cu == cv) return false;
-        int corner = _curveNext[cu] == cv ? cv : _curveNext[cv] == cu ? cu : -1;
-        if (corner < 0 || _cornerAngle[corner] >= SharpCorner) return false;
+        // the input vertex shared by the two curves (two curves of a two-curve loop share both ends: take the nearer)
+        int corner = -1;
+        double dbest = double.PositiveInfinity;
+        foreach (int cand in (ReadOnlySpan<int>)[_curveNext[cu] == cv ? cv : -1, _curveNext[cv] == cu ? cu : -1])
+        {
+            if (cand < 0 || _cornerAngle[cand] >= SharpCorner) continue;
+            double dk = Point2.Distance(T.Node(u), T.Node(_curveStartVertex[cand]));
+            if (dk < dbest) { dbest = dk; corner = cand; }
+        }
+        if (corner < 0) return false;
         int kv = _curveStartVertex[corner];
         bool accept = w == kv;
         if (!accept)
@@ -252,14 +293,14 @@ internal sealed partial class DelaunayRefiner
         int a = ChA[c], b = ChB[c], curve = ChCurve[c];
         double t0 = ChT0[c], t1 = ChT1[c];
         double tm = 0.5 * (t0 + t1);
-        double len = _curveLen[curve];
         bool atStart = t0 == 0, atEnd = t1 == 1;
-        if (atStart != atEnd && len > 0)
+        if (atStart != atEnd)
         {
-            double half = 0.5 * (t1 - t0) * len;
-            double dist = Math.Pow(2, Math.Round(Math.Log2(half)));
-            double tShell = atStart ? dist / len : 1 - dist / len;
-            if (tShell > t0 + 0.2 * (t1 - t0) && tShell < t1 - 0.2 * (t1 - t0)) tm = tShell;
+            // concentric shells: the new vertex at a power-of-two (Euclidean) distance from the input vertex
+            Point2 corner = atStart ? Curve[curve].Start : Curve[curve].End;
+            double full = Point2.Distance(corner, atStart ? T.Node(b) : T.Node(a));
+            double dist = Math.Pow(2, Math.Round(Math.Log2(0.5 * full)));
+            if (dist > 0.2 * full && dist < 0.8 * full) tm = ParameterAtDistance(curve, corner, dist, t0, t1, atStart);
         }
         int e = T.FindEdge(a, b);
         if (e < 0) throw Degenerate(a, "internal: a boundary chord was lost");
@@ -271,9 +312,25 @@ internal sealed partial class DelaunayRefiner
         ChB[c] = m; ChT1[c] = tm;
         T.SplitEdge(e / 3, e % 3, m, c, c2);
         T.Legalize();
-        if (!_curveStraight[curve] && !T.TryMove(m, p.X, p.Y, _scratch)) OffCurveVertices++;
+        if (!_curveStraight[curve] && !T.TryMove(m, p.X, p.Y, _scratch)) _offCurve.Add(m);
         AfterInsert(m);
         return m;
+    }
+
+    /// <summary>
+    /// The parameter in [t0, t1] whose curve point lies at <paramref name="dist"/> from <paramref name="corner"/>
+    /// (bisection; the distance grows monotonically away from the curve end on a chord-sized piece).
+    /// </summary>
+    private double ParameterAtDistance(int curve, Point2 corner, double dist, double t0, double t1, bool fromStart)
+    {
+        double lo = t0, hi = t1;
+        for (int i = 0; i < 60; i++)
+        {
+            double mid = 0.5 * (lo + hi);
+            bool inside = Point2.Distance(Curve[curve].PointAt(mid), corner) < dist;
+            if (inside == fromStart) lo = mid; else hi = mid;
+        }
+        return 0.5 * (lo + hi);
     }
 
     private void AfterInsert(int m)
