@@ -7,7 +7,7 @@ internal sealed partial class DelaunayRefiner
 {
     private const double SharpCorner = Math.PI / 3; // input angles below 60 degrees get the small-angle treatment
     private readonly Queue<int> _segQ = new();
-    private readonly Queue<(int T, int A, int B, int C)> _triQ = new();
+    private readonly PriorityQueue<(int T, int A, int B, int C), double> _triQ = new();
     private readonly List<int> _cavity = [];
     private readonly List<int> _encroached = [];
     private int[] _mark = [];
@@ -54,7 +54,7 @@ internal sealed partial class DelaunayRefiner
         double s = Math.Sin(theta * Math.PI / 180);
         _sin2Min = s * s;
         for (int c = 0; c < ChordCount; c++) if (Encroached(c)) _segQ.Enqueue(c);
-        for (int t = 0; t < T.TriangleCount; t++) if (T.Reg[t] >= 0) _triQ.Enqueue((t, T.V[3 * t], T.V[3 * t + 1], T.V[3 * t + 2]));
+        for (int t = 0; t < T.TriangleCount; t++) if (T.Reg[t] >= 0) EnqueueIfBad(t);
         RunQueues();
     }
 
@@ -112,9 +112,22 @@ internal sealed partial class DelaunayRefiner
         return (T.X[a] - T.X[x]) * (T.X[b] - T.X[x]) + (T.Y[a] - T.Y[x]) * (T.Y[b] - T.Y[x]) < 0;
     }
 
-    private bool IsBad(int t, out bool skinnyOnly)
+    /// <summary>
+    /// Queues a bad triangle: oversized ones first, most oversized first, then skinny ones, worst angle first
+    /// (processing the worst first gives fewer vertices; cf. Shewchuk 2002, section 5).
+    /// </summary>
+    private void EnqueueIfBad(int t)
+    {
+        if (IsBad(t, out bool skinnyOnly, out double priority))
+            _triQ.Enqueue((t, T.V[3 * t], T.V[3 * t + 1], T.V[3 * t + 2]), skinnyOnly ? priority : -priority);
+    }
+
+    private bool IsBad(int t, out bool skinnyOnly) => IsBad(t, out skinnyOnly, out _);
+
+    private bool IsBad(int t, out bool skinnyOnly, out double priority)
     {
         skinnyOnly = false;
+        priority = 0;
         int a = T.V[3 * t], b = T.V[3 * t + 1], c = T.V[3 * t + 2];
         double abx = T.X[b] - T.X[a], aby = T.Y[b] - T.Y[a], acx = T.X[c] - T.X[a], acy = T.Y[c] - T.Y[a];
         double bcx = T.X[c] - T.X[b], bcy = T.Y[c] - T.Y[b];
@@ -122,12 +135,13 @@ internal sealed partial class DelaunayRefiner
         double lmin = Math.Min(lab, Math.Min(lac, lbc)), lmax = Math.Max(lab, Math.Max(lac, lbc));
         if (lmin < 4 * _floor * _floor) return false;
         double h = Size.At((T.X[a] + T.X[b] + T.X[c]) / 3, (T.Y[a] + T.Y[b] + T.Y[c]) / 3);
-        if (lmax > h * h) return true;
+        if (lmax > h * h) { priority = lmax / (h * h); return true; }
         double area2 = abx * acy - aby * acx;
         // sin^2 of the smallest angle = (2A)^2 / (product of the squared lengths of the two edges beside it)
         double sin2 = area2 * area2 / (lab * lac * lbc / lmin);
         if (sin2 >= _sin2Min) return false;
         skinnyOnly = true;
+        priority = sin2;
         return true;
     }
 
@@ -207,7 +221,7 @@ internal sealed partial class DelaunayRefiner
                 SplitChord(s);
                 any = true;
             }
-            if (any) _triQ.Enqueue((t, T.V[3 * t], T.V[3 * t + 1], T.V[3 * t + 2]));
+            if (any) EnqueueIfBad(t);
             else AcceptedSkinny++;
             return;
         }
@@ -338,7 +352,7 @@ internal sealed partial class DelaunayRefiner
         T.Star(m, _scratch);
         foreach (int t in _scratch)
         {
-            if (T.Reg[t] >= 0) _triQ.Enqueue((t, T.V[3 * t], T.V[3 * t + 1], T.V[3 * t + 2]));
+            if (T.Reg[t] >= 0) EnqueueIfBad(t);
             for (int i = 0; i < 3; i++)
             {
                 int s = T.Seg[3 * t + i];
