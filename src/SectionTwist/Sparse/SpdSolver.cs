@@ -1,42 +1,41 @@
 namespace SectionTwist.Sparse;
 
 /// <summary>
-/// Entry point for symmetric positive definite systems. (Placeholder implementation: Jacobi-preconditioned conjugate
-/// gradients to a relative residual of 1e-13; the sparse Cholesky replaces it.)
+/// Entry point for symmetric positive definite systems: a sparse Cholesky factorization with a fill-reducing
+/// ordering (<see cref="SymbolicCholesky"/>) up to <see cref="IterativeThreshold"/> unknowns, conjugate gradients
+/// preconditioned by smoothed-aggregation multigrid (<see cref="AmgCgSolver"/>) above it.
 /// </summary>
 internal static class SpdSolver
 {
+    /// <summary>Unknowns above which <see cref="Create(CscMatrix, CancellationToken)"/> uses multigrid-CG.</summary>
+    public static int IterativeThreshold { get; set; } = 200_000;
+
     /// <summary>Prepares a solver for <paramref name="a"/> (full symmetric storage).</summary>
-    public static ISpdSolver Create(CscMatrix a, CancellationToken cancellationToken = default) => new JacobiCg(a, cancellationToken);
+    public static ISpdSolver Create(CscMatrix a, CancellationToken cancellationToken = default)
+        => Create(a, null, cancellationToken);
 
-    private sealed class JacobiCg(CscMatrix a, CancellationToken ct) : ISpdSolver
+    /// <summary>Prepares a solver, optionally with node coordinates for the ordering.</summary>
+    public static ISpdSolver Create(CscMatrix a, double[]? coordinates, CancellationToken cancellationToken = default)
+        => a.N > IterativeThreshold
+            ? AmgCgSolver.Create(a, 1e-11, cancellationToken)
+            : CreateDirect(a, cancellationToken, coordinates);
+
+    /// <summary>Sparse Cholesky regardless of size.</summary>
+    public static ISpdSolver CreateDirect(CscMatrix a, CancellationToken cancellationToken = default, double[]? coordinates = null)
     {
-        public void Solve(ReadOnlySpan<double> b, Span<double> x)
-        {
-            int n = a.N;
-            var d = new double[n];
-            for (int c = 0; c < n; c++)
-                for (int p = a.ColPtr[c]; p < a.ColPtr[c + 1]; p++) if (a.RowIdx[p] == c) d[c] = a.Values[p];
-            var r = b.ToArray(); var z = new double[n]; var pv = new double[n]; var q = new double[n];
-            x.Clear();
-            double nb = Math.Sqrt(r.Sum(v => v * v));
-            if (nb == 0) return;
-            for (int i = 0; i < n; i++) { z[i] = r[i] / d[i]; pv[i] = z[i]; }
-            double rz = Dot(r, z);
-            for (int it = 0; it < 20 * n + 100; it++)
-            {
-                if ((it & 63) == 0) ct.ThrowIfCancellationRequested();
-                a.Multiply(pv, q);
-                double alpha = rz / Dot(pv, q);
-                double rr = 0;
-                for (int i = 0; i < n; i++) { x[i] += alpha * pv[i]; r[i] -= alpha * q[i]; rr += r[i] * r[i]; }
-                if (Math.Sqrt(rr) <= 1e-13 * nb) return;
-                for (int i = 0; i < n; i++) z[i] = r[i] / d[i];
-                double rz2 = Dot(r, z), beta = rz2 / rz; rz = rz2;
-                for (int i = 0; i < n; i++) pv[i] = z[i] + beta * pv[i];
-            }
-        }
-
-        private static double Dot(double[] u, double[] v) { double s = 0; for (int i = 0; i < u.Length; i++) s += u[i] * v[i]; return s; }
+        var s = SymbolicCholesky.Analyze(a, FillOrdering.Auto, coordinates, cancellationToken);
+        return Factorize(s, a, cancellationToken);
     }
+
+    /// <summary>Numeric factorization reusing a symbolic analysis of the same pattern.</summary>
+    public static ISpdSolver Factorize(SymbolicCholesky symbolic, CscMatrix a, CancellationToken cancellationToken = default)
+        => symbolic.Flops / Math.Max(1, symbolic.NonZerosL) < SupernodalFlopsPerNonzero
+            ? SimplicialCholesky.Factorize(symbolic, a, cancellationToken)
+            : SupernodalCholesky.Factorize(symbolic, a, cancellationToken);
+
+    /// <summary>
+    /// flops / nnz(L) below which the simplicial factorization is used (a common rule of thumb for choosing, about 40;
+    /// see the solver notes).
+    /// </summary>
+    public const double SupernodalFlopsPerNonzero = 40;
 }

@@ -1,0 +1,48 @@
+using SectionTwist.Import;
+using SectionTwist.Torsion;
+using SectionTwist.Units;
+
+namespace SectionTwist.Cli;
+
+/// <summary><c>sectiontwist section SOURCE</c>: J, peak shear and area properties of one cross-section.</summary>
+internal sealed class SectionCommand : ICommand
+{
+    public string Name => "section";
+    public string Summary => "torsion constant J, peak shear per torque and area properties of a cross-section";
+    public string Usage => """
+        sectiontwist section SOURCE [--accuracy REL] [--unit U] [--layer NAME] [--part N] [--json] [--plot FILE.png|svg] [--torque T]
+          SOURCE      a template spec such as circle:d=40, keyed:d=40, rect:b=60,h=20 or a drawing file (.dxf)
+          --accuracy  requested relative accuracy of J (default 1e-4)
+          --unit      length unit of the input (mm, cm, m, in, ft); specs default to mm
+          --layer     use only this drawing layer;  --part N  use only the N-th separate part (largest first)
+          --json      print one JSON object in SI base units (m, m^2, m^4, 1/m^3)
+          --plot      write a shear-stress contour picture (PNG or SVG)
+          --torque    torque in N*m for the plot colour bar in MPa (default: stress per unit torque)
+        """;
+
+    public int Run(Args args, CliContext ctx)
+    {
+        bool json = args.Flag("json");
+        double accuracy = args.Double("accuracy") ?? 1e-4;
+        if (!(accuracy > 0 && accuracy < 0.5)) throw new UsageException("--accuracy must lie between 0 and 0.5, e.g. 1e-4");
+        var unitText = args.Option("unit");
+        var srcOptions = new ProfileSourceOptions
+        {
+            Unit = unitText is null ? null : LengthUnit.Parse(unitText),
+            Layer = args.Option("layer"),
+            Part = args.Int("part"),
+            Accuracy = accuracy,
+            Notes = json ? null : note => ctx.Err.WriteLine($"note: {note}"),
+        };
+        string? plot = args.Option("plot");
+        double? torque = args.Double("torque");
+        if (args.Positional.Count != 1) throw new UsageException(args.Positional.Count == 0 ? "give one SOURCE (a template spec or a .dxf file)" : $"give one SOURCE, not {args.Positional.Count}");
+        args.EnsureAllUsed();
+        var profile = ProfileSources.Load(args.Positional[0], srcOptions);
+        var result = SectionAnalyzer.Analyze(profile, new AnalysisOptions { Accuracy = accuracy });
+        if (plot is not null) SectionPlotHook.Write(result, plot, torque);
+        if (json) ctx.Out.WriteLine(SectionJson.Write(result, args.Positional[0]));
+        else SectionText.Write(ctx.Out, result, args.Positional[0]);
+        return 0;
+    }
+}

@@ -1,0 +1,76 @@
+using System.Text;
+using System.Text.Json;
+using SectionTwist.Geometry;
+using SectionTwist.Torsion;
+
+namespace SectionTwist.Cli;
+
+/// <summary>The <c>--json</c> object for one section, in SI base units (m, m^2, m^4, 1/m^3); non-finite numbers are null.</summary>
+internal static class SectionJson
+{
+    public static string Write(SectionResult r, string source)
+    {
+        using var ms = new MemoryStream();
+        using (var w = new Utf8JsonWriter(ms, new JsonWriterOptions { Indented = true }))
+        {
+            w.WriteStartObject();
+            Write(w, r, source);
+            w.WriteEndObject();
+        }
+        return Encoding.UTF8.GetString(ms.ToArray());
+    }
+
+    /// <summary>Writes the section's properties into the current JSON object.</summary>
+    public static void Write(Utf8JsonWriter w, SectionResult r, string source)
+    {
+        var p = r.Properties;
+        w.WriteString("source", source);
+        w.WriteString("lengthUnit", r.LengthUnit.Symbol);
+        Num(w, "area", p.Area);
+        Pt(w, "centroid", p.Centroid);
+        Num(w, "ixx", p.Ixx);
+        Num(w, "iyy", p.Iyy);
+        Num(w, "ixy", p.Ixy);
+        Num(w, "i1", p.I1);
+        Num(w, "i2", p.I2);
+        Num(w, "principalAngleDeg", p.PrincipalAngle * 180 / Math.PI);
+        Num(w, "polarMoment", p.PolarMoment);
+        Num(w, "torsionConstant", r.TorsionConstant);
+        Num(w, "maxShearPerTorque", r.MaxShearPerTorque);
+        Pt(w, "maxShearLocation", r.MaxShearLocation);
+        w.WriteStartObject("estimatedRelativeError");
+        Num(w, "torsionConstant", r.EstimatedRelativeError.TorsionConstant);
+        Num(w, "maxShear", r.EstimatedRelativeError.MaxShear);
+        w.WriteEndObject();
+        w.WriteStartArray("regionTorsionConstants");
+        foreach (var j in r.RegionTorsionConstants) w.WriteNumberValue(j);
+        w.WriteEndArray();
+        w.WriteStartObject("mesh");
+        w.WriteNumber("nodes", r.Mesh.Nodes);
+        w.WriteNumber("elements", r.Mesh.Elements);
+        Num(w, "minAngleDeg", r.Mesh.MinAngleDeg);
+        w.WriteEndObject();
+        w.WriteStartArray("warnings");
+        foreach (var warn in r.Warnings)
+        {
+            w.WriteStartObject();
+            w.WriteString("code", warn.Code);
+            w.WriteString("message", warn.Message);
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+    }
+
+    internal static void Num(Utf8JsonWriter w, string name, double v)
+    {
+        if (double.IsFinite(v)) w.WriteNumber(name, v); else w.WriteNull(name);
+    }
+
+    private static void Pt(Utf8JsonWriter w, string name, Point2 p)
+    {
+        w.WriteStartObject(name);
+        Num(w, "x", p.X);
+        Num(w, "y", p.Y);
+        w.WriteEndObject();
+    }
+}

@@ -1,0 +1,159 @@
+namespace SectionTwist.Sparse;
+
+/// <summary>Fill-reducing ordering choice for <see cref="SymbolicCholesky.Analyze"/>.</summary>
+internal enum FillOrdering
+{
+    /// <summary>AMD below a size threshold, nested dissection above it.</summary>
+    Auto,
+    /// <summary>No reordering (for tests and comparisons).</summary>
+    Natural,
+    /// <summary>Approximate minimum degree (<see cref="Amd"/>).</summary>
+    Amd,
+    /// <summary>Nested dissection (<see cref="NestedDissection"/>).</summary>
+    NestedDissection,
+}
+
+/// <summary>
+/// Symbolic Cholesky analysis of a symmetric pattern, separate from the numeric factorization so that it can be reused
+/// for every matrix with the same pattern (Davis, Direct Methods for Sparse Linear Systems, SIAM 2006, ch. 4):
+/// fill-reducing ordering composed with the elimination-tree postorder, the permuted matrix pattern with a map back to
+/// the original entries, elimination tree, column counts and the supernode partition.
+/// </summary>
+internal sealed class SymbolicCholesky
+{
+    private SymbolicCholesky() { }
+
+    /// <summary>Order of the matrix.</summary>
+    public int N { get; private init; }
+
+    /// <summary>Perm[k] = original index of the k-th pivot.</summary>
+    public int[] Perm { get; private init; } = [];
+
+    /// <summary>Column pointers of the permuted matrix P A P' (full symmetric storage, rows sorted).</summary>
+    public int[] Fp { get; private init; } = [];
+
+    /// <summary>Row indices of the permuted matrix.</summary>
+    public int[] Fi { get; private init; } = [];
+
+    /// <summary>For each permuted entry, the index of the same entry in the original matrix's values.</summary>
+    public int[] ValueMap { get; private init; } = [];
+
+    /// <summary>Elimination tree of the permuted matrix (postordered: parent[j] &gt; j).</summary>
+    public int[] Parent { get; private init; } = [];
+
+    /// <summary>Column pointers of L (simplicial layout), from the column counts.</summary>
+    public long[] Lp { get; private init; } = [];
+
+    /// <summary>Nonzeros of L including the diagonal.</summary>
+    public long NonZerosL => Lp[N];
+
+    /// <summary>Floating-point operations of the factorization, sum of count^2 over columns.</summary>
+    public double Flops { get; private init; }
+
+    /// <summary>Nonzero count of the original matrix this analysis expects.</summary>
+    public int NonZerosA { get; private init; }
+
+    /// <summary>Supernode partition for the supernodal factorization (built on first use).</summary>
+    public Supernodes Supernodes => _supernodes ??= Supernodes.Build(this);
+
+    private Supernodes? _supernodes;
+
+    /// <summary>Size above which <see cref="FillOrdering.Auto"/> picks nested dissection.</summary>
+    public const int NestedDissectionThreshold = 60_000;
+
+    /// <summary>Analyses the pattern of <paramref name="a"/> (full symmetric storage, sorted rows).</summary>
+    /// <param name="a">The matrix; only its pattern is used.</param>
+    /// <param name="ordering">Fill-reducing ordering.</param>
+    /// <param name="coordinates">Optional node coordinates (x0, y0, x1, y1, ...) for geometric nested dissection.</param>
+    /// <param name="ct">Cancellation.</param>
+    public static SymbolicCholesky Analyze(CscMatrix a, FillOrdering ordering = FillOrdering.Auto,
+        double[]? coordinates = null, CancellationToken ct = default)
+    {
+        int n = a.N;
+        if (ordering == FillOrdering.Auto)
+            ordering = n > NestedDissectionThreshold ? FillOrdering.NestedDissection : FillOrdering.Amd;
+        int[] perm = ordering switch
+        {
+            FillOrdering.Natural => Identity(n),
+            FillOrdering.Amd => Amd.Order(a, ct),
+            _ => Amd.Order(a, ct), // ND_PLACEHOLDER
+        };
+        ct.ThrowIfCancellationRequested();
+        var (fp, fi, map) = Permute(a, perm);
+        var parent = EliminationTree.Parents(n, fp, fi);
+        var post = EliminationTree.Postorder(parent);
+        if (!IsIdentity(post))
+        {
+            var p2 = new int[n];
+            for (int k = 0; k < n; k++) p2[k] = perm[post[k]];
+            perm = p2;
+            (fp, fi, map) = Permute(a, perm);
+            parent = EliminationTree.Parents(n, fp, fi);
+            post = Identity(n);
+        }
+        ct.ThrowIfCancellationRequested();
+        var counts = EliminationTree.ColumnCounts(n, fp, fi, parent, post);
+        var lp = new long[n + 1];
+        double flops = 0;
+        for (int j = 0; j < n; j++) { lp[j + 1] = lp[j] + counts[j]; flops += (double)counts[j] * counts[j]; }
+        return new SymbolicCholesky
+        {
+            N = n, Perm = perm, Fp = fp, Fi = fi, ValueMap = map, Parent = parent, Lp = lp, Flops = flops,
+            NonZerosA = a.NonZeros,
+        };
+    }
+
+    /// <summary>Values of P A P' in the layout of <see cref="Fp"/>/<see cref="Fi"/>.</summary>
+    public double[] PermutedValues(CscMatrix a)
+    {
+        if (a.N != N || a.NonZeros != NonZerosA)
+            throw new ArgumentException("matrix pattern differs from the analysed pattern", nameof(a));
+        var fx = new double[ValueMap.Length];
+        var av = a.Values;
+        for (int q = 0; q < fx.Length; q++) fx[q] = av[ValueMap[q]];
+        return fx;
+    }
+
+    /// <summary>Builds the pattern of P A P' with rows sorted, by scattering then transposing (Davis sec. 2.5).</summary>
+    private static (int[] Fp, int[] Fi, int[] Map) Permute(CscMatrix a, int[] perm)
+    {
+        int n = a.N, nz = a.NonZeros;
+        var pinv = new int[n];
+        for (int k = 0; k < n; k++) pinv[perm[k]] = k;
+        // G(:, j) = A(perm, perm[j]) with rows relabelled; then F = G' has sorted rows (G symmetric so F = P A P').
+        var count = new int[n + 1];
+        for (int j = 0; j < n; j++)
+        {
+            int c = perm[j];
+            for (int p = a.ColPtr[c]; p < a.ColPtr[c + 1]; p++) count[pinv[a.RowIdx[p]] + 1]++;
+        }
+        for (int i = 0; i < n; i++) count[i + 1] += count[i];
+        var fp = (int[])count.Clone();
+        var fi = new int[nz];
+        var map = new int[nz];
+        for (int j = 0; j < n; j++)
+        {
+            int c = perm[j];
+            for (int p = a.ColPtr[c]; p < a.ColPtr[c + 1]; p++)
+            {
+                int q = count[pinv[a.RowIdx[p]]]++;
+                fi[q] = j;
+                map[q] = p;
+            }
+        }
+        return (fp, fi, map);
+    }
+
+    private static int[] Identity(int n)
+    {
+        var p = new int[n];
+        for (int i = 0; i < n; i++) p[i] = i;
+        return p;
+    }
+
+    private static bool IsIdentity(int[] p)
+    {
+        for (int i = 0; i < p.Length; i++) if (p[i] != i) return false;
+        return true;
+    }
+}

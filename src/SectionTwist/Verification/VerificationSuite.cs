@@ -1,0 +1,89 @@
+using SectionTwist.Geometry;
+using SectionTwist.Torsion;
+using SectionTwist.Units;
+
+namespace SectionTwist.Verification;
+
+/// <summary>
+/// The built-in verification cases that qualify an installation: exact elasticity solutions (Timoshenko and Goodier,
+/// Theory of Elasticity, 3rd ed., ch. 10) and the rectangle series (same book, sec. 109; Roark's Formulas for Stress and
+/// Strain, 7th ed., Table 10.1), each with the tolerance the default accuracy promises.
+/// </summary>
+public static class VerificationSuite
+{
+    private const string Tg = "Timoshenko & Goodier, Theory of Elasticity, ch. 10 (exact)";
+    private const string Series = "Timoshenko & Goodier sec. 109 series (Roark 7th ed. Table 10.1)";
+
+    /// <summary>All cases, sized as a 40 mm class shaft.</summary>
+    public static IReadOnlyList<VerificationCase> Cases { get; } = BuildCases();
+
+    private static List<VerificationCase> BuildCases()
+    {
+        var mm = LengthUnit.Millimetre;
+        var list = new List<VerificationCase>();
+        void Add(string name, Func<Profile> build, double j, double tauPerT, double tolJ = 1e-4, double tolT = 5e-3, string src = Tg)
+        {
+            list.Add(new VerificationCase(name + " J", VerifiedQuantity.TorsionConstant, j, tolJ, src, build));
+            list.Add(new VerificationCase(name + " peak shear", VerifiedQuantity.MaxShear, tauPerT, tolT, src, build));
+        }
+        double d = 0.040;
+        Add("solid circle d=40mm", () => Make(mm, LoopBuilder.Circle(default, d / 2)), Math.PI * Math.Pow(d, 4) / 32, 16 / (Math.PI * d * d * d));
+        double D = 0.050, di = 0.036;
+        Add("hollow circle 50/36mm", () => Make(mm, LoopBuilder.Circle(default, D / 2), LoopBuilder.Circle(default, di / 2)),
+            Math.PI * (Math.Pow(D, 4) - Math.Pow(di, 4)) / 32, 16 * D / (Math.PI * (Math.Pow(D, 4) - Math.Pow(di, 4))));
+        foreach (double ratio in new[] { 2.0, 4.0 })
+        {
+            double a = 0.020, b = a / ratio;
+            Add($"ellipse {ratio}:1 a=20mm", () => Make(mm, new Loop([EllipticalArcSegment.Full(default, a, b)])),
+                Math.PI * Math.Pow(a, 3) * Math.Pow(b, 3) / (a * a + b * b), 2 / (Math.PI * a * b * b));
+        }
+        double s = 0.030;
+        double hgt = s * Math.Sqrt(3) / 2;
+        Add("equilateral triangle a=30mm", () => Make(mm, LoopBuilder.Polygon([new(-s / 2, 0), new(s / 2, 0), new(0, hgt)])),
+            Math.Sqrt(3) * Math.Pow(s, 4) / 80, 20 / (s * s * s));
+        foreach (double ratio in new[] { 1.0, 2.0, 4.0, 10.0 })
+        {
+            double bb = 0.010, aa = ratio * bb;
+            var (beta, alpha) = RectangleSeries(aa, bb);
+            Add($"rectangle {ratio}:1 b=10mm", () => Make(mm, LoopBuilder.Polygon([new(0, 0), new(aa, 0), new(aa, bb), new(0, bb)])),
+                beta * aa * bb * bb * bb, 1 / (alpha * aa * bb * bb), src: Series);
+        }
+        return list;
+    }
+
+    private static Profile Make(LengthUnit unit, Loop outer, params Loop[] holes) => new([new Region(outer, holes)], unit, "verification");
+
+    /// <summary>
+    /// Rectangle a x b series (Timoshenko and Goodier, sec. 109): J = beta a b^3, tau_max = T / (alpha a b^2).
+    /// </summary>
+    public static (double Beta, double Alpha) RectangleSeries(double a, double b)
+    {
+        if (a < b) (a, b) = (b, a);
+        double sumT = 0, sumK = 0;
+        for (int n = 1; n < 2001; n += 2)
+        {
+            double arg = n * Math.PI * a / (2 * b);
+            sumT += Math.Tanh(arg) / Math.Pow(n, 5);
+            if (arg < 700) sumK += 1 / (n * (double)n * Math.Cosh(arg));
+        }
+        double beta = (1.0 / 3) * (1 - 192 / Math.Pow(Math.PI, 5) * (b / a) * sumT);
+        double k = 1 - 8 / (Math.PI * Math.PI) * sumK;
+        return (beta, beta / k);
+    }
+
+    /// <summary>Runs every case at the given accuracy (default 1e-4); cases sharing a profile share one analysis.</summary>
+    public static IReadOnlyList<VerificationOutcome> Run(AnalysisOptions? options = null, CancellationToken cancellationToken = default)
+    {
+        var results = new Dictionary<Func<Profile>, SectionResult>();
+        var outcomes = new List<VerificationOutcome>();
+        foreach (var c in Cases)
+        {
+            if (!results.TryGetValue(c.Build, out var r))
+                results[c.Build] = r = SectionAnalyzer.Analyze(c.Build(), options, cancellationToken);
+            double v = c.Quantity == VerifiedQuantity.TorsionConstant ? r.TorsionConstant : r.MaxShearPerTorque;
+            double est = c.Quantity == VerifiedQuantity.TorsionConstant ? r.EstimatedRelativeError.TorsionConstant : r.EstimatedRelativeError.MaxShear;
+            outcomes.Add(new VerificationOutcome(c, v, Math.Abs(v - c.Reference) / Math.Abs(c.Reference), est));
+        }
+        return outcomes;
+    }
+}
