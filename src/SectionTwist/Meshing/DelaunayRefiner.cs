@@ -36,9 +36,6 @@ internal sealed partial class DelaunayRefiner
     private int[] _vCurve = new int[64], _vCorner = new int[64];
     private double[] _vT = new double[64];
 
-    /// <summary>Vertices that could not be moved onto their curve (left on the chord).</summary>
-    public int OffCurveVertices { get; private set; }
-
     public DelaunayRefiner(Profile profile, MeshOptions options, CancellationToken ct)
     {
         _profile = profile; _opt = options; _ct = ct;
