@@ -23,7 +23,7 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
     private SectionResult Run()
     {
         double acc = Math.Clamp(options.Accuracy, 1e-9, 0.1);
-        double shearTarget = Math.Max(10 * acc, 1e-4);
+        double shearTarget = Math.Clamp(50 * acc, 1e-3, 5e-3);
         var props = profile.Properties;
         var warnings = new List<AnalysisWarning>();
         var corners = CornerAnalysis.Corners(profile);
@@ -76,7 +76,6 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
             }
             // Next pass: a size field from the Zienkiewicz-Zhu indicators of the coarse solution, aimed so that the next
             // coarse mesh has a J error of about 2^p times the target (the refined solve then meets the target).
-            if (!shearOk) h *= Math.Clamp(0.8 * Math.Pow(shearTarget / estT, 1 / ShearOrder), 0.25, 0.7);
             var coarseField = FieldRecovery.Build(coarse);
             var eta2 = AdaptiveSizing.Indicators(coarse, coarseField);
             // Richardson gives the coarse error E_r = |Jf - Jc| 2^p / (2^p - 1); the indicators give E_zz. Ask the
@@ -85,7 +84,9 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
             double wanted = estJ > acc ? 0.5 * acc * (Math.Pow(2, p) - 1) : coarseErr;
             double zz = eta2.Sum() / coarse.J;
             double coarseTarget = coarseErr > 0 && zz > 0 ? zz * Math.Min(1, wanted / coarseErr) : acc;
-            sizeField = AdaptiveSizing.SizeField(coarseMesh, eta2, coarse.J, coarseTarget, h);
+            // Peak shear not resolved yet: smaller boundary elements wherever the boundary shear is within 3 % of the peak.
+            var peaks = shearOk ? [] : AdaptiveSizing.PeakSources(coarse, Math.Clamp(0.8 * Math.Pow(shearTarget / estT, 1 / ShearOrder), 0.25, 0.7));
+            sizeField = AdaptiveSizing.SizeField(coarseMesh, eta2, coarse.J, coarseTarget, h, peaks);
             Report("mesh", f0 + span);
         }
         ct.ThrowIfCancellationRequested();
