@@ -113,7 +113,8 @@ internal sealed partial class OutlineAssembler
     {
         string F(double v) => v.ToString("G6", CultureInfo.InvariantCulture);
         string P(Point2 p) => $"({F(p.X)}, {F(p.Y)})";
-        var branch = odd.FirstOrDefault(n => at[n].Count >= 3, -1);
+        int branch = -1;
+        foreach (var kv in at) if (kv.Value.Count >= 3 && (branch < 0 || kv.Value.Count % 2 == 1)) branch = kv.Key;
         if (branch >= 0)
         {
             var who = string.Join(", ", at[branch].Take(4).Select(p => p.Source));
