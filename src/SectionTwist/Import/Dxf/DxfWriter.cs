@@ -82,7 +82,7 @@ internal sealed partial class DxfWriter
     private void Loop(Loop loop, double chord)
     {
         string layer = _o.ProfileLayer;
-        if (_r2000 && loop.Segments.All(s => s is not EllipticalArcSegment))
+        if (_r2000 && loop.Segments.Count > 1 && loop.Segments.All(s => s is not EllipticalArcSegment))
         {
             var verts = new List<(Point2 P, double Bulge)>();
             foreach (var s in loop.Segments)
