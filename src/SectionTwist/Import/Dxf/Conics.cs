@@ -28,6 +28,8 @@ internal static class Conics
         double rot = Math.Atan2(a.Y, a.X);
         var e2 = new Point2(-Math.Sin(rot), Math.Cos(rot));
         double sa = a.Length, sb = b.Length;
+        if (!(Math.Min(sa, sb) >= 1e-3 * Math.Max(sa, sb)) || !double.IsFinite(sa + sb + c.X + c.Y))
+            throw new SectionTwistException("dxf-degenerate", $"an arc becomes an ellipse with axes {sa:G3} and {sb:G3} (axis ratio below 1:1000: extreme insert scale or a tilted extrusion); fix the insert or the extrusion");
         // P = c + cos(u - t0) A + sin(u - t0) B; B = +-|B| e2
         return Point2.Dot(b, e2) >= 0
             ? new EllipticalArcSegment(c, sa, sb, rot, u0 - t0, sweep)

@@ -64,6 +64,15 @@ internal sealed partial class DxfGeometryBuilder(DxfDocument doc, string? layerF
         }
         if (layerFilter is not null && !layer.Equals(layerFilter, StringComparison.OrdinalIgnoreCase)) return;
         string src = e.Describe() + where;
+        try { EmitCurve(e, m, src, layer); }
+        catch (SectionTwistException x) when (x.Code is "bad-arc" or "bad-ellipse" or "dxf-degenerate" or "bad-spline")
+        {
+            throw new SectionTwistException(x.Code, $"{File}: {src}: {x.Message}");
+        }
+    }
+
+    private void EmitCurve(DxfEntity e, Affine2 m, string src, string layer)
+    {
         switch (e.Type)
         {
             case "LINE": Line(e, m, src, layer); break;
@@ -79,6 +88,9 @@ internal sealed partial class DxfGeometryBuilder(DxfDocument doc, string? layerF
     {
         if (Curves.Count >= MaxCurves)
             throw new SectionTwistException("dxf-too-large", $"{File}: the drawing expands to more than {MaxCurves} outline pieces (huge block arrays?); export only the section outline");
+        var b = s.Bounds;
+        if (!double.IsFinite(b.MinX + b.MaxX + b.MinY + b.MaxY) || Math.Max(Math.Abs(b.MinX), Math.Max(Math.Abs(b.MaxX), Math.Max(Math.Abs(b.MinY), Math.Abs(b.MaxY)))) > 1e30)
+            throw new SectionTwistException("dxf-degenerate", $"{File}: {src} lies beyond 1e30 drawing units after block scaling; check the insert scales");
         Curves.Add(new SourcedCurve(s, null, src, layer));
     }
 
@@ -187,7 +199,7 @@ internal sealed partial class DxfGeometryBuilder(DxfDocument doc, string? layerF
         double nl = Math.Sqrt(nx * nx + ny * ny + nz * nz);
         if (!(nl > 0)) { nx = 0; ny = 0; nz = 1; nl = 1; }
         nz /= nl;
-        if (major.Length == 0 || !(ratio > 0)) { Warnings.Add($"{src}: degenerate ellipse ignored"); return; }
+        if (major.Length == 0 || !(ratio >= 1e-3) || ratio > 1e3) { Warnings.Add($"{src}: degenerate ellipse (axis ratio {ratio}) ignored"); return; }
         // minor = ratio * (N x major); only its XY part matters (major has no Z for a planar ellipse)
         var minor = new Point2(-nz * major.Y, nz * major.X) * ratio;
         double s = e.Dbl(41, 0), t = e.Dbl(42, 2 * Math.PI);

@@ -14,7 +14,7 @@ internal readonly record struct DxfPair(int Code, string Value, int Line, double
         double v = HasNumber ? Number : double.NaN;
         if (HasNumber || double.TryParse(Value, NumberStyles.Float, CultureInfo.InvariantCulture, out v))
         {
-            if (double.IsFinite(v) && Math.Abs(v) <= 1e20) return v;
+            if (double.IsFinite(v) && Math.Abs(v) <= 1e20) return Math.Abs(v) < 1e-200 ? 0 : v; // denormal junk reads as zero
             throw new SectionTwistException("bad-dxf-number",
                 $"{file}:{Line}: group code {Code} holds {Trunc(Value)}, outside the range of drawing coordinates (|x| <= 1e20); the file is damaged");
         }
