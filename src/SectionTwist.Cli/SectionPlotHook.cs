@@ -1,13 +1,12 @@
+using SectionTwist.Rendering.Section;
 using SectionTwist.Torsion;
 
 namespace SectionTwist.Cli;
 
-/// <summary>Writes the section picture for <c>--plot</c> (wired to the renderer).</summary>
+/// <summary>Writes the section picture for <c>--plot</c> (PNG or SVG by the file extension).</summary>
 internal static class SectionPlotHook
 {
-    public static void Write(SectionResult result, string path, double? torque)
-    {
-        _ = (result, torque);
-        throw new UsageException($"--plot {path}: pictures are not available in this build");
-    }
+    public static void Write(SectionResult result, string path, double? torque) =>
+        SectionPicture.Save(SectionPlotData.From(result, $"{Path.GetFileNameWithoutExtension(path)}: shear stress magnitude"), path,
+            new SectionPlotOptions { Torque = torque });
 }

@@ -53,6 +53,11 @@ internal sealed class SymbolicCholesky
     /// <summary>Nonzero count of the original matrix this analysis expects.</summary>
     public int NonZerosA { get; private init; }
 
+    /// <summary>Supernode partition for the supernodal factorization (built on first use).</summary>
+    public Supernodes Supernodes => _supernodes ??= Supernodes.Build(this);
+
+    private Supernodes? _supernodes;
+
     /// <summary>Size above which <see cref="FillOrdering.Auto"/> picks nested dissection.</summary>
     public const int NestedDissectionThreshold = 60_000;
 
@@ -71,7 +76,7 @@ internal sealed class SymbolicCholesky
         {
             FillOrdering.Natural => Identity(n),
             FillOrdering.Amd => Amd.Order(a, ct),
-            _ => Amd.Order(a, ct), // ND_PLACEHOLDER
+            _ => NestedDissection.Order(a, coordinates, ct),
         };
         ct.ThrowIfCancellationRequested();
         var (fp, fi, map) = Permute(a, perm);

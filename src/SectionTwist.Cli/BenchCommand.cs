@@ -1,0 +1,74 @@
+using System.Globalization;
+using SectionTwist.Sparse;
+
+namespace SectionTwist.Cli;
+
+/// <summary>
+/// <c>sectiontwist bench</c>: quick timings of the sparse solver on the fixed reference problem (P2 Laplacian on the
+/// unit square). The Math.NET baseline and BenchmarkDotNet runs live in tests/SectionTwist.Benchmarks so the shipped
+/// tool carries no benchmark-only dependency.
+/// </summary>
+internal sealed class BenchCommand : ICommand
+{
+    public string Name => "bench";
+
+    public string Summary => "time the sparse solver on the reference P2 Laplacian (1e4 to 1e6 unknowns)";
+
+    public string Usage => """
+        sectiontwist bench [--m 50,158,500] [--solver auto|direct|amg]
+          Assembles the P2 Laplacian on the unit square (m x m squares, two triangles each, Dirichlet boundary
+          removed: (2m-1)^2 unknowns), solves A x = A 1 and prints assembly, set-up, factor and solve times, the
+          relative residual, allocated bytes and the peak working set, then the growth exponent between sizes.
+          --m       grid sizes, comma separated (default 50,158,500: 9,801 / 99,225 / 998,001 unknowns)
+          --solver  auto (Cholesky up to 2e5 unknowns, multigrid-CG above), direct or amg (default auto)
+        """;
+
+    public int Run(Args args, CliContext context)
+    {
+        string ms = args.Option("m") ?? "50,158,500";
+        string solverName = args.Option("solver") ?? "auto";
+        args.EnsureAllUsed();
+        var solver = solverName switch
+        {
+            "auto" => BenchSolver.Auto,
+            "direct" => BenchSolver.Direct,
+            "amg" => BenchSolver.AmgCg,
+            _ => throw new UsageException($"--solver: '{solverName}' is not one of auto, direct, amg"),
+        };
+        var sizes = new List<int>();
+        foreach (var part in ms.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries))
+        {
+            if (!int.TryParse(part, NumberStyles.Integer, CultureInfo.InvariantCulture, out int m) || m < 2 || m > 1200)
+                throw new UsageException($"--m: '{part}' is not a grid size between 2 and 1200");
+            sizes.Add(m);
+        }
+        var w = context.Out;
+        var inv = CultureInfo.InvariantCulture;
+        w.WriteLine(string.Create(inv, $"reference problem: P2 Laplacian, unit square, {Environment.ProcessorCount} cores, {System.Numerics.Vector<double>.Count}-wide SIMD"));
+        w.WriteLine("       m   unknowns        nnz  method     assembly    set-up    factor     solve  set-up+solve  rel.resid  alloc MB  peak WS MB");
+        ReferenceBenchmark.Run(12, BenchSolver.Direct); // compile the kernels before timing
+        ReferenceBenchmark.Run(40, BenchSolver.AmgCg);
+        var results = new List<BenchResult>();
+        foreach (int m in sizes)
+        {
+            var r = ReferenceBenchmark.Run(m, solver);
+            results.Add(r);
+            w.WriteLine(string.Create(inv,
+                $"{r.M,8} {r.Unknowns,10:N0} {r.NonZeros,10:N0}  {r.Method,-8} {r.Assembly,9:F3}s {r.Setup,8:F3}s {r.Factor,8:F3}s {r.Solve,8:F3}s {r.SolveTotal,12:F3}s  {r.RelativeResidual,9:E1} {r.AllocatedBytes / 1048576.0,9:F0} {r.PeakWorkingSet / 1048576.0,11:F0}"));
+            w.WriteLine($"         {r.Detail}");
+        }
+        for (int i = 1; i < results.Count; i++)
+        {
+            var (p, q) = (results[i - 1], results[i]);
+            double e = Math.Log(q.SolveTotal / p.SolveTotal) / Math.Log((double)q.Unknowns / p.Unknowns);
+            w.WriteLine(string.Create(inv, $"growth {p.Unknowns:N0} -> {q.Unknowns:N0} unknowns: time ~ N^{e:F2}"));
+        }
+        if (results.Count > 2)
+        {
+            var (p, q) = (results[0], results[^1]);
+            double e = Math.Log(q.SolveTotal / p.SolveTotal) / Math.Log((double)q.Unknowns / p.Unknowns);
+            w.WriteLine(string.Create(inv, $"growth {p.Unknowns:N0} -> {q.Unknowns:N0} unknowns: time ~ N^{e:F2}"));
+        }
+        return 0;
+    }
+}

@@ -1,0 +1,89 @@
+using System.Text.Json;
+using SectionTwist.Profiles;
+
+namespace SectionTwist.Cli;
+
+/// <summary><c>sectiontwist templates [NAME] [--json]</c>: lists the parametric profiles with their parameters, defaults and units.</summary>
+internal sealed class TemplatesCommand : ICommand
+{
+    public string Name => "templates";
+
+    public string Summary => "list the parametric profiles (keyed, spline, shs, ...) with their parameters";
+
+    public string Usage =>
+        "sectiontwist templates [NAME] [--json]\n" +
+        "  Lists every template (or one) with its keys, defaults and units. A spec is NAME:key=value,key=value;\n" +
+        "  lengths take a unit (40mm, 1.5in, 0.04m) or the default unit (mm, or --unit where a command has it);\n" +
+        "  angles are degrees unless written with rad; counts are whole numbers.";
+
+    public int Run(Args args, CliContext context)
+    {
+        bool json = args.Flag("json");
+        args.EnsureAllUsed();
+        if (args.Positional.Count > 1) throw new UsageException("give at most one template name");
+        IReadOnlyList<TemplateInfo> list = ProfileTemplates.All;
+        if (args.Positional.Count == 1)
+        {
+            var one = ProfileTemplates.Find(args.Positional[0]) ?? throw new SectionTwistException("unknown-template",
+                $"unknown template '{args.Positional[0]}'; known templates: {string.Join(", ", ProfileTemplates.All.Select(t => t.Name))}");
+            list = [one];
+        }
+        if (json) WriteJson(list, context.Out);
+        else WriteText(list, context.Out);
+        return 0;
+    }
+
+    private static void WriteText(IReadOnlyList<TemplateInfo> list, TextWriter w)
+    {
+        foreach (var t in list)
+        {
+            w.WriteLine($"{t.Name}{(t.Aliases.Count > 0 ? " (also " + string.Join(", ", t.Aliases) + ")" : "")}: {t.Summary}");
+            w.WriteLine($"  example: {t.Example}");
+            w.WriteLine($"  outer size for J/J_round: {t.OuterSize}");
+            foreach (var p in t.Parameters)
+                w.WriteLine($"  {p.Key,-7} {p.UnitHint,-12} {(p.IsRequired ? "required" : "default " + p.Default),-26} {p.Description}");
+            w.WriteLine();
+        }
+        w.WriteLine("Lengths: a bare number is in mm unless --unit says otherwise; write units per value: d=40mm, B=3in, t=0.25in.");
+    }
+
+    private static void WriteJson(IReadOnlyList<TemplateInfo> list, TextWriter w)
+    {
+        using var stream = new MemoryStream();
+        using (var j = new Utf8JsonWriter(stream, new JsonWriterOptions { Indented = true }))
+        {
+            j.WriteStartArray();
+            foreach (var t in list)
+            {
+                j.WriteStartObject();
+                j.WriteString("name", t.Name);
+                j.WriteStartArray("aliases");
+                foreach (var a in t.Aliases) j.WriteStringValue(a);
+                j.WriteEndArray();
+                j.WriteString("summary", t.Summary);
+                j.WriteString("example", t.Example);
+                j.WriteString("outerSize", t.OuterSize);
+                j.WriteStartArray("parameters");
+                foreach (var p in t.Parameters)
+                {
+                    j.WriteStartObject();
+                    j.WriteString("key", p.Key);
+                    j.WriteString("kind", p.Kind.ToString().ToLowerInvariant());
+                    j.WriteString("description", p.Description);
+                    if (p.Default is null) j.WriteNull("default"); else j.WriteString("default", p.Default);
+                    if (p.Choices.Count > 0)
+                    {
+                        j.WriteStartArray("choices");
+                        foreach (var c in p.Choices) j.WriteStringValue(c);
+                        j.WriteEndArray();
+                    }
+                    j.WriteEndObject();
+                }
+                j.WriteEndArray();
+                j.WriteEndObject();
+            }
+            j.WriteEndArray();
+        }
+        w.WriteLine(System.Text.Encoding.UTF8.GetString(stream.ToArray()));
+    }
+}

@@ -1,0 +1,34 @@
+namespace SectionTwist.Rendering.Report;
+
+/// <summary>Default wording of the method, assumptions and caution sections.</summary>
+internal static class ReportText
+{
+    public static readonly IReadOnlyList<string> DefaultMethod =
+    [
+        "Each cross-section is solved for Saint-Venant torsion with the Prandtl stress function φ: ∇²φ = −2Gθ inside the section, " +
+        "φ = 0 on the outer boundary and a constant on each hole chosen so that the warping is single-valued " +
+        "(S. P. Timoshenko and J. N. Goodier, Theory of Elasticity, 3rd ed., McGraw-Hill 1970, sections 104–116).",
+        "The field equation is solved by the finite-element method with 6-node (quadratic) triangles with curved edges on arcs " +
+        "(O. C. Zienkiewicz, R. L. Taylor and J. Z. Zhu, The Finite Element Method: Its Basis and Fundamentals, 7th ed., " +
+        "Butterworth-Heinemann 2013). The torsion constant is J = (2/Gθ)∫φ dA (plus the hole terms); the shear stress is the " +
+        "rotated gradient of φ, τ = T·|∇φ|/(GθJ), recovered at the nodes (smoothed boundary flux on the outline); the peak is " +
+        "the largest recovered value.",
+        "The shaft is a chain of segments between stations. Each segment has the torsional stiffness 1/∫dx/(GJ); the station " +
+        "rotations follow from the stiffness equations with the fixed supports as constraints, which also covers statically " +
+        "indeterminate shafts. The internal torque, the twist of each segment and the peak shear τ = |T|·(τ/T)section follow.",
+    ];
+
+    public static readonly IReadOnlyList<string> DefaultAssumptions =
+    [
+        "Linear elastic, isotropic, homogeneous material; small rotations.",
+        "Saint-Venant (free-warping) torsion of prismatic bars: warping restraint near supports and load points is not modelled.",
+        "Each segment carries the section's stiffness over its full length; the transitions between segments are abrupt.",
+        "Stress concentrations at shoulders, keyseat ends, fillets, holes and grooves are not included in the peak shear.",
+        "No bending, axial force or dynamic effects (torsional vibration, fatigue) are included.",
+    ];
+
+    public const string DefaultCaution =
+        "Caution: these results are for linear elastic Saint-Venant torsion. Stress concentrations at shoulders, keyseat ends " +
+        "and fillets are not included, nor are bending, fatigue or dynamic loads. Verify the design against the applicable " +
+        "local codes and standards and have it checked under licensed engineering practice before use.";
+}

@@ -1,0 +1,235 @@
+using SectionTwist.Rendering.Drawing;
+using SkiaSharp;
+
+namespace SectionTwist.Rendering.Section;
+
+/// <summary>
+/// Draws a cross-section: filled bands of the shear-stress magnitude (viridis colours, linear interpolation of the nodal
+/// values on the linear sub-triangles), contour lines of the Prandtl stress function, the outline, optionally the mesh,
+/// the peak marker with its value, axes in the profile's length unit, a scale bar and a labelled colour bar.
+/// </summary>
+public static class SectionPicture
+{
+    /// <summary>Draws the picture and returns the PNG or SVG file bytes.</summary>
+    public static byte[] Render(SectionPlotData data, ImageFormat format, SectionPlotOptions? options = null)
+    {
+        ArgumentNullException.ThrowIfNull(data);
+        options ??= new SectionPlotOptions();
+        Validate(options);
+        var layout = SectionLayout.Create(data, options.Width, options.Height);
+        return CanvasTarget.Render(format, options.Width, options.Height, c => Draw(c, data, options, layout));
+    }
+
+    /// <summary>Writes the picture to <paramref name="path"/>; the format follows the extension (.png or .svg).</summary>
+    public static void Save(SectionPlotData data, string path, SectionPlotOptions? options = null)
+    {
+        var bytes = Render(data, ImageFormats.FromPath(path), options);
+        AtomicFile.Write(path, s => s.Write(bytes));
+    }
+
+    /// <summary>The layout the picture uses (for tests and for placing annotations).</summary>
+    internal static SectionLayout Layout(SectionPlotData data, SectionPlotOptions options) =>
+        SectionLayout.Create(data, options.Width, options.Height);
+
+    /// <summary>The stress scale: display value = per-unit-torque value (1/m^3) times this; and the unit text.</summary>
+    internal static (double Factor, string Unit, string Caption) StressScale(SectionPlotOptions options) =>
+        options.Torque is { } t
+            ? (t * 1e-6, "MPa", $"at T = {NiceScale.Sig(t / 1000.0, 4)} kN·m")
+            : (1e-3, "MPa", "per kN·m torque");
+
+    private static void Validate(SectionPlotOptions o)
+    {
+        if (o.Bands is < 2 or > 24)
+            throw new SectionTwistException("plot-bands", $"colour bands = {o.Bands}; use 2 to 24");
+        if (o.PhiLines is < 0 or > 50)
+            throw new SectionTwistException("plot-lines", $"stress-function lines = {o.PhiLines}; use 0 to 50");
+        if (o.Torque is { } t && !(double.IsFinite(t) && t != 0))
+            throw new SectionTwistException("plot-torque", "the plot torque must be a finite, non-zero number of N·m");
+    }
+
+    /// <summary>The value range of the colour bands in display units: 0 to the larger of the peak and the nodal maximum.</summary>
+    internal static double TopValue(SectionPlotData data, SectionPlotOptions options)
+    {
+        var f = data.Field;
+        double max = Math.Abs(data.PeakShearPerTorque);
+        for (int i = 0; i < f.X.Count; i++) max = Math.Max(max, f.ShearMagnitude(i));
+        double top = max * Math.Abs(StressScale(options).Factor);
+        return top > 0 ? top : 1;
+    }
+
+    /// <summary>Colour of band <paramref name="k"/> of <paramref name="bands"/> (band 0 at zero stress).</summary>
+    internal static SKColor BandColour(int k, int bands) => Viridis.Sample((k + 0.5) / bands);
+
+    private static void Draw(SKCanvas c, SectionPlotData data, SectionPlotOptions o, SectionLayout L)
+    {
+        var (factor, unit, caption) = StressScale(o);
+        double top = TopValue(data, o);
+        Ink.Label(c, data.Title, L.Plot.Left, 28, 17, Ink.Text);
+
+        SectionAxes.Draw(c, L, data.Unit);
+        c.Save();
+        c.ClipRect(L.Plot);
+        FillBands(c, data, L, o.Bands, top, Math.Abs(factor));
+        if (o.ShowMesh) DrawMesh(c, data, L);
+        if (o.PhiLines > 0) DrawPhiLines(c, data, L, o.PhiLines);
+        DrawOutline(c, data, L);
+        c.Restore();
+        SectionAxes.DrawScaleBar(c, L, data.Unit);
+        DrawPeak(c, data, L, Math.Abs(data.PeakShearPerTorque * factor), unit, o.Torque is null ? " per kN·m" : "");
+        DrawColourBar(c, L, o.Bands, top, unit, caption);
+    }
+
+    private static void FillBands(SKCanvas c, SectionPlotData data, SectionLayout L, int bands, double top, double factor)
+    {
+        var f = data.Field;
+        var tri = f.Triangles;
+        var paths = new SKPath[bands];
+        for (int k = 0; k < bands; k++) paths[k] = new SKPath { FillType = SKPathFillType.Winding };
+        Span<double> x = stackalloc double[3], y = stackalloc double[3], v = stackalloc double[3];
+        Span<double> px = stackalloc double[6], py = stackalloc double[6];
+        double width = top / bands;
+        for (int t = 0; t + 2 < tri.Count; t += 3)
+        {
+            double vmin = double.PositiveInfinity, vmax = double.NegativeInfinity;
+            for (int j = 0; j < 3; j++)
+            {
+                int n = tri[t + j];
+                var p = L.ToPixel(f.X[n], f.Y[n]);
+                x[j] = p.X; y[j] = p.Y; v[j] = f.ShearMagnitude(n) * factor;
+                vmin = Math.Min(vmin, v[j]); vmax = Math.Max(vmax, v[j]);
+            }
+            int k0 = Math.Clamp((int)Math.Floor(vmin / width), 0, bands - 1);
+            int k1 = Math.Clamp((int)Math.Floor(vmax / width), 0, bands - 1);
+            for (int k = k0; k <= k1; k++)
+            {
+                double lo = k == 0 ? double.NegativeInfinity : k * width;
+                double hi = k == bands - 1 ? double.PositiveInfinity : (k + 1) * width;
+                int m = k0 == k1 ? CopyTriangle(x, y, px, py) : ContourGeometry.ClipBand(x, y, v, lo, hi, px, py);
+                if (m < 3) continue;
+                paths[k].MoveTo((float)px[0], (float)py[0]);
+                for (int i = 1; i < m; i++) paths[k].LineTo((float)px[i], (float)py[i]);
+                paths[k].Close();
+            }
+        }
+        for (int k = 0; k < bands; k++)
+        {
+            // fill and a thin stroke of the same colour: hides antialiasing seams between neighbouring bands
+            using var paint = new SKPaint { Color = BandColour(k, bands), Style = SKPaintStyle.StrokeAndFill, StrokeWidth = 0.7f, IsAntialias = true, StrokeJoin = SKStrokeJoin.Round };
+            if (!paths[k].IsEmpty) c.DrawPath(paths[k], paint);
+            paths[k].Dispose();
+        }
+    }
+
+    private static int CopyTriangle(ReadOnlySpan<double> x, ReadOnlySpan<double> y, Span<double> px, Span<double> py)
+    {
+        for (int i = 0; i < 3; i++) { px[i] = x[i]; py[i] = y[i]; }
+        return 3;
+    }
+
+    private static void DrawMesh(SKCanvas c, SectionPlotData data, SectionLayout L)
+    {
+        var f = data.Field;
+        var ec = f.ElementCorners;
+        using var path = new SKPath();
+        for (int e = 0; e + 2 < ec.Count; e += 3)
+        {
+            var a = L.ToPixel(f.X[ec[e]], f.Y[ec[e]]);
+            path.MoveTo(a);
+            path.LineTo(L.ToPixel(f.X[ec[e + 1]], f.Y[ec[e + 1]]));
+            path.LineTo(L.ToPixel(f.X[ec[e + 2]], f.Y[ec[e + 2]]));
+            path.Close();
+        }
+        using var paint = Ink.Stroke(new SKColor(255, 255, 255, 110), 0.5f);
+        c.DrawPath(path, paint);
+    }
+
+    private static void DrawPhiLines(SKCanvas c, SectionPlotData data, SectionLayout L, int lines)
+    {
+        var f = data.Field;
+        double pmin = double.PositiveInfinity, pmax = double.NegativeInfinity;
+        for (int i = 0; i < f.Phi.Count; i++) { pmin = Math.Min(pmin, f.Phi[i]); pmax = Math.Max(pmax, f.Phi[i]); }
+        if (!(pmax > pmin)) return;
+        using var path = new SKPath();
+        Span<double> x = stackalloc double[3], y = stackalloc double[3], v = stackalloc double[3];
+        var tri = f.Triangles;
+        for (int t = 0; t + 2 < tri.Count; t += 3)
+        {
+            double vmin = double.PositiveInfinity, vmax = double.NegativeInfinity;
+            for (int j = 0; j < 3; j++)
+            {
+                int n = tri[t + j];
+                var p = L.ToPixel(f.X[n], f.Y[n]);
+                x[j] = p.X; y[j] = p.Y; v[j] = f.Phi[n];
+                vmin = Math.Min(vmin, v[j]); vmax = Math.Max(vmax, v[j]);
+            }
+            for (int l = 1; l <= lines; l++)
+            {
+                double level = pmin + (pmax - pmin) * l / (lines + 1);
+                if (level < vmin || level > vmax) continue;
+                if (!ContourGeometry.IsoSegment(x, y, v, level, out double x0, out double y0, out double x1, out double y1)) continue;
+                path.MoveTo((float)x0, (float)y0);
+                path.LineTo((float)x1, (float)y1);
+            }
+        }
+        using var paint = Ink.Stroke(new SKColor(0, 0, 0, 120), 0.9f);
+        c.DrawPath(path, paint);
+    }
+
+    private static void DrawOutline(SKCanvas c, SectionPlotData data, SectionLayout L)
+    {
+        using var path = new SKPath();
+        foreach (var loop in data.Field.Boundaries)
+        {
+            if (loop.Count < 2) continue;
+            path.MoveTo(L.ToPixel(loop[0]));
+            for (int i = 1; i < loop.Count; i++) path.LineTo(L.ToPixel(loop[i]));
+            path.Close();
+        }
+        using var paint = Ink.Stroke(SKColors.Black, 1.4f);
+        paint.StrokeJoin = SKStrokeJoin.Round;
+        c.DrawPath(path, paint);
+    }
+
+    private static void DrawPeak(SKCanvas c, SectionPlotData data, SectionLayout L, double peak, string unit, string suffix)
+    {
+        var p = L.ToPixel(data.PeakLocation);
+        string text = $"τ max = {NiceScale.Sig(peak, 4)} {unit}{suffix}";
+        float tw = Ink.Width(text, 13);
+        // put the label towards the middle of the plot so it stays inside
+        bool leftSide = p.X > L.Plot.MidX;
+        bool below = p.Y < L.Plot.MidY;
+        float lx = leftSide ? p.X - 18 - tw : p.X + 18;
+        float ly = below ? p.Y + 30 : p.Y - 20;
+        lx = Math.Clamp(lx, L.Plot.Left + 4, Math.Max(L.Plot.Left + 4, L.Plot.Right - tw - 4));
+        ly = Math.Clamp(ly, L.Plot.Top + 16, L.Plot.Bottom - 6);
+        using (var lead = Ink.Stroke(Ink.Alert, 1.5f))
+            c.DrawLine(p.X, p.Y, leftSide ? lx + tw : lx, ly - 4, lead);
+        using (var ring = Ink.Fill(SKColors.White)) c.DrawCircle(p, 8.5f, ring);
+        using (var dot = Ink.Fill(Ink.Alert)) c.DrawCircle(p, 6f, dot);
+        Ink.BoxedLabel(c, text, lx, ly, 13, Ink.Text);
+    }
+
+    private static void DrawColourBar(SKCanvas c, SectionLayout L, int bands, double top, string unit, string caption)
+    {
+        var r = L.ColourBar;
+        Ink.Label(c, $"|τ|, {unit}", r.Left - 6, r.Top - 20, 13, Ink.Text);
+        Ink.Label(c, caption, r.Left - 6, r.Top - 6, 11, Ink.Text);
+        float h = r.Height / bands;
+        for (int k = 0; k < bands; k++)
+        {
+            var band = new SKRect(r.Left, r.Bottom - (k + 1) * h, r.Right, r.Bottom - k * h);
+            using var paint = new SKPaint { Color = BandColour(k, bands), Style = SKPaintStyle.StrokeAndFill, StrokeWidth = 0.5f };
+            c.DrawRect(band, paint);
+        }
+        using (var frame = Ink.Stroke(Ink.Text, 1f)) c.DrawRect(r, frame);
+        double step = top / bands;
+        int every = bands > 12 ? 2 : 1;
+        using var tick = Ink.Stroke(Ink.Text, 1f);
+        for (int k = 0; k <= bands; k += every)
+        {
+            float y = r.Bottom - k * h;
+            c.DrawLine(r.Right, y, r.Right + 4, y, tick);
+            Ink.Label(c, NiceScale.Sig(k * step, 3), r.Right + 7, y + 4, 11, Ink.Text);
+        }
+    }
+}

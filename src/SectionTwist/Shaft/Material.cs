@@ -1,0 +1,48 @@
+namespace SectionTwist.Shaft;
+
+/// <summary>
+/// A shaft material for torsion: shear modulus and the shear stress limits the results are checked against.
+/// All values are SI (Pa).
+/// </summary>
+/// <param name="Name">Display name.</param>
+/// <param name="ShearModulus">Shear modulus G, Pa.</param>
+/// <param name="AllowableShear">Allowable shear stress, Pa (already contains the design safety margin); null when not given.</param>
+/// <param name="ShearYield">Shear yield strength S_sy, Pa; null when not given.</param>
+/// <param name="Source">Where the values come from (book and table, standard, or "from memory").</param>
+public sealed record Material(string Name, double ShearModulus, double? AllowableShear, double? ShearYield, string Source)
+{
+    /// <summary>Distortion-energy ratio of shear yield to tensile yield, S_sy = 0.577 S_y (Budynas and Nisbett, Shigley's Mechanical Engineering Design, ch. 5).</summary>
+    public const double DistortionEnergyShearRatio = 0.577;
+
+    /// <summary>
+    /// The stress the factor of safety is measured against: the allowable shear when given, otherwise the shear yield;
+    /// null when neither is known.
+    /// </summary>
+    public double? LimitShear => AllowableShear ?? ShearYield;
+
+    /// <summary>Names the basis of <see cref="LimitShear"/>: <c>allowable</c>, <c>yield</c> or <c>none</c>.</summary>
+    public string LimitBasis => AllowableShear is not null ? "allowable" : ShearYield is not null ? "yield" : "none";
+
+    /// <summary>Shear modulus from Young's modulus and Poisson's ratio of an isotropic material, G = E / (2 (1 + nu)).</summary>
+    /// <param name="youngsModulus">E, Pa.</param>
+    /// <param name="poissonRatio">nu, between -1 and 0.5.</param>
+    public static double ShearModulusFrom(double youngsModulus, double poissonRatio)
+    {
+        if (!(youngsModulus > 0) || !double.IsFinite(youngsModulus))
+            throw new SectionTwistException("bad-material", $"Young's modulus {youngsModulus} Pa must be positive");
+        if (!(poissonRatio > -1 && poissonRatio < 0.5))
+            throw new SectionTwistException("bad-material", $"Poisson's ratio {poissonRatio} must lie between -1 and 0.5");
+        return youngsModulus / (2 * (1 + poissonRatio));
+    }
+
+    /// <summary>Checks that the values are physically meaningful; throws a <see cref="SectionTwistException"/> naming the material otherwise.</summary>
+    internal void Validate()
+    {
+        if (!(ShearModulus > 0) || !double.IsFinite(ShearModulus))
+            throw new SectionTwistException("bad-material", $"material '{Name}': shear modulus G = {ShearModulus} Pa must be positive and finite");
+        if (AllowableShear is { } a && !(a > 0 && double.IsFinite(a)))
+            throw new SectionTwistException("bad-material", $"material '{Name}': allowable shear {a} Pa must be positive");
+        if (ShearYield is { } y && !(y > 0 && double.IsFinite(y)))
+            throw new SectionTwistException("bad-material", $"material '{Name}': shear yield {y} Pa must be positive");
+    }
+}

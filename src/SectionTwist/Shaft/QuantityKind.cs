@@ -1,0 +1,19 @@
+namespace SectionTwist.Shaft;
+
+/// <summary>The physical kind of a value in the shaft file; decides which units it accepts.</summary>
+internal enum QuantityKind
+{
+    Length,
+    Torque,
+    Stress,
+    Modulus,
+    Volume,
+    Power,
+    Speed,
+    TorquePerLength,
+    RotationalStiffness,
+    AreaMoment,
+    ShearPerTorque,
+    TwistRate,
+    Number,
+}

@@ -1,0 +1,123 @@
+using System.Globalization;
+using System.Text.RegularExpressions;
+using UnitsNet;
+
+namespace SectionTwist.Shaft;
+
+/// <summary>
+/// Reads numbers with units (<c>120 mm</c>, <c>1800 lbf*in</c>, <c>11.5e6 psi</c>, <c>7.5 kW</c>, <c>1450 rpm</c>) into SI
+/// values with UnitsNet. <c>*</c> may stand for the middle dot and <c>^2 ^3 ^4</c> for superscripts. <c>hp</c> is the
+/// mechanical horsepower (<see cref="ShaftPower.MechanicalHorsepower"/>). A plain number takes the default unit of its kind.
+/// </summary>
+internal static partial class QuantityText
+{
+    [GeneratedRegex(@"^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?)\s*(.*?)\s*$", RegexOptions.CultureInvariant)]
+    private static partial Regex NumberAndUnit();
+
+    /// <summary>Splits <paramref name="text"/> into its number and unit text (empty when there is none); false when it does not start with a number.</summary>
+    public static bool TrySplit(string text, out double value, out string unit)
+    {
+        var m = NumberAndUnit().Match(text);
+        unit = "";
+        value = 0;
+        if (!m.Success || !double.TryParse(m.Groups[1].Value, NumberStyles.Float, CultureInfo.InvariantCulture, out value)) return false;
+        unit = m.Groups[2].Value;
+        return true;
+    }
+
+    /// <summary>The SI size of one <paramref name="unit"/> of <paramref name="kind"/>, or null when the unit is not one of that kind.</summary>
+    public static double? UnitFactor(string unit, QuantityKind kind)
+    {
+        string u = Normalize(unit);
+        if (u.Length == 0) return kind == QuantityKind.Number ? 1 : null;
+        switch (kind)
+        {
+            case QuantityKind.Number:
+                return null;
+            case QuantityKind.Power when u is "hp" or "HP" or "hp(I)":
+                return ShaftPower.MechanicalHorsepower;
+            case QuantityKind.ShearPerTorque:
+                {
+                    // 1/mm^3, /in^3, 1/m³: per cube of a length
+                    string rest = u.StartsWith("1/", StringComparison.Ordinal) ? u[2..] : u.StartsWith('/') ? u[1..] : "";
+                    if (!rest.EndsWith('³')) return null;
+                    return Si(rest[..^1], QuantityKind.Length) is { } l ? 1 / (l * l * l) : null;
+                }
+            case QuantityKind.TwistRate:
+                {
+                    int slash = u.LastIndexOf('/');
+                    if (slash <= 0) return null;
+                    double? angle = AngleRadians(u[..slash]), len = Si(u[(slash + 1)..], QuantityKind.Length);
+                    return angle is not null && len is not null ? angle / len : null;
+                }
+        }
+        if (Si(u, kind) is { } direct) return direct;
+        int s = u.LastIndexOf('/');
+        if (s > 0 && kind is QuantityKind.TorquePerLength or QuantityKind.RotationalStiffness)
+        {
+            double? top = Si(u[..s], QuantityKind.Torque);
+            double? bottom = kind == QuantityKind.TorquePerLength ? Si(u[(s + 1)..], QuantityKind.Length) : AngleRadians(u[(s + 1)..]);
+            return top is not null && bottom is not null ? top / bottom : null;
+        }
+        return null;
+    }
+
+    /// <summary>Example units of each kind, for messages.</summary>
+    public static string Examples(QuantityKind kind) => kind switch
+    {
+        QuantityKind.Length => "mm, m, in, ft",
+        QuantityKind.Torque => "N*m, kN*m, lbf*in, lbf*ft",
+        QuantityKind.Stress or QuantityKind.Modulus => "Pa, MPa, GPa, psi, ksi",
+        QuantityKind.Volume => "mm^3, cm^3, in^3",
+        QuantityKind.Power => "W, kW, hp",
+        QuantityKind.Speed => "rpm, rad/s",
+        QuantityKind.TorquePerLength => "N*m/m, lbf*in/in",
+        QuantityKind.RotationalStiffness => "N*m/rad, kN*m/rad, lbf*in/deg",
+        QuantityKind.AreaMoment => "mm^4, cm^4, m^4, in^4",
+        QuantityKind.ShearPerTorque => "1/mm^3, 1/m^3, 1/in^3",
+        QuantityKind.TwistRate => "deg/m, deg/ft, rad/m",
+        _ => "no unit",
+    };
+
+    private static string Normalize(string unit) => unit.Trim()
+        .Replace('*', '·').Replace("^2", "²", StringComparison.Ordinal).Replace("^3", "³", StringComparison.Ordinal)
+        .Replace("^4", "⁴", StringComparison.Ordinal).Replace(" ", "", StringComparison.Ordinal);
+
+    private static double? AngleRadians(string unit)
+    {
+        if (unit is "rad") return 1;
+        if (unit is "deg" or "°") return Math.PI / 180;
+        return Quantity.TryParse(CultureInfo.InvariantCulture, typeof(Angle), "1 " + unit, out IQuantity? q) ? ((Angle)q).Radians : null;
+    }
+
+    private static double? Si(string unit, QuantityKind kind)
+    {
+        Type? t = kind switch
+        {
+            QuantityKind.Length => typeof(Length),
+            QuantityKind.Torque => typeof(Torque),
+            QuantityKind.Stress or QuantityKind.Modulus => typeof(Pressure),
+            QuantityKind.Volume => typeof(Volume),
+            QuantityKind.Power => typeof(Power),
+            QuantityKind.Speed => typeof(RotationalSpeed),
+            QuantityKind.TorquePerLength => typeof(TorquePerLength),
+            QuantityKind.RotationalStiffness => typeof(RotationalStiffness),
+            QuantityKind.AreaMoment => typeof(AreaMomentOfInertia),
+            _ => null,
+        };
+        if (t is null || !Quantity.TryParse(CultureInfo.InvariantCulture, t, "1 " + unit, out IQuantity? q)) return null;
+        return q switch
+        {
+            Length l => l.Meters,
+            Torque x => x.NewtonMeters,
+            Pressure p => p.Pascals,
+            Power w => (double)w.Watts,
+            RotationalSpeed r => r.RadiansPerSecond,
+            TorquePerLength tl => tl.NewtonMetersPerMeter,
+            RotationalStiffness rs => rs.NewtonMetersPerRadian,
+            AreaMomentOfInertia a => a.MetersToTheFourth,
+            Volume vol => vol.CubicMeters,
+            _ => null,
+        };
+    }
+}

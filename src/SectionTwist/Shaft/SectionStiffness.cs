@@ -1,0 +1,52 @@
+namespace SectionTwist.Shaft;
+
+/// <summary>
+/// The torsion values of one prismatic cross-section: the torsion constant and the peak shear stress per unit torque.
+/// They come from the section analysis (<c>SectionResult.TorsionConstant</c> and <c>MaxShearPerTorque</c>),
+/// from a handbook, or from the exact round and tube formulas below.
+/// </summary>
+/// <param name="TorsionConstant">Torsion constant J, m^4 (the twist rate is T / (G J)).</param>
+/// <param name="ShearPerTorque">Peak shear stress per unit torque, 1/m^3 (Pa per N*m).</param>
+/// <param name="Description">Optional text for tables and drawings, e.g. <c>keyed d=40 mm</c>.</param>
+/// <param name="OuterDiameter">Optional outer diameter, m, for drawings.</param>
+public sealed record SectionStiffness(double TorsionConstant, double ShearPerTorque, string? Description = null, double? OuterDiameter = null)
+{
+    /// <summary>
+    /// Exact values for a solid round of diameter <paramref name="diameter"/> (m): J = pi d^4 / 32, tau = 16 T / (pi d^3)
+    /// (Timoshenko and Goodier, Theory of Elasticity, ch. 10).
+    /// </summary>
+    public static SectionStiffness Round(double diameter)
+    {
+        if (!(diameter > 0) || !double.IsFinite(diameter))
+            throw new SectionTwistException("bad-section", $"round section: diameter {diameter} m must be positive");
+        return new(Math.PI * Math.Pow(diameter, 4) / 32, 16 / (Math.PI * diameter * diameter * diameter),
+            $"round d={diameter * 1e3:G6} mm", diameter);
+    }
+
+    /// <summary>
+    /// Exact values for a round tube: J = pi (D^4 - d^4) / 32, tau = 16 T D / (pi (D^4 - d^4))
+    /// (Timoshenko and Goodier, Theory of Elasticity, ch. 10).
+    /// </summary>
+    /// <param name="outerDiameter">D, m.</param>
+    /// <param name="innerDiameter">d, m, 0 &lt;= d &lt; D.</param>
+    public static SectionStiffness Tube(double outerDiameter, double innerDiameter)
+    {
+        if (!(outerDiameter > 0) || !double.IsFinite(outerDiameter))
+            throw new SectionTwistException("bad-section", $"tube section: outer diameter {outerDiameter} m must be positive");
+        if (!(innerDiameter >= 0 && innerDiameter < outerDiameter))
+            throw new SectionTwistException("bad-section",
+                $"tube section: inner diameter {innerDiameter} m must be at least 0 and smaller than the outer diameter {outerDiameter} m");
+        double d4 = Math.Pow(outerDiameter, 4) - Math.Pow(innerDiameter, 4);
+        return new(Math.PI * d4 / 32, 16 * outerDiameter / (Math.PI * d4),
+            $"tube D={outerDiameter * 1e3:G6} mm d={innerDiameter * 1e3:G6} mm", outerDiameter);
+    }
+
+    /// <summary>Checks the values; throws a <see cref="SectionTwistException"/> naming <paramref name="where"/> otherwise.</summary>
+    internal void Validate(string where)
+    {
+        if (!(TorsionConstant > 0) || !double.IsFinite(TorsionConstant))
+            throw new SectionTwistException("bad-section", $"{where}: torsion constant J = {TorsionConstant} m^4 must be positive and finite");
+        if (!(ShearPerTorque > 0) || !double.IsFinite(ShearPerTorque))
+            throw new SectionTwistException("bad-section", $"{where}: peak shear per unit torque {ShearPerTorque} 1/m^3 must be positive and finite");
+    }
+}

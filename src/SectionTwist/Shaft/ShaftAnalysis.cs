@@ -1,0 +1,161 @@
+namespace SectionTwist.Shaft;
+
+/// <summary>
+/// One solve of a shaft model (the operation behind <see cref="ShaftSolver.Solve"/>): assemble the station stiffness
+/// matrix and load vector, remove the fixed rotations, solve, recover reactions, internal torques, stresses and checks.
+/// </summary>
+internal sealed class ShaftAnalysis(ShaftModel model)
+{
+    /// <summary>Relative size of the net torque below which a free shaft counts as balanced.</summary>
+    internal const double BalanceTolerance = 1e-6;
+
+    public ShaftResult Compute()
+    {
+        var layout = new ShaftLayout(model);
+        int n = layout.Stations.Count;
+        var k = new double[n * n];
+        var f = new double[n];
+        foreach (var (s, t, _) in layout.PointLoads) f[s] += t;
+        foreach (var e in layout.Elements)
+        {
+            double ke = e.Stiffness;
+            k[e.A * n + e.A] += ke; k[e.B * n + e.B] += ke;
+            k[e.A * n + e.B] -= ke; k[e.B * n + e.A] -= ke;
+            f[e.A] += e.LoadA; f[e.B] += e.LoadB;
+        }
+        foreach (var (a, b, sp) in layout.Springs)
+        {
+            double ks = sp.Stiffness;
+            k[a * n + a] += ks; k[b * n + b] += ks;
+            k[a * n + b] -= ks; k[b * n + a] -= ks;
+        }
+
+        bool free = layout.Fixed.Length == 0;
+        if (free) CheckBalance(layout, f);
+        var constrained = free ? [layout.Reference] : layout.Fixed;
+        var phi = SolveReduced(layout, k, f, n, constrained);
+
+        double phiRef = phi[layout.Reference];
+        var stations = new StationResult[n];
+        var applied = new double[n];
+        foreach (var (s, t, _) in layout.PointLoads) applied[s] += t;
+        for (int i = 0; i < n; i++)
+        {
+            var st = layout.Stations[i];
+            stations[i] = new StationResult(st.Name, st.Position, phi[i] - phiRef, applied[i], Array.IndexOf(layout.Fixed, i) >= 0);
+        }
+
+        var reactions = new List<SupportReaction>();
+        foreach (int i in layout.Fixed)
+        {
+            double r = -f[i];
+            for (int j = 0; j < n; j++) r += k[i * n + j] * phi[j];
+            reactions.Add(new SupportReaction(layout.Stations[i].Name, r));
+        }
+
+        double scale = 0;
+        foreach (var v in f) scale += Math.Abs(v);
+        var segments = BuildSegments(layout, phi, scale);
+        var springs = layout.Springs.Select(s => new SpringResult(s.Spring.Label, layout.Stations[s.A].Name, layout.Stations[s.B].Name,
+            s.Spring.Stiffness * (phi[s.B] - phi[s.A]), phi[s.B] - phi[s.A])).ToArray();
+
+        var governing = segments.Where(s => s.ShearLimit is not null && s.MaxShear > 0)
+            .OrderByDescending(s => s.MaxShear / s.ShearLimit!.Value).FirstOrDefault();
+        var governingTwist = segments.Where(s => s.MaxTwistRate > 0).OrderByDescending(s => s.MaxTwistRate).FirstOrDefault();
+        return new ShaftResult
+        {
+            Model = model,
+            Stations = stations,
+            Segments = segments,
+            Reactions = reactions,
+            Springs = springs,
+            ReferenceStation = layout.Stations[layout.Reference].Name,
+            GoverningSegment = governing,
+            GoverningTwistSegment = governingTwist,
+        };
+    }
+
+    /// <summary>A shaft with no support must carry torques that sum to zero, else it would spin up (a loose shaft).</summary>
+    private static void CheckBalance(ShaftLayout layout, double[] f)
+    {
+        double net = 0, scale = 0;
+        foreach (var v in f) { net += v; scale += Math.Abs(v); }
+        if (Math.Abs(net) <= BalanceTolerance * scale || scale == 0) return;
+        var contributions = layout.PointLoads.Select(p => (What: $"{p.Load.Description ?? "torque"} at '{layout.Stations[p.Station].Name}'", T: p.Torque))
+            .Concat(layout.Elements.Where(e => e.Distributed != 0)
+                .Select(e => (What: $"distributed torque on {layout.Stations[e.A].Name}-{layout.Stations[e.B].Name}", T: e.Distributed * e.Length)))
+            .ToArray();
+        string list = string.Join(", ", contributions.Select(c => $"{c.What} {ShaftLayout.Num(c.T)} N*m"));
+        throw new SectionTwistException("loose-shaft",
+            $"loose shaft: there is no fixed support and the applied torques do not balance: net torque {ShaftLayout.Num(net)} N*m about the axis ({list}); " +
+            $"add a fixed support where the torque is reacted (for example the drum, brake or motor station), or add the missing balancing torque of {ShaftLayout.Num(-net)} N*m");
+    }
+
+    private static double[] SolveReduced(ShaftLayout layout, double[] k, double[] f, int n, int[] constrained)
+    {
+        var isFixed = new bool[n];
+        foreach (int c in constrained) isFixed[c] = true;
+        var map = new int[n];
+        int m = 0;
+        for (int i = 0; i < n; i++) map[i] = isFixed[i] ? -1 : m++;
+        var phi = new double[n];
+        if (m == 0) return phi;
+        var kr = new double[m * m];
+        var fr = new double[m];
+        for (int i = 0; i < n; i++)
+        {
+            if (map[i] < 0) continue;
+            fr[map[i]] = f[i];
+            for (int j = 0; j < n; j++) if (map[j] >= 0) kr[map[i] * m + map[j]] = k[i * n + j];
+        }
+        int bad = DenseCholesky.Solve(kr, m, fr);
+        if (bad >= 0)
+        {
+            int station = Array.IndexOf(map, bad);
+            throw new SectionTwistException("mechanism",
+                $"mechanism: the rotation at station '{layout.Stations[station].Name}' is not restrained (the stiffness matrix is singular there); " +
+                "check that every part of the shaft is joined to a fixed support by segments or springs of non-zero stiffness");
+        }
+        for (int i = 0; i < n; i++) if (map[i] >= 0) phi[i] = fr[map[i]];
+        return phi;
+    }
+
+    /// <summary>Builds the segment results; internal torques below 1e-10 of the total applied torque are round-off and reported as 0.</summary>
+    private static SegmentResult[] BuildSegments(ShaftLayout layout, double[] phi, double scale)
+    {
+        double Clean(double t) => Math.Abs(t) <= 1e-10 * scale ? 0 : t;
+        double? limit = layout.Model.TwistRateLimit;
+        var list = new List<(double Pos, SegmentResult R)>();
+        for (int i = 0; i < layout.Elements.Count; i++)
+        {
+            var e = layout.Elements[i];
+            var seg = layout.Segments[i];
+            double ta = Clean(e.TorqueA(phi[e.A], phi[e.B]));
+            double tb = Clean(ta - e.Distributed * e.Length);
+            double tau = e.MaxShear(ta);
+            double rate = e.MaxTwistRate(ta);
+            double? lim = seg.Material.LimitShear;
+            double? sf = lim is null ? null : tau > 0 ? lim.Value / tau : double.PositiveInfinity;
+            list.Add((layout.Stations[e.A].Position, new SegmentResult
+            {
+                Label = seg.Label,
+                From = layout.Stations[e.A].Name,
+                To = layout.Stations[e.B].Name,
+                Length = e.Length,
+                Section = e.Describe(),
+                Material = seg.Material,
+                Stiffness = e.Stiffness,
+                TorqueAtFrom = ta,
+                TorqueAtTo = tb,
+                Twist = phi[e.B] - phi[e.A],
+                MaxShear = tau,
+                ShearLimit = lim,
+                SafetyFactor = sf,
+                MaxTwistRate = rate,
+                ExceedsShearLimit = lim is not null && tau > lim.Value,
+                ExceedsTwistRateLimit = limit is not null && rate > limit.Value,
+            }));
+        }
+        return [.. list.OrderBy(p => p.Pos).Select(p => p.R)];
+    }
+}

@@ -1,0 +1,32 @@
+namespace SectionTwist.Shaft;
+
+/// <summary>
+/// Reads a shaft description file (YAML, schema in docs/shaft-file.md) into a <see cref="ShaftModel"/>. Errors name the
+/// file, line, column and key and say how to fix them (<see cref="SectionTwistException"/>, code <c>shaft-file</c>).
+/// </summary>
+public static class ShaftFile
+{
+    /// <summary>Reads the file at <paramref name="path"/>.</summary>
+    /// <param name="path">The shaft file.</param>
+    /// <param name="resolver">Turns template and DXF sections into J and peak shear per unit torque; null when the host has no section analysis (then such sections are an error).</param>
+    public static ShaftDocument Load(string path, Func<SectionSource, SectionStiffness>? resolver = null)
+    {
+        ArgumentNullException.ThrowIfNull(path);
+        if (!File.Exists(path))
+            throw new SectionTwistException("file-not-found", $"{path}: no such shaft file; check the path");
+        string text = File.ReadAllText(path);
+        string dir = Path.GetDirectoryName(Path.GetFullPath(path)) ?? ".";
+        return new ShaftFileReader(Path.GetFileName(path), dir, resolver).Read(path, text);
+    }
+
+    /// <summary>Reads shaft-file text.</summary>
+    /// <param name="text">The YAML text.</param>
+    /// <param name="fileName">Name used in messages.</param>
+    /// <param name="baseDirectory">Folder that relative DXF paths are resolved against.</param>
+    /// <param name="resolver">As for <see cref="Load"/>.</param>
+    public static ShaftDocument Parse(string text, string fileName = "shaft.yaml", string? baseDirectory = null, Func<SectionSource, SectionStiffness>? resolver = null)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        return new ShaftFileReader(fileName, baseDirectory ?? Directory.GetCurrentDirectory(), resolver).Read(fileName, text);
+    }
+}

@@ -1,0 +1,186 @@
+using YamlDotNet.RepresentationModel;
+
+namespace SectionTwist.Shaft;
+
+/// <summary>The units block, materials and sections of the shaft file.</summary>
+internal sealed partial class ShaftFileReader
+{
+    private static readonly (string Key, QuantityKind Kind)[] UnitKeys =
+    [
+        ("length", QuantityKind.Length), ("torque", QuantityKind.Torque), ("modulus", QuantityKind.Modulus),
+        ("stress", QuantityKind.Stress), ("power", QuantityKind.Power), ("speed", QuantityKind.Speed),
+    ];
+
+    private ShaftDisplayUnits ReadUnits(YamlNode? node)
+    {
+        var d = ShaftDisplayUnits.Default;
+        if (node is null) return d;
+        var m = new YamlMap(_file, node, "units", [.. UnitKeys.Select(u => u.Key)]);
+        var found = new Dictionary<string, DisplayUnit>();
+        foreach (var (key, kind) in UnitKeys)
+        {
+            if (m.String(key) is not { } symbol) continue;
+            double f = QuantityText.UnitFactor(symbol, kind)
+                ?? throw _file.Error(m.Get(key)!, key, $"'{symbol}' is not a {key} unit; use one of {QuantityText.Examples(kind)}");
+            _file.SetDefault(kind, symbol, f);
+            found[key] = new DisplayUnit(symbol, f);
+        }
+        return new ShaftDisplayUnits(found.GetValueOrDefault("length", d.Length), found.GetValueOrDefault("torque", d.Torque),
+            found.GetValueOrDefault("stress", d.Stress), found.GetValueOrDefault("modulus", d.Modulus));
+    }
+
+    private Dictionary<string, Material> ReadMaterials(YamlNode? node)
+    {
+        var result = new Dictionary<string, Material>(StringComparer.Ordinal);
+        if (node is null) return result;
+        if (node is not YamlMappingNode map)
+            throw _file.Error(node, "materials", "expected named materials, e.g. 'shaft-steel: {library: steel-1045-cd}'");
+        foreach (var (k, v) in map.Children)
+        {
+            string name = ((YamlScalarNode)k).Value ?? "";
+            var m = new YamlMap(_file, v, $"material '{name}'", "name", "library", "G", "E", "poisson", "allowableShear", "shearYield", "yield", "ultimate", "source");
+            Material? lib = null;
+            if (m.Get("library") is { } ln)
+            {
+                string key = m.String("library")!;
+                if (!ShaftMaterials.TryGet(key, out var found))
+                {
+                    string? near = YamlMap.Nearest(key, ShaftMaterials.All.Keys);
+                    throw _file.Error(ln, "library", $"unknown library material '{key}'{(near is null ? "" : $"; did you mean '{near}'?")} (library: {string.Join(", ", ShaftMaterials.All.Keys)})");
+                }
+                lib = found;
+            }
+            double g;
+            if (m.Has("G"))
+            {
+                if (m.Has("E") || m.Has("poisson")) throw _file.Error(m.KeyNode("E"), "E", $"material '{name}': give either G or E with poisson, not both");
+                g = m.Quantity("G", QuantityKind.Modulus)!.Value;
+            }
+            else if (m.Has("E") || m.Has("poisson"))
+            {
+                if (!m.Has("E") || !m.Has("poisson"))
+                    throw _file.Error(v, m.Has("E") ? "poisson" : "E", $"material '{name}': G = E / (2 (1 + poisson)) needs both 'E' and 'poisson'");
+                double nu = m.Quantity("poisson", QuantityKind.Number)!.Value;
+                if (!(nu > -1 && nu < 0.5)) throw _file.Error(m.Get("poisson")!, "poisson", "Poisson's ratio must lie between -1 and 0.5 (steel about 0.3)");
+                g = Material.ShearModulusFrom(PositiveStress(m, "E"), nu);
+            }
+            else g = lib?.ShearModulus ?? throw _file.Error(v, "G", $"material '{name}' needs a shear modulus: 'G', or 'E' and 'poisson', or 'library'");
+            if (!(g > 0)) throw _file.Error(m.Get("G")!, "G", "the shear modulus must be positive");
+
+            double? allow = lib?.AllowableShear, ssy = lib?.ShearYield;
+            if (m.Has("yield") || m.Has("ultimate"))
+            {
+                var derived = ShaftMaterials.FromStrengths(name, g, m.Has("yield") ? PositiveStress(m, "yield") : null, m.Has("ultimate") ? PositiveStress(m, "ultimate") : null, "");
+                allow = derived.AllowableShear; ssy = derived.ShearYield;
+            }
+            if (m.Has("allowableShear")) allow = PositiveStress(m, "allowableShear");
+            if (m.Has("shearYield")) ssy = PositiveStress(m, "shearYield");
+            string source = m.String("source") ?? (lib is not null && !m.Has("G") && !m.Has("E") && !m.Has("yield") && !m.Has("ultimate") && !m.Has("allowableShear") && !m.Has("shearYield")
+                ? lib.Source : $"given in {_file.FileName}{(lib is null ? "" : $", based on library '{m.String("library")}'")}");
+            result[name] = new Material(m.String("name") ?? name, g, allow, ssy, source);
+        }
+        return result;
+    }
+
+    private double PositiveStress(YamlMap m, string key)
+    {
+        double v = m.Quantity(key, key == "E" ? QuantityKind.Modulus : QuantityKind.Stress)!.Value;
+        if (!(v > 0)) throw _file.Error(m.Get(key)!, key, "must be positive");
+        return v;
+    }
+
+    private Material MaterialRef(YamlNode node, Dictionary<string, Material> materials)
+    {
+        string key = node is YamlScalarNode s ? s.Value ?? "" : throw _file.Error(node, "material", "expected a material name");
+        if (materials.TryGetValue(key, out var m)) return m;
+        if (ShaftMaterials.TryGet(key, out var lib)) return lib;
+        var all = materials.Keys.Concat(ShaftMaterials.All.Keys).ToArray();
+        string? near = YamlMap.Nearest(key, all);
+        throw _file.Error(node, "material", $"unknown material '{key}'{(near is null ? "" : $"; did you mean '{near}'?")} (file: {(materials.Count == 0 ? "none" : string.Join(", ", materials.Keys))}; library: {string.Join(", ", ShaftMaterials.All.Keys)}); define it under 'materials:'");
+    }
+
+    private Dictionary<string, (YamlNode Node, Func<SectionStiffness> Get)> ReadSections(YamlNode? node)
+    {
+        var result = new Dictionary<string, (YamlNode, Func<SectionStiffness>)>(StringComparer.Ordinal);
+        if (node is null) return result;
+        if (node is not YamlMappingNode map)
+            throw _file.Error(node, "sections", "expected named sections, e.g. 'input: {round: 40 mm}'");
+        foreach (var (k, v) in map.Children)
+        {
+            string name = ((YamlScalarNode)k).Value ?? "";
+            result[name] = (v, ReadSection(v, name));
+        }
+        return result;
+    }
+
+    /// <summary>Checks a section definition now and returns a cached getter (template and DXF sections are analysed once, on first use).</summary>
+    private Func<SectionStiffness> ReadSection(YamlNode node, string name)
+    {
+        var m = new YamlMap(_file, node, $"section '{name}'", "round", "tube", "J", "shearFactor", "torsionalModulus", "description", "outerDiameter", "template", "dxf", "layer", "part");
+        string[] kinds = [.. new[] { "round", "tube", "J", "template", "dxf" }.Where(m.Has)];
+        if (kinds.Length != 1)
+            throw _file.Error(node, kinds.Length == 0 ? "round" : kinds[1],
+                $"section '{name}' needs exactly one of 'round', 'tube', 'J' (with 'shearFactor'), 'template' or 'dxf'{(kinds.Length > 1 ? $", found {string.Join(" and ", kinds)}" : "")}");
+        string? description = m.String("description");
+        double? od = m.Has("outerDiameter") ? Diameter(m.Get("outerDiameter")!, "outerDiameter") : null;
+        switch (kinds[0])
+        {
+            case "round":
+                {
+                    var s = SectionStiffness.Round(Diameter(m.Get("round")!, "round"));
+                    s = s with { Description = description ?? $"round {m.String("round")}" };
+                    return () => s;
+                }
+            case "tube":
+                {
+                    var t = new YamlMap(_file, m.Get("tube")!, $"tube of section '{name}'", "outer", "inner");
+                    double outer = Diameter(t.Require("outer", "give the outer diameter"), "outer");
+                    double inner = t.Quantity("inner", QuantityKind.Length) ?? throw _file.Error(m.Get("tube")!, "inner", "give the inner diameter (0 for solid: use 'round' instead)");
+                    if (!(inner >= 0 && inner < outer)) throw _file.Error(t.Get("inner")!, "inner", "the inner diameter must be at least 0 and smaller than the outer diameter");
+                    var s = SectionStiffness.Tube(outer, inner) with { Description = description ?? $"tube {t.String("outer")} / {t.String("inner")}" };
+                    return () => s;
+                }
+            case "J":
+                {
+                    double j = m.Quantity("J", QuantityKind.AreaMoment)!.Value;
+                    if (!(j > 0)) throw _file.Error(m.Get("J")!, "J", "the torsion constant must be positive");
+                    double factor;
+                    if (m.Has("shearFactor") == m.Has("torsionalModulus"))
+                        throw _file.Error(node, "shearFactor", $"section '{name}' with 'J' needs exactly one of 'shearFactor' (peak shear per unit torque, e.g. '1.2e-4 1/mm^3') or 'torsionalModulus' (T / tau_max, e.g. '12 cm^3')");
+                    if (m.Has("shearFactor")) factor = m.Quantity("shearFactor", QuantityKind.ShearPerTorque)!.Value;
+                    else
+                    {
+                        double z = m.Quantity("torsionalModulus", QuantityKind.Volume)!.Value;
+                        if (!(z > 0)) throw _file.Error(m.Get("torsionalModulus")!, "torsionalModulus", "must be positive");
+                        factor = 1 / z;
+                    }
+                    if (!(factor > 0)) throw _file.Error(m.Get("shearFactor")!, "shearFactor", "must be positive");
+                    var s = new SectionStiffness(j, factor, description ?? name, od);
+                    return () => s;
+                }
+            default:
+                {
+                    bool template = kinds[0] == "template";
+                    if (template && (m.Has("layer") || m.Has("part")))
+                        throw _file.Error(m.KeyNode(m.Has("layer") ? "layer" : "part"), m.Has("layer") ? "layer" : "part", "'layer' and 'part' belong to DXF sections; remove them from a template section");
+                    string value = m.String(kinds[0])!;
+                    string? dxfPath = template ? null : Path.GetFullPath(Path.Combine(_baseDirectory, value));
+                    var src = new SectionSource(name, template ? value : null, dxfPath, m.String("layer"), m.String("part"), _file.Where(m.Get(kinds[0])!));
+                    var at = m.Get(kinds[0])!;
+                    SectionStiffness? cached = null;
+                    return () => cached ??= Resolve(src, at, kinds[0], description, od);
+                }
+        }
+    }
+
+    private SectionStiffness Resolve(SectionSource src, YamlNode at, string key, string? description, double? od)
+    {
+        if (_resolver is null)
+            throw _file.Error(at, key, $"section '{src.Name}' needs the section analysis of a {(key == "template" ? "template" : "DXF outline")}, which is not available here; give 'J' and 'shearFactor' directly, or 'round'/'tube'");
+        SectionStiffness s;
+        try { s = _resolver(src); }
+        catch (SectionTwistException e) { throw new SectionTwistException(e.Code, $"{_file.Where(at)}: {key}: section '{src.Name}': {e.Message}", e); }
+        s.Validate($"{_file.Where(at)}: section '{src.Name}'");
+        return s with { Description = description ?? s.Description ?? (src.TemplateSpec ?? Path.GetFileName(src.DxfPath)), OuterDiameter = od ?? s.OuterDiameter };
+    }
+}

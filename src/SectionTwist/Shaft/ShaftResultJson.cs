@@ -1,0 +1,60 @@
+using System.Text.Json;
+using System.Text.Json.Serialization;
+
+namespace SectionTwist.Shaft;
+
+/// <summary>
+/// The JSON form of a shaft result, in SI base units (m, N*m, Pa, rad; twist rates rad/m), camelCase keys.
+/// Non-finite numbers (an infinite factor of safety of an unloaded segment) are written as null.
+/// </summary>
+internal static class ShaftResultJson
+{
+    private static readonly JsonSerializerOptions Options = new()
+    {
+        PropertyNamingPolicy = JsonNamingPolicy.CamelCase,
+        WriteIndented = true,
+        DefaultIgnoreCondition = JsonIgnoreCondition.Never,
+    };
+
+    public static string Write(ShaftResult r, string? file = null) => JsonSerializer.Serialize(ToDto(r, file), Options);
+
+    private static double? Num(double? v) => v is { } x && double.IsFinite(x) ? x : null;
+
+    private static object ToDto(ShaftResult r, string? file) => new
+    {
+        units = new { length = "m", torque = "N*m", stress = "Pa", angle = "rad", twistRate = "rad/m" },
+        title = r.Model.Title,
+        file,
+        signConvention = "right-hand rule about the axis from the first station to the last; internal torque positive when it acts counter-clockwise on the cut face looking back toward the first station",
+        referenceStation = r.ReferenceStation,
+        twistRateLimit = r.TwistRateLimit,
+        anyLimitExceeded = r.AnyLimitExceeded,
+        governingSegment = r.GoverningSegment?.Label,
+        governingTwistSegment = r.GoverningTwistSegment?.Label,
+        endToEndTwist = r.EndToEndTwist,
+        stations = r.Stations.Select(s => new { name = s.Name, position = s.Position, rotation = s.Rotation, appliedTorque = s.AppliedTorque, isFixed = s.IsFixed }),
+        segments = r.Segments.Select(s => new
+        {
+            name = s.Label,
+            from = s.From,
+            to = s.To,
+            length = s.Length,
+            section = s.Section,
+            material = s.Material.Name,
+            stiffness = s.Stiffness,
+            internalTorque = s.InternalTorque,
+            torqueAtFrom = s.TorqueAtFrom,
+            torqueAtTo = s.TorqueAtTo,
+            twist = s.Twist,
+            maxShear = s.MaxShear,
+            shearLimit = s.ShearLimit,
+            shearLimitBasis = s.Material.LimitBasis,
+            safetyFactor = Num(s.SafetyFactor),
+            maxTwistRate = s.MaxTwistRate,
+            exceedsShearLimit = s.ExceedsShearLimit,
+            exceedsTwistRateLimit = s.ExceedsTwistRateLimit,
+        }),
+        reactions = r.Reactions.Select(x => new { station = x.Station, torque = x.Torque }),
+        springs = r.Springs.Select(x => new { name = x.Label, stationA = x.StationA, stationB = x.StationB, torque = x.Torque, windup = x.Windup }),
+    };
+}

@@ -1,0 +1,19 @@
+namespace SectionTwist.Shaft;
+
+/// <summary>
+/// Solves a segmented shaft by the stiffness (displacement) method along the axis: one rotation unknown per station,
+/// each segment an exact two-node torsion element of stiffness 1 / integral(dx / (G J)) with consistent nodal loads
+/// for a uniform distributed torque, springs added between stations, fixed supports removed from the unknowns
+/// (Gere and Timoshenko, Mechanics of Materials, statically indeterminate torsion; Przemieniecki, Theory of Matrix
+/// Structural Analysis, ch. 5). Statically determinate and indeterminate layouts are solved the same way.
+/// </summary>
+public static class ShaftSolver
+{
+    /// <summary>Solves <paramref name="model"/>.</summary>
+    /// <exception cref="SectionTwistException">The model is invalid, a loose shaft (no support, unbalanced torques) or a mechanism.</exception>
+    public static ShaftResult Solve(ShaftModel model)
+    {
+        ArgumentNullException.ThrowIfNull(model);
+        return new ShaftAnalysis(model).Compute();
+    }
+}

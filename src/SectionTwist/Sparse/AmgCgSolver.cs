@@ -1,0 +1,35 @@
+using SectionTwist.Sparse.Amg;
+
+namespace SectionTwist.Sparse;
+
+/// <summary>
+/// Conjugate gradients preconditioned by a smoothed-aggregation multigrid V-cycle (<see cref="SmoothedAggregation"/>),
+/// solved to a fixed relative residual.
+/// </summary>
+internal sealed class AmgCgSolver : ISpdSolver
+{
+    private readonly CsrMatrix _a;
+    private readonly CancellationToken _ct;
+
+    private AmgCgSolver(CsrMatrix a, SmoothedAggregation h, double tol, CancellationToken ct)
+    {
+        _a = a; Hierarchy = h; Tolerance = tol; _ct = ct;
+    }
+
+    /// <summary>The multigrid hierarchy.</summary>
+    public SmoothedAggregation Hierarchy { get; }
+
+    /// <summary>Relative residual target.</summary>
+    public double Tolerance { get; }
+
+    /// <summary>Iterations used by the last solve.</summary>
+    public int LastIterations { get; private set; }
+
+    /// <summary>Builds the multigrid hierarchy for <paramref name="a"/>.</summary>
+    public static AmgCgSolver Create(CscMatrix a, double tolerance = 1e-11, CancellationToken ct = default)
+        => new(CsrMatrix.FromSymmetric(a), SmoothedAggregation.Build(a, ct: ct), tolerance, ct);
+
+    /// <inheritdoc/>
+    public void Solve(ReadOnlySpan<double> b, Span<double> x)
+        => LastIterations = ConjugateGradient.Solve(_a, Hierarchy.VCycle, b, x, Tolerance, 1000, _ct);
+}

@@ -1,0 +1,109 @@
+using System.Numerics;
+using System.Runtime.InteropServices;
+
+namespace SectionTwist.Sparse;
+
+/// <summary>
+/// Dense kernels on column-major blocks stored in flat <c>double[]</c> for the supernodal Cholesky factorization:
+/// a lower-trapezoidal product C = A A' (the update, as the BLAS routine SYRK/GEMM) and an in-place Cholesky of a
+/// diagonal block together with the triangular solve of the rows below it (POTRF + TRSM), both as column axpy
+/// updates grouped four source columns at a time and vectorized with <see cref="Vector{T}"/>
+/// (Golub and Van Loan, Matrix Computations, 4th ed., sec. 4.2.5, gaxpy Cholesky).
+/// </summary>
+internal static class DenseKernels
+{
+    /// <summary>
+    /// C[ii, jj] = sum over t of L[r0 + ii, t] L[r0 + jj, t] for jj &lt; ncols, ii &gt;= jj, ii &lt; m, where L is the
+    /// column-major block at <paramref name="off"/> with leading dimension <paramref name="ld"/> and
+    /// <paramref name="k"/> columns; C is column-major m x ncols (entries above the diagonal are left unset).
+    /// </summary>
+    public static void LowerProduct(double[] l, long off, int ld, int r0, int m, int ncols, int k, double[] c)
+    {
+        var cs = c.AsSpan(0, m * ncols);
+        for (int jj = 0; jj < ncols; jj++) cs.Slice(jj * m + jj, m - jj).Clear();
+        int t = 0;
+        for (; t + 3 < k; t += 4)
+        {
+            var a0 = l.AsSpan((int)(off + (long)t * ld + r0), m);
+            var a1 = l.AsSpan((int)(off + (long)(t + 1) * ld + r0), m);
+            var a2 = l.AsSpan((int)(off + (long)(t + 2) * ld + r0), m);
+            var a3 = l.AsSpan((int)(off + (long)(t + 3) * ld + r0), m);
+            for (int jj = 0; jj < ncols; jj++)
+                Axpy4(cs.Slice(jj * m + jj, m - jj), a0[jj..], a1[jj..], a2[jj..], a3[jj..], a0[jj], a1[jj], a2[jj], a3[jj]);
+        }
+        for (; t < k; t++)
+        {
+            var a0 = l.AsSpan((int)(off + (long)t * ld + r0), m);
+            for (int jj = 0; jj < ncols; jj++) Axpy1(cs.Slice(jj * m + jj, m - jj), a0[jj..], a0[jj]);
+        }
+    }
+
+    /// <summary>
+    /// In-place Cholesky of the nc x nc diagonal block of an nr x nc column-major block (leading dimension nr) and
+    /// L21 = A21 L11^-T for the rows below; returns the local column of a non-positive pivot, or -1.
+    /// </summary>
+    public static int FactorPanel(double[] l, long off, int nr, int nc)
+    {
+        for (int j = 0; j < nc; j++)
+        {
+            var cj = l.AsSpan((int)(off + (long)j * nr + j), nr - j);
+            int t = 0;
+            for (; t + 3 < j; t += 4)
+            {
+                var a0 = l.AsSpan((int)(off + (long)t * nr + j), nr - j);
+                var a1 = l.AsSpan((int)(off + (long)(t + 1) * nr + j), nr - j);
+                var a2 = l.AsSpan((int)(off + (long)(t + 2) * nr + j), nr - j);
+                var a3 = l.AsSpan((int)(off + (long)(t + 3) * nr + j), nr - j);
+                Axpy4(cj, a0, a1, a2, a3, -a0[0], -a1[0], -a2[0], -a3[0]);
+            }
+            for (; t < j; t++)
+            {
+                var a0 = l.AsSpan((int)(off + (long)t * nr + j), nr - j);
+                Axpy1(cj, a0, -a0[0]);
+            }
+            double d = cj[0];
+            if (!(d > 0)) return j;
+            d = Math.Sqrt(d);
+            cj[0] = d;
+            Scale(cj[1..], 1 / d);
+        }
+        return -1;
+    }
+
+    /// <summary>y += s0 x0 + s1 x1 + s2 x2 + s3 x3.</summary>
+    private static void Axpy4(Span<double> y, ReadOnlySpan<double> x0, ReadOnlySpan<double> x1, ReadOnlySpan<double> x2,
+        ReadOnlySpan<double> x3, double s0, double s1, double s2, double s3)
+    {
+        int n = y.Length, i = 0, w = Vector<double>.Count;
+        if (n >= w)
+        {
+            var v0 = new Vector<double>(s0); var v1 = new Vector<double>(s1);
+            var v2 = new Vector<double>(s2); var v3 = new Vector<double>(s3);
+            for (; i + w <= n; i += w)
+            {
+                var acc = new Vector<double>(y[i..]);
+                acc += v0 * new Vector<double>(x0[i..]) + v1 * new Vector<double>(x1[i..])
+                     + v2 * new Vector<double>(x2[i..]) + v3 * new Vector<double>(x3[i..]);
+                acc.CopyTo(y[i..]);
+            }
+        }
+        for (; i < n; i++) y[i] += s0 * x0[i] + s1 * x1[i] + s2 * x2[i] + s3 * x3[i];
+    }
+
+    /// <summary>y += s x.</summary>
+    private static void Axpy1(Span<double> y, ReadOnlySpan<double> x, double s)
+    {
+        int n = y.Length, i = 0, w = Vector<double>.Count;
+        var vs = new Vector<double>(s);
+        for (; i + w <= n; i += w) (new Vector<double>(y[i..]) + vs * new Vector<double>(x[i..])).CopyTo(y[i..]);
+        for (; i < n; i++) y[i] += s * x[i];
+    }
+
+    private static void Scale(Span<double> y, double s)
+    {
+        int n = y.Length, i = 0, w = Vector<double>.Count;
+        var vs = new Vector<double>(s);
+        for (; i + w <= n; i += w) (new Vector<double>(y[i..]) * vs).CopyTo(y[i..]);
+        for (; i < n; i++) y[i] *= s;
+    }
+}

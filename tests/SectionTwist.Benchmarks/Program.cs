@@ -1,0 +1,21 @@
+using System.Globalization;
+using BenchmarkDotNet.Running;
+
+namespace SectionTwist.Benchmarks;
+
+/// <summary>
+/// BenchmarkDotNet entry (<c>dotnet run -c Release -- --filter *SolverBenchmarks*</c>), or <c>quick [m]</c> for a
+/// single pass with the Math.NET baseline and the ratio.
+/// </summary>
+public static class Program
+{
+    public static void Main(string[] args)
+    {
+        if (args.Length > 0 && args[0] == "quick")
+        {
+            QuickRun.Run(args.Length > 1 ? int.Parse(args[1], CultureInfo.InvariantCulture) : 158, args.Length > 2 && args[2] == "stock");
+            return;
+        }
+        BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args);
+    }
+}
