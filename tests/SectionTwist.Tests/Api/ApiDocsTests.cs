@@ -1,0 +1,158 @@
+using System.Text.RegularExpressions;
+using SectionTwist.Geometry;
+using SectionTwist.Import.Dxf;
+using SectionTwist.Profiles;
+using SectionTwist.Torsion;
+using SectionTwist.Verification;
+
+namespace SectionTwist.Tests.Api;
+
+/// <summary>
+/// Keeps docs/api.md honest: every C# block of the document is in <see cref="ApiExamples"/> (so it compiles with the
+/// tests), and each example runs here with its output checked against an outside reference.
+/// </summary>
+public partial class ApiDocsTests
+{
+    private static readonly Lazy<SectionResult> Round = new(ApiExamples.RoundBarFromTemplate);
+
+    [GeneratedRegex(@"```csharp\r?\n(.*?)```", RegexOptions.Singleline)]
+    private static partial Regex CsharpBlock();
+
+    [GeneratedRegex(@"\s+")]
+    private static partial Regex Space();
+
+    private static string Normalise(string s) => Space().Replace(s, " ").Trim();
+
+    [Fact]
+    public void Every_csharp_block_of_the_api_document_is_in_ApiExamples_verbatim()
+    {
+        string doc = File.ReadAllText(Path.Combine(RepoPaths.Root, "docs", "api.md"));
+        string code = Normalise(File.ReadAllText(Path.Combine(RepoPaths.Root, "tests", "SectionTwist.Tests", "Api", "ApiExamples.cs")));
+        var blocks = CsharpBlock().Matches(doc).Select(m => m.Groups[1].Value).ToList();
+        Assert.True(blocks.Count >= 8, $"docs/api.md has only {blocks.Count} csharp blocks");
+        foreach (var b in blocks)
+            Assert.True(code.Contains(Normalise(b), StringComparison.Ordinal),
+                $"this docs/api.md block is not in tests/SectionTwist.Tests/Api/ApiExamples.cs (copy it there verbatim):\n{b}");
+    }
+
+    [Fact]
+    public void Template_round_bar_matches_the_exact_solution()
+    {
+        // Exact: J = pi d^4 / 32, tau/T = 16 / (pi d^3) (Timoshenko and Goodier, Theory of Elasticity, ch. 10).
+        var r = Round.Value;
+        double d = 0.040;
+        Tol.Rel(Math.PI * Math.Pow(d, 4) / 32, r.TorsionConstant, 2e-4);
+        Tol.Rel(16 / (Math.PI * d * d * d), r.MaxShearPerTorque, 5e-3);
+    }
+
+    [Fact]
+    public void Dxf_file_drum_tube_matches_the_exact_tube_solution()
+    {
+        // Exact: J = pi (D^4 - d^4) / 32 for a 219.1 x 8 tube (Timoshenko and Goodier, ch. 10).
+        var r = ApiExamples.TubeFromDxfFile(Path.Combine(RepoPaths.SampleProfiles, "winch-drum-tube.dxf"));
+        double D = 0.2191, d = D - 2 * 0.008;
+        Tol.Rel(Math.PI * (Math.Pow(D, 4) - Math.Pow(d, 4)) / 32, r.TorsionConstant, 2e-4);
+    }
+
+    [Fact]
+    public void Dxf_stream_reads_back_the_written_profile_area()
+    {
+        var original = ProfileTemplates.Create("tube:D=50,d=40");
+        using var ms = new MemoryStream();
+        DxfProfiles.Write(original, ms);
+        ms.Position = 0;
+        var back = ApiExamples.ProfileFromDxfStream(ms);
+        // Exact annulus area pi (D^2 - d^2) / 4 (elementary geometry); arcs stay arcs through DXF.
+        Tol.Rel(Math.PI * (0.05 * 0.05 - 0.04 * 0.04) / 4, back.Properties.Area, 1e-9);
+    }
+
+    [Fact]
+    public void Any_source_loads_specs_and_drawings()
+    {
+        var spec = ApiExamples.ProfileFromAnySource("rect:b=60,h=20");
+        Tol.Rel(0.06 * 0.02, spec.Properties.Area, 1e-12); // b h
+        var dxf = ApiExamples.ProfileFromAnySource(Path.Combine(RepoPaths.SampleProfiles, "winch-drum-tube.dxf"));
+        double D = 0.2191, d = D - 2 * 0.008;
+        Tol.Rel(Math.PI * (D * D - d * d) / 4, dxf.Properties.Area, 1e-9);
+    }
+
+    [Fact]
+    public void Loops_built_in_code_give_the_exact_area()
+    {
+        var p = ApiExamples.TubeWithFlatInCode();
+        // Disc minus the circular segment below the flat, r^2 acos(e/r) - e sqrt(r^2 - e^2), minus the bore
+        // (elementary geometry).
+        double r = 0.025, e = 0.021, bore = 0.010;
+        double segment = r * r * Math.Acos(e / r) - e * Math.Sqrt(r * r - e * e);
+        Tol.Rel(Math.PI * r * r - segment - Math.PI * bore * bore, p.Properties.Area, 1e-12);
+        Assert.Single(p.Regions);
+        Assert.Single(p.Regions[0].Holes);
+    }
+
+    [Fact]
+    public void Point_list_example_has_a_square_and_a_circle()
+    {
+        var p = ApiExamples.SquareAndCircleFromPointList();
+        Assert.Equal(2, p.Regions.Count);
+        Tol.Rel(400e-6 + Math.PI * 25e-6, p.Properties.Area, 1e-12); // a^2 + pi r^2
+    }
+
+    [Fact]
+    public void Progress_example_reports_in_order_and_ends_at_one()
+    {
+        var log = new List<AnalysisProgress>();
+        var r = ApiExamples.AnalyseWithProgress(ProfileTemplates.Create("circle:d=40"), TimeSpan.FromMinutes(5), log);
+        Assert.NotNull(r);
+        // Accuracy 1e-5 requested: J within it of pi d^4 / 32 (Timoshenko and Goodier, ch. 10), with margin 2x.
+        Tol.Rel(Math.PI * Math.Pow(0.04, 4) / 32, r.TorsionConstant, 2e-5);
+        Assert.NotEmpty(log);
+        for (int i = 1; i < log.Count; i++) Assert.True(log[i].Fraction >= log[i - 1].Fraction, $"report {i} went back: {log[i - 1]} then {log[i]}");
+        Assert.Equal(1.0, log[^1].Fraction);
+    }
+
+    [Fact]
+    public void Progress_example_returns_null_when_the_time_runs_out()
+    {
+        var log = new List<AnalysisProgress>();
+        var r = ApiExamples.AnalyseWithProgress(ProfileTemplates.Create("keyed:d=40"), TimeSpan.FromMilliseconds(1), log);
+        Assert.Null(r);
+        Assert.DoesNotContain(log, p => p.Fraction >= 1);
+    }
+
+    [Fact]
+    public void Describe_prints_stress_and_twist_rate_from_the_result()
+    {
+        // T = 100 N*m on d = 40 mm: tau = 16 T / (pi d^3) = 7.96 MPa; G = 79.3 GPa: T / (G J) = 0.0050 rad/m = 0.287 deg/m
+        // (Timoshenko and Goodier, ch. 10).
+        string s = ApiExamples.Describe(Round.Value, 100, 79.3e9);
+        Assert.Contains("tau=8.0 MPa", s, StringComparison.Ordinal);
+        Assert.Contains("twist 0.287 deg/m", s, StringComparison.Ordinal);
+        Assert.Contains("A=0.0012566 m^2", s, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Shaft_in_code_twists_by_the_sum_of_T_L_over_G_J()
+    {
+        var res = ApiExamples.TwoStepShaft();
+        // T = P / omega; a determinate shaft twists by sum T L_i / (G J_i) (Gere, Mechanics of Materials, torsion of
+        // stepped bars); the support reaction balances the applied torque.
+        double t = 2200 / (90 * 2 * Math.PI / 60);
+        double g = 79.3e9;
+        double j1 = Math.PI * Math.Pow(0.030, 4) / 32;
+        double j2 = res.Model.Segments[1].Section!.TorsionConstant;
+        Tol.Rel(t * (0.120 / (g * j1) + 0.280 / (g * j2)), Math.Abs(res.EndToEndTwist), 1e-9);
+        Tol.Rel(t, Math.Abs(res.Reactions[0].Torque), 1e-9);
+        // tau in the journal = 16 T / (pi d^3) (exact)
+        Tol.Rel(16 * t / (Math.PI * Math.Pow(0.030, 3)), res.Segments[0].MaxShear, 1e-9);
+    }
+
+    [Fact]
+    public void Own_source_bar_matches_the_rectangle_series()
+    {
+        // 60 x 10 bar: J = beta a b^3 from the series of Timoshenko and Goodier, sec. 109.
+        var r = ApiExamples.AnalyseWithOwnSource();
+        var (beta, _) = VerificationSuite.RectangleSeries(0.060, 0.010);
+        Tol.Rel(beta * 0.060 * Math.Pow(0.010, 3), r.TorsionConstant, 2e-4);
+        Assert.Equal("bar:60x10", r.Profile.Name);
+    }
+}

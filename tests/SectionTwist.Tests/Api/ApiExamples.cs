@@ -1,0 +1,170 @@
+using System.Globalization;
+using SectionTwist.Geometry;
+using SectionTwist.Import;
+using SectionTwist.Import.Dxf;
+using SectionTwist.Profiles;
+using SectionTwist.Shaft;
+using SectionTwist.Torsion;
+using SectionTwist.Units;
+
+namespace SectionTwist.Tests.Api;
+
+/// <summary>
+/// The code examples of docs/api.md, verbatim. <see cref="ApiDocsTests"/> checks that every <c>csharp</c> block of the
+/// document appears here (whitespace-normalised) and runs each example against an outside reference.
+/// </summary>
+public static class ApiExamples
+{
+    // --- docs/api.md: "A profile from a template spec" ---
+    public static SectionResult RoundBarFromTemplate()
+    {
+        // Bare lengths in a spec are millimetres; the profile itself is in metres.
+        Profile profile = ProfileTemplates.Create("circle:d=40");
+        SectionResult result = SectionAnalyzer.Analyze(profile);
+        // result.TorsionConstant is J in m^4 (about 2.513e-7 here, pi d^4 / 32).
+        return result;
+    }
+
+    // --- docs/api.md: "A profile from a DXF file or stream" ---
+    public static SectionResult TubeFromDxfFile(string path)
+    {
+        DxfImport import = DxfProfiles.Read(path, new DxfReadOptions { Layer = "DRUM" });
+        Console.WriteLine($"{import.Report.Loops} loops, unit {import.Report.Unit?.Symbol}");
+        return SectionAnalyzer.Analyze(import.Profile);
+    }
+
+    public static Profile ProfileFromDxfStream(Stream stream)
+    {
+        // A unitless drawing needs the unit; the name is used in error messages only.
+        var options = new DxfReadOptions { Unit = LengthUnit.Millimetre };
+        return DxfProfiles.Read(stream, "upload.dxf", options).Profile;
+    }
+
+    public static Profile ProfileFromAnySource(string pathOrSpec)
+    {
+        // Picks the source by extension (.dxf, .csv, .pts, plugins) or spec prefix (keyed:, circle:, ...).
+        return ProfileSources.Load(pathOrSpec, new ProfileSourceOptions { Unit = LengthUnit.Millimetre });
+    }
+
+    // --- docs/api.md: "A profile built in code" ---
+    public static Profile TubeWithFlatInCode()
+    {
+        const double mm = 1e-3;
+        // Outer boundary: a 50 mm round with one flat 21 mm from the centre (a line and an arc).
+        double r = 25 * mm, e = 21 * mm, half = Math.Sqrt(r * r - e * e);
+        Loop outer = new LoopBuilder(half, -e)
+            .ArcTo(new Point2(-half, -e), center: new Point2(0, 0), counterClockwise: true)
+            .Close();                                   // Close() adds the straight flat back to the start
+        // A 20 mm bore; FromLoops nests loops by containment, so it becomes a hole.
+        Loop bore = LoopBuilder.Circle(new Point2(0, 0), 10 * mm);
+        return Profile.FromLoops([outer, bore], LengthUnit.Millimetre, "flatted tube");
+    }
+
+    public static Profile SquareAndCircleFromPointList()
+    {
+        // The plain-text point list: "x, y" per line, "arc, xm, ym, xe, ye" through a middle point, blank line ends a loop.
+        const string text = """
+            unit, mm
+            # a 20 x 20 square with its lower left corner at the origin
+            0, 0
+            20, 0
+            20, 20
+            0, 20
+
+            # a 10 mm circle from two three-point arcs, well away from the square
+            45, 10
+            arc, 50, 15, 55, 10
+            arc, 50, 5, 45, 10
+            """;
+        return PointListSource.Parse(new StringReader(text), "two-parts.csv");
+    }
+
+    // --- docs/api.md: "Accuracy, cancellation and progress" ---
+    public static SectionResult? AnalyseWithProgress(Profile profile, TimeSpan timeLimit, IList<AnalysisProgress> log)
+    {
+        using var cancel = new CancellationTokenSource(timeLimit);
+        var options = new AnalysisOptions { Accuracy = 1e-5 };   // relative accuracy of J
+        var progress = new ListProgress(log);                      // reports arrive in order, the last at 1.0
+        try
+        {
+            return SectionAnalyzer.Analyze(profile, options, cancel.Token, progress);
+        }
+        catch (OperationCanceledException)
+        {
+            return null; // the time limit ran out; nothing half-done is returned
+        }
+    }
+
+    /// <summary>An <see cref="IProgress{T}"/> that records reports on the calling thread, in order.</summary>
+    public sealed class ListProgress(IList<AnalysisProgress> log) : IProgress<AnalysisProgress>
+    {
+        public void Report(AnalysisProgress value) => log.Add(value);
+    }
+
+    // --- docs/api.md: "Reading the result" ---
+    public static string Describe(SectionResult result, double torqueNewtonMetres, double shearModulusPascal)
+    {
+        double j = result.TorsionConstant;                                  // m^4
+        double tau = torqueNewtonMetres * result.MaxShearPerTorque;         // Pa
+        double twistRate = torqueNewtonMetres / (shearModulusPascal * j);   // rad/m
+        double errJ = result.EstimatedRelativeError.TorsionConstant;       // fraction, NaN if not estimated
+        string warnings = string.Join("; ", result.Warnings.Select(w => w.Code));
+        return string.Create(CultureInfo.InvariantCulture,
+            $"J={j:G5} m^4 (+-{errJ:P3}) tau={tau / 1e6:F1} MPa at ({result.MaxShearLocation.X:G3}, {result.MaxShearLocation.Y:G3}) m, " +
+            $"twist {twistRate * 180 / Math.PI:F3} deg/m, A={result.Properties.Area:G5} m^2, {result.Mesh.Elements} elements [{warnings}]");
+    }
+
+    // --- docs/api.md: "A shaft model in code" ---
+    public static ShaftResult TwoStepShaft()
+    {
+        Material steel = ShaftMaterials.All["steel-1045-cd"];
+        SectionStiffness journal = SectionStiffness.Round(0.030);           // d = 30 mm, exact
+        SectionResult keyed = SectionAnalyzer.Analyze(ProfileTemplates.Create("keyed:d=40"));
+        var body = new SectionStiffness(keyed.TorsionConstant, keyed.MaxShearPerTorque, "keyed d=40 mm", 0.040);
+        var model = new ShaftModel
+        {
+            Title = "drum shaft",
+            Stations = [new Station("bearing", 0.0), new Station("step", 0.120), new Station("gear", 0.400)],
+            Segments =
+            [
+                new ShaftSegment("bearing", "step", journal, steel),
+                new ShaftSegment("step", "gear", body, steel),
+            ],
+            FixedStations = ["bearing"],
+            Loads = [PointTorque.FromPower("gear", power: 2200, angularSpeed: ShaftPower.RpmToRadiansPerSecond(90))],
+            TwistRateLimit = 0.25 * Math.PI / 180,                            // rad/m
+        };
+        ShaftResult result = ShaftSolver.Solve(model);
+        // result.EndToEndTwist in rad, result.Segments[i].MaxShear in Pa, result.Reactions[0].Torque in N*m.
+        return result;
+    }
+
+    // --- docs/api.md: "Your own profile source" ---
+    /// <summary>Reads specs like <c>bar:60x10</c>: a solid rectangular bar, millimetres unless options say otherwise.</summary>
+    public sealed class BarSource : IProfileSource
+    {
+        public string Name => "bar";
+        public IReadOnlyList<string> Extensions => [];
+        public bool CanLoad(string source) => source.StartsWith("bar:", StringComparison.OrdinalIgnoreCase);
+
+        public Profile Load(string source, ProfileSourceOptions options)
+        {
+            var unit = options.Unit ?? LengthUnit.Millimetre;
+            string[] size = source[4..].Split('x');
+            if (size.Length != 2 || !double.TryParse(size[0], CultureInfo.InvariantCulture, out double b)
+                                 || !double.TryParse(size[1], CultureInfo.InvariantCulture, out double h))
+                throw new SectionTwistException("bad-bar", $"'{source}': write bar:WIDTHxHEIGHT, e.g. bar:60x10");
+            b = unit.ToMetres(b);
+            h = unit.ToMetres(h);
+            Loop loop = LoopBuilder.Polygon([new(0, 0), new(b, 0), new(b, h), new(0, h)]);
+            return Profile.FromLoops([loop], unit, source);
+        }
+    }
+
+    public static SectionResult AnalyseWithOwnSource()
+    {
+        ProfileSources.Register(new BarSource());          // or: ProfileSources.LoadPlugins("plugins")
+        Profile bar = ProfileSources.Load("bar:60x10");
+        return SectionAnalyzer.Analyze(bar);
+    }
+}
