@@ -1,4 +1,6 @@
 using System.Globalization;
+using System.Text;
+using System.Text.Json;
 using SectionTwist.Torsion;
 using SectionTwist.Verification;
 
@@ -10,23 +12,63 @@ internal sealed class VerifyCommand : ICommand
     public string Name => "verify";
     public string Summary => "run the built-in verification cases against exact and series solutions";
     public string Usage => """
-        sectiontwist verify [--accuracy REL]
+        sectiontwist verify [--accuracy REL] [--json]
           Runs every verification case and prints computed, reference, relative error and source.
+          --json      print one JSON object (SI base units: m^4 for J, 1/m^3 for peak shear per torque)
           Exit code 0 when all pass, 1 when any falls outside its tolerance.
         """;
 
     public int Run(Args args, CliContext ctx)
     {
         double accuracy = args.Double("accuracy") ?? 1e-4;
+        bool json = args.Flag("json");
         args.EnsureAllUsed();
+        if (!(accuracy > 0 && accuracy < 0.5)) throw new UsageException("--accuracy must lie between 0 and 0.5, e.g. 1e-4");
         var outcomes = VerificationSuite.Run(new AnalysisOptions { Accuracy = accuracy });
-        var w = ctx.Out;
+        int failed = outcomes.Count(o => !o.Passed);
+        if (json) ctx.Out.WriteLine(WriteJson(outcomes, accuracy));
+        else WriteTable(ctx.Out, outcomes, failed);
+        return failed == 0 ? 0 : 1;
+    }
+
+    private static void WriteTable(TextWriter w, IReadOnlyList<VerificationOutcome> outcomes, int failed)
+    {
         string G(double v) => v.ToString("G6", CultureInfo.InvariantCulture);
         w.WriteLine($"{"case",-40} {"computed",-13} {"reference",-13} {"rel. error",-10} {"tol.",-8} result  source");
         foreach (var o in outcomes)
             w.WriteLine($"{o.Case.Name,-40} {G(o.Computed),-13} {G(o.Case.Reference),-13} {o.RelativeError.ToString("0.0E+0", CultureInfo.InvariantCulture),-10} {o.Case.Tolerance.ToString("0E+0", CultureInfo.InvariantCulture),-8} {(o.Passed ? "pass" : "FAIL"),-7} {o.Case.Source}");
-        int failed = outcomes.Count(o => !o.Passed);
         w.WriteLine(failed == 0 ? $"all {outcomes.Count} verification cases passed" : $"{failed} of {outcomes.Count} verification cases FAILED");
-        return failed == 0 ? 0 : 1;
+    }
+
+    private static string WriteJson(IReadOnlyList<VerificationOutcome> outcomes, double accuracy)
+    {
+        using var ms = new MemoryStream();
+        using (var w = new Utf8JsonWriter(ms, new JsonWriterOptions { Indented = true }))
+        {
+            w.WriteStartObject();
+            w.WriteNumber("accuracy", accuracy);
+            w.WriteNumber("total", outcomes.Count);
+            w.WriteNumber("failed", outcomes.Count(o => !o.Passed));
+            w.WriteBoolean("passed", outcomes.All(o => o.Passed));
+            w.WriteStartArray("cases");
+            foreach (var o in outcomes)
+            {
+                w.WriteStartObject();
+                w.WriteString("name", o.Case.Name);
+                w.WriteString("quantity", o.Case.Quantity == VerifiedQuantity.TorsionConstant ? "torsionConstant" : "maxShearPerTorque");
+                w.WriteString("unit", o.Case.Quantity == VerifiedQuantity.TorsionConstant ? "m^4" : "1/m^3");
+                SectionJson.Num(w, "computed", o.Computed);
+                SectionJson.Num(w, "reference", o.Case.Reference);
+                SectionJson.Num(w, "relativeError", o.RelativeError);
+                SectionJson.Num(w, "estimatedRelativeError", o.EstimatedRelativeError);
+                w.WriteNumber("tolerance", o.Case.Tolerance);
+                w.WriteBoolean("passed", o.Passed);
+                w.WriteString("source", o.Case.Source);
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            w.WriteEndObject();
+        }
+        return Encoding.UTF8.GetString(ms.ToArray());
     }
 }
