@@ -13,6 +13,7 @@ public static class ProfileSources
 {
     private static readonly object Gate = new();
     private static readonly List<IProfileSource> Registered = [];
+    private static readonly Dictionary<string, IProfileSource[]> LoadedPlugins = new(StringComparer.Ordinal);
     private static bool _builtInsAdded;
 
     /// <summary>The sources known now, most recently registered first.</summary>
@@ -45,33 +46,60 @@ public static class ProfileSources
     /// <summary>
     /// Loads every assembly in <paramref name="folder"/> into its own isolated <see cref="AssemblyLoadContext"/> and
     /// registers each public, non-abstract <see cref="IProfileSource"/> with a parameterless constructor. Returns the
-    /// sources added.
+    /// sources the folder supplies. An assembly already loaded from the same path is not loaded or registered again.
+    /// A missing folder is an error (a mistyped path should not pass silently).
     /// </summary>
+    /// <exception cref="SectionTwistException">The folder does not exist, or a file in it is not a usable .NET assembly.</exception>
     public static IReadOnlyList<IProfileSource> LoadPlugins(string folder)
     {
-        var added = new List<IProfileSource>();
-        if (!Directory.Exists(folder)) return added;
-        foreach (var path in Directory.EnumerateFiles(folder, "*.dll").OrderBy(p => p, StringComparer.Ordinal))
+        ArgumentNullException.ThrowIfNull(folder);
+        if (!Directory.Exists(folder))
+            throw new SectionTwistException("no-plugin-folder", $"plugins folder '{folder}' does not exist; give a folder that holds the plugin .dll files");
+        var found = new List<IProfileSource>();
+        foreach (var path in Directory.EnumerateFiles(folder, "*.dll").Select(Path.GetFullPath).OrderBy(p => p, StringComparer.Ordinal))
         {
-            Assembly asm;
-            try
+            lock (Gate)
             {
-                var ctx = new PluginLoadContext(Path.GetFullPath(path));
-                asm = ctx.LoadFromAssemblyPath(Path.GetFullPath(path));
-            }
-            catch (BadImageFormatException e)
-            {
-                throw new SectionTwistException("bad-plugin", $"{path}: not a .NET assembly ({e.Message}); remove it from the plugins folder");
-            }
-            foreach (var t in asm.GetExportedTypes())
-            {
-                if (t.IsAbstract || !typeof(IProfileSource).IsAssignableFrom(t) || t.GetConstructor(Type.EmptyTypes) is null) continue;
-                var src = (IProfileSource)Activator.CreateInstance(t)!;
-                Register(src);
-                added.Add(src);
+                if (!LoadedPlugins.TryGetValue(path, out var sources))
+                {
+                    sources = LoadPluginAssembly(path);
+                    foreach (var src in sources) Register(src);
+                    LoadedPlugins[path] = sources;
+                }
+                found.AddRange(sources);
             }
         }
-        return added;
+        return found;
+    }
+
+    private static IProfileSource[] LoadPluginAssembly(string path)
+    {
+        Assembly asm;
+        Type[] types;
+        try
+        {
+            asm = new PluginLoadContext(path).LoadFromAssemblyPath(path);
+            types = asm.GetExportedTypes();
+        }
+        catch (BadImageFormatException e)
+        {
+            throw new SectionTwistException("bad-plugin", $"{path}: not a .NET assembly ({e.Message}); remove it from the plugins folder");
+        }
+        catch (Exception e) when (e is FileLoadException or FileNotFoundException or TypeLoadException or ReflectionTypeLoadException)
+        {
+            throw new SectionTwistException("bad-plugin", $"{path}: cannot load the plugin ({e.Message}); build it against this SectionTwist version and copy its dependencies beside it");
+        }
+        var list = new List<IProfileSource>();
+        foreach (var t in types)
+        {
+            if (t.IsAbstract || !typeof(IProfileSource).IsAssignableFrom(t) || t.GetConstructor(Type.EmptyTypes) is null) continue;
+            try { list.Add((IProfileSource)Activator.CreateInstance(t)!); }
+            catch (TargetInvocationException e)
+            {
+                throw new SectionTwistException("bad-plugin", $"{path}: {t.FullName} failed to start ({e.InnerException?.Message ?? e.Message})", e);
+            }
+        }
+        return [.. list];
     }
 
     private static void EnsureBuiltIns()
@@ -91,8 +119,10 @@ public static class ProfileSources
 
         protected override Assembly? Load(AssemblyName name)
         {
-            if (name.Name is { } n && (n.StartsWith("SectionTwist", StringComparison.Ordinal) || n.StartsWith("System", StringComparison.Ordinal)))
-                return null; // share with the host
+            // Share the contract (SectionTwist.Core) and the framework with the host; everything else the plugin
+            // brings beside it is its own. Returning null falls back to the host's (default) context.
+            if (name.Name is { } n && (n == typeof(IProfileSource).Assembly.GetName().Name || n.StartsWith("System", StringComparison.Ordinal)))
+                return null;
             string? path = _resolver.ResolveAssemblyToPath(name);
             return path is null ? null : LoadFromAssemblyPath(path);
         }
