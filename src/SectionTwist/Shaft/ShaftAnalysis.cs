@@ -65,10 +65,11 @@ internal sealed class ShaftAnalysis(ShaftModel model)
         return new ShaftResult
         {
             Model = model,
-            Stations = stations,
-            Segments = segments,
-            Reactions = reactions,
-            Springs = springs,
+            // Read-only views: a host cannot change a result through a cast back to the array or list.
+            Stations = Array.AsReadOnly(stations),
+            Segments = Array.AsReadOnly(segments),
+            Reactions = reactions.AsReadOnly(),
+            Springs = Array.AsReadOnly(springs),
             ReferenceStation = layout.Stations[layout.Reference].Name,
             GoverningSegment = governing,
             GoverningTwistSegment = governingTwist,

@@ -112,9 +112,9 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
             MaxShearLocation = useF.MaxGradientLocation,
             EstimatedRelativeError = new ErrorEstimate(estJ, estT),
             Mesh = new MeshSummary(useF.Mesh.NodeCount, useF.Mesh.ElementCount, MeshQuality.MinAngleDegrees(coarseMesh!)),
-            Warnings = warnings,
+            Warnings = warnings.AsReadOnly(),
             Field = field,
-            RegionTorsionConstants = regionJ,
+            RegionTorsionConstants = Array.AsReadOnly(regionJ),
         };
     }
 

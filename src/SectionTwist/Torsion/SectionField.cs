@@ -12,8 +12,10 @@ public sealed class SectionField
     internal SectionField(double[] x, double[] y, int[] triangles, double[] phi, double[] shearX, double[] shearY,
         IReadOnlyList<IReadOnlyList<Point2>> boundaries, int[] elementCorners)
     {
-        X = x; Y = y; Triangles = triangles; Phi = phi; ShearX = shearX; ShearY = shearY; Boundaries = boundaries;
-        ElementCorners = elementCorners;
+        // Read-only views: a host cannot change a result through a cast back to the array.
+        X = Array.AsReadOnly(x); Y = Array.AsReadOnly(y); Triangles = Array.AsReadOnly(triangles); Phi = Array.AsReadOnly(phi);
+        ShearX = Array.AsReadOnly(shearX); ShearY = Array.AsReadOnly(shearY); Boundaries = boundaries;
+        ElementCorners = Array.AsReadOnly(elementCorners);
     }
 
     /// <summary>Node x coordinates, m.</summary>
