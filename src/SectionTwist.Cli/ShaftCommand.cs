@@ -13,7 +13,7 @@ namespace SectionTwist.Cli;
 /// </summary>
 internal sealed class ShaftCommand : ICommand
 {
-    private const string Caution =
+    internal const string Caution =
         "caution: results assume linear elastic, Saint-Venant torsion; stress concentrations at shoulders, keyseat ends and fillets " +
         "are not included; verify against local codes and licensed engineering practice.";
 
@@ -45,6 +45,8 @@ internal sealed class ShaftCommand : ICommand
         string path = args.Positional[0];
         if (report is not null) OutputPaths.CheckFile(report, "--report");
 
+        // the report's verification cases run beside the section analyses
+        var verifying = report is null ? null : Task.Run(() => VerificationSuite.Run());
         var sections = new ShaftSectionCatalog(notes: context.Err.WriteLine);
         var doc = ShaftFile.Load(path, SectionResolver ?? sections.Resolver);
         ShaftResult result;
@@ -54,7 +56,7 @@ internal sealed class ShaftCommand : ICommand
         if (csv is not null) ShaftResultCsv.WriteAll(result, csv);
         if (report is not null)
         {
-            ShaftReport.Write(ShaftReport.Build(doc, result, sections, VerificationSuite.Run(), CliReport.Options()), report);
+            ShaftReport.Write(ShaftReport.Build(doc, result, sections, verifying!.GetAwaiter().GetResult(), CliReport.Options()), report);
             context.Err.WriteLine($"wrote {report}");
         }
         if (json) context.Out.WriteLine(ShaftResultJson.Write(result, path));

@@ -1,4 +1,5 @@
 using System.Globalization;
+using SectionTwist.Rendering.Drawing;
 using SectionTwist.Rendering.Report;
 using SectionTwist.Shaft;
 
@@ -53,15 +54,15 @@ internal static class ShaftInputTables
             string j, k, outer;
             if (seg.Section is { } sec)
             {
-                j = F(sec.TorsionConstant / l4);
-                k = F(sec.ShearPerTorque * perTorque);
+                j = NiceScale.Sig(sec.TorsionConstant / l4, 5);
+                k = NiceScale.Sig(sec.ShearPerTorque * perTorque, 5);
                 outer = sec.OuterDiameter is { } d ? u.Length.Format(d) : "–";
             }
             else
             {
                 var t = seg.Taper!;
-                j = $"{F(Math.PI * Math.Pow(t.StartDiameter, 4) / 32 / l4)} … {F(Math.PI * Math.Pow(t.EndDiameter, 4) / 32 / l4)}";
-                k = $"{F(16 / (Math.PI * Math.Pow(t.StartDiameter, 3)) * perTorque)} … {F(16 / (Math.PI * Math.Pow(t.EndDiameter, 3)) * perTorque)}";
+                j = $"{NiceScale.Sig(Math.PI * Math.Pow(t.StartDiameter, 4) / 32 / l4, 5)} … {NiceScale.Sig(Math.PI * Math.Pow(t.EndDiameter, 4) / 32 / l4, 5)}";
+                k = $"{NiceScale.Sig(16 / (Math.PI * Math.Pow(t.StartDiameter, 3)) * perTorque, 5)} … {NiceScale.Sig(16 / (Math.PI * Math.Pow(t.EndDiameter, 3)) * perTorque, 5)}";
                 outer = $"{u.Length.Format(t.StartDiameter)} … {u.Length.Format(t.EndDiameter)}";
             }
             rows.Add(Row(s.Label, $"{s.From} – {s.To}", u.Length.Format(s.Length), s.Section, outer, j, k, s.Material.Name));

@@ -57,12 +57,14 @@ internal static class ShaftSchematic
             float half = HalfAt(d, st.Position, vs);
             if (st.Support == SupportKind.Fixed) Wall(c, x, y0, Math.Max(half, 10) + 12, x < mid ? -1 : 1);
             else if (st.Support == SupportKind.Bearing) Bearing(c, x, y0 + half);
-            Ink.Label(c, st.Name, x, y0 + maxHalf + 30, 11, Ink.Text, SKTextAlign.Center);
             float ay = y0 - Math.Max(maxHalf, 8) - 22;
             if (st.AppliedTorque != 0) Vector(c, x, ay, st.AppliedTorque, Load, $"{Signed(st.AppliedTorque)} N·m");
             if (st.Support == SupportKind.Fixed && st.Reaction != 0)
                 Vector(c, x, ay - 30, st.Reaction, Reaction, $"R {Signed(st.Reaction)} N·m");
         }
+        // stations at the same place (e.g. the two halves of a coupling) share one label instead of overprinting
+        foreach (var group in d.Stations.GroupBy(s => s.Position).OrderBy(g => g.Key))
+            Ink.Label(c, string.Join(", ", group.Select(s => s.Name)), L.ToPixelX(group.Key), y0 + maxHalf + 30, 11, Ink.Text, SKTextAlign.Center);
     }
 
     internal static string Signed(double v) => (v > 0 ? "+" : "") + NiceScale.Sig(v, 4);
