@@ -73,12 +73,15 @@ public static class ShaftDiagramAdapter
                 Allowable = r.ShearLimit,
             });
         }
+        var spread = model.Loads.OfType<DistributedTorque>().Select(t => new DiagramDistributedTorque(position[t.From], position[t.To],
+            t.TorquePerLength * Math.Abs(position[t.To] - position[t.From]), t.Description)).ToList();
         return new ShaftDiagramData
         {
             Title = title ?? model.Title ?? "shaft",
             Unit = unit ?? LengthUnit.Millimetre,
             Stations = stations,
             Segments = segments,
+            DistributedTorques = spread,
         };
     }
 

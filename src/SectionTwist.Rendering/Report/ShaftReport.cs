@@ -77,7 +77,7 @@ public static class ShaftReport
     private const string SectionsMethod =
         "Where the shaft file gives a section as a round or a tube, J and the peak shear per unit torque are the exact formulas " +
         "J = π(D⁴ − d⁴)/32, τ/T = 16D/(π(D⁴ − d⁴)) (Timoshenko and Goodier, ch. 10); where it gives J and the shear factor directly, " +
-        "those values are used as given; template and drawing sections are analysed as described above, and each has its own chapter below.";
+        "those values are used as given; template and drawing sections are analysed as described above, and each has its own chapter in this report (properties and contour picture).";
 
     /// <summary>Writes the report to <paramref name="path"/> (one self-contained HTML file).</summary>
     public static void Write(ShaftReportContent content, string path)

@@ -103,6 +103,31 @@ public class ShaftDiagramAdapterTests
     }
 
     [Fact]
+    public void Distributed_torque_ramps_the_internal_torque_and_is_drawn_with_its_total()
+    {
+        // Held at A; +60 N*m applied at B and -60 N*m spread uniformly over B-C (300 N*m/m over 0.2 m). Statics (common
+        // practice, no source): the internal torque is the sum of the torques beyond the cut, so AB carries 60 - 60 = 0 and
+        // BC runs from -60 just after B (the whole spread torque lies beyond) to 0 at C.
+        var model = new ShaftModel
+        {
+            Stations = [new("A", 0), new("B", 0.1), new("C", 0.3)],
+            Segments = [new ShaftSegment("A", "B", SectionStiffness.Round(0.03), Steel), new ShaftSegment("B", "C", SectionStiffness.Round(0.03), Steel)],
+            Loads = [new PointTorque("B", 60), new DistributedTorque("B", "C", -300) { Description = "drum" }],
+            FixedStations = ["A"],
+        };
+        var data = ShaftDiagramAdapter.From(ShaftSolver.Solve(model));
+        var spread = Assert.Single(data.DistributedTorques);
+        Assert.Equal((0.1, 0.3, "drum"), (spread.From, spread.To, spread.Label));
+        Tol.Rel(-60, spread.Total, 1e-12, "intensity times length");
+        var bc = data.Segments.Single(s => s.Label == "B-C");
+        Tol.Rel(-60, bc.TorqueStart, 1e-9, "statics");
+        Tol.Abs(0, bc.TorqueEnd, 1e-9, "statics");
+        Tol.Abs(0, data.Segments.Single(s => s.Label == "A-B").TorqueStart, 1e-9, "statics");
+        string svg = System.Text.Encoding.UTF8.GetString(ShaftDiagram.Render(data, ImageFormat.Svg, 800, 700));
+        Assert.Contains("-60 N·m spread (drum)", System.Xml.Linq.XDocument.Parse(svg).Root!.Value, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Rendered_diagram_of_the_adapted_shaft_has_the_torque_sign_pixels()
     {
         var data = ShaftDiagramAdapter.From(ShaftSolver.Solve(Cantilever()));
