@@ -70,6 +70,11 @@ internal static class Program
             ctx.Err.WriteLine($"sectiontwist {cmd.Name}: error: {e.Message}");
             return 2;
         }
+        catch (Exception e) when (Environment.GetEnvironmentVariable("SECTIONTWIST_DEBUG") != "1")
+        {
+            ctx.Err.WriteLine($"sectiontwist {cmd.Name}: internal error: {e.GetType().Name}: {e.Message} (please report it with the input; set SECTIONTWIST_DEBUG=1 for details)");
+            return 70;
+        }
     }
 
     private static ICommand? Find(string name) => Commands.FirstOrDefault(c => c.Name == name);

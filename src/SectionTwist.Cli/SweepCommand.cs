@@ -134,21 +134,22 @@ internal sealed class SweepCommand : ICommand
             double j = r.TorsionConstant / Math.Pow(u.Metres, 4), tau = r.MaxShearPerTorque * Math.Pow(u.Metres, 3);
             w.WriteLine($"{steps[i].ValueText,12}  {Inv(j, "G6"),14}  {Inv(tau, "G6"),16}  {Inv(RelativeToRound(r, steps[i].OuterSize), "F4"),9}  {Inv(r.EstimatedRelativeError.TorsionConstant, "0.0E+0"),8}");
         }
-        foreach (var warn in results.SelectMany(r => r.Warnings).Select(x => x.Message).Distinct())
-            w.WriteLine($"warning: {warn}");
+        // One line per kind of warning: the first message and how many steps carry it.
+        foreach (var g in results.SelectMany((r, i) => r.Warnings.Select(x => (Step: i, x.Code, x.Message))).GroupBy(x => x.Code))
+            w.WriteLine($"warning ({g.Select(x => x.Step).Distinct().Count()} of {steps.Count} steps, first at {key}={steps[g.First().Step].ValueText}): {g.First().Message}");
     }
 
     private static void WriteCsv(TextWriter w, string key, List<Step> steps, SectionResult[] results)
     {
-        w.WriteLine($"{key},spec,outerSize_m,torsionConstant_m4,maxShearPerTorque_per_m3,relativeToRound,estimatedRelativeErrorJ");
+        w.WriteLine($"{key},outerSize_m,torsionConstant_m4,maxShearPerTorque_per_m3,relativeToRound,estimatedRelativeErrorJ,spec");
         for (int i = 0; i < steps.Count; i++)
         {
             var r = results[i];
             w.WriteLine(string.Join(",",
-                steps[i].ValueText, "\"" + steps[i].Spec.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"",
-                steps[i].OuterSize.ToString("R", CultureInfo.InvariantCulture), r.TorsionConstant.ToString("R", CultureInfo.InvariantCulture),
+                steps[i].ValueText, steps[i].OuterSize.ToString("R", CultureInfo.InvariantCulture), r.TorsionConstant.ToString("R", CultureInfo.InvariantCulture),
                 r.MaxShearPerTorque.ToString("R", CultureInfo.InvariantCulture), RelativeToRound(r, steps[i].OuterSize).ToString("R", CultureInfo.InvariantCulture),
-                r.EstimatedRelativeError.TorsionConstant.ToString("R", CultureInfo.InvariantCulture)));
+                r.EstimatedRelativeError.TorsionConstant.ToString("R", CultureInfo.InvariantCulture),
+                "\"" + steps[i].Spec.Replace("\"", "\"\"", StringComparison.Ordinal) + "\""));
         }
     }
 

@@ -13,7 +13,7 @@ public static class Program
     {
         if (args.Length > 0 && args[0] == "quick")
         {
-            QuickRun.Run(args.Length > 1 ? int.Parse(args[1], CultureInfo.InvariantCulture) : 158);
+            QuickRun.Run(args.Length > 1 ? int.Parse(args[1], CultureInfo.InvariantCulture) : 158, args.Length > 2 && args[2] == "stock");
             return;
         }
         BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args);

@@ -1,18 +1,14 @@
-using System.Globalization;
 using SectionTwist.Geometry;
-using SectionTwist.Import;
-using SectionTwist.Profiles;
 using SectionTwist.Shaft;
 using SectionTwist.Torsion;
 
 namespace SectionTwist.Rendering.Adapters;
 
 /// <summary>
-/// A section resolver for <see cref="ShaftFile.Load"/> that keeps what it analysed: a template spec is built with
-/// <see cref="ProfileTemplates.Create"/>, a DXF outline read with <see cref="ProfileSources.Load"/>, and the profile solved
-/// with <see cref="SectionAnalyzer.Analyze"/>. The shaft model gets J and the peak shear per unit torque; the report
-/// gets the full <see cref="SectionResult"/> (field, mesh, warnings) of every section the shaft actually uses, for its
-/// contour pictures and property tables.
+/// A section resolver for <see cref="ShaftFile.Load"/> that keeps what it analysed: the sections are built and solved as
+/// by <see cref="ShaftSections.Resolve"/> (template spec or DXF outline, then the section analysis). The shaft model gets J
+/// and the peak shear per unit torque; the report gets the full <see cref="SectionResult"/> (field, mesh, warnings) of
+/// every section the shaft actually uses, for its contour pictures and property tables.
 /// </summary>
 public sealed class ShaftSectionCatalog
 {
@@ -35,37 +31,15 @@ public sealed class ShaftSectionCatalog
     /// <summary>The resolver to hand to <see cref="ShaftFile.Load"/> or <see cref="ShaftFile.Parse"/>.</summary>
     public Func<SectionSource, SectionStiffness> Resolver => Resolve;
 
-    /// <summary>Builds and analyses one section and remembers the result.</summary>
+    /// <summary>Builds and analyses one section (as <see cref="ShaftSections.Resolve"/> does) and remembers the result.</summary>
     public SectionStiffness Resolve(SectionSource source)
     {
         ArgumentNullException.ThrowIfNull(source);
-        Profile profile;
-        double outer;
-        if (source.TemplateSpec is { } spec)
-        {
-            profile = ProfileTemplates.Create(spec);
-            outer = ProfileTemplates.OuterSize(spec);
-        }
-        else if (source.DxfPath is { } path)
-        {
-            int? part = null;
-            if (source.Part is { } p)
-            {
-                if (!int.TryParse(p, NumberStyles.Integer, CultureInfo.InvariantCulture, out int n) || n < 1)
-                    throw new SectionTwistException("bad-section", $"{source.Location}: part '{p}' must be a whole number from 1 (the n-th closed outline of the drawing)");
-                part = n;
-            }
-            profile = ProfileSources.Load(path, new ProfileSourceOptions { Layer = source.Layer, Part = part, Notes = _notes });
-            outer = Math.Max(profile.Bounds.Width, profile.Bounds.Height);
-        }
-        else throw new SectionTwistException("bad-section", $"{source.Location}: section '{source.Name}' names neither a template nor a DXF file; give 'template' or 'dxf'");
-
-        _notes?.Invoke($"analysing section '{source.Name}' ({source.TemplateSpec ?? Path.GetFileName(source.DxfPath)})");
-        var r = SectionAnalyzer.Analyze(profile, _options);
-        foreach (var w in r.Warnings) _notes?.Invoke($"section '{source.Name}': warning: {w.Message}");
-        var stiffness = new SectionStiffness(r.TorsionConstant, r.MaxShearPerTorque, source.TemplateSpec ?? Path.GetFileName(source.DxfPath), outer);
-        _sections.Add(new AnalysedSection(source, r, outer, LargestHole(profile)));
-        return stiffness;
+        var (r, templateOuter) = ShaftSections.Analyze(source, _options, _notes);
+        // a template knows its outer size; a drawing's is the larger side of its bounds
+        double outer = templateOuter ?? Math.Max(r.Profile.Bounds.Width, r.Profile.Bounds.Height);
+        _sections.Add(new AnalysedSection(source, r, outer, LargestHole(r.Profile)));
+        return new SectionStiffness(r.TorsionConstant, r.MaxShearPerTorque, source.TemplateSpec ?? Path.GetFileName(source.DxfPath), outer);
     }
 
     /// <summary>

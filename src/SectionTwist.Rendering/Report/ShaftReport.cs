@@ -39,7 +39,7 @@ public static class ShaftReport
                                        "(dashed: allowable)", ImageFormat.Png, png, "shaft.png");
 
         var chapters = new List<ReportChapter> { ShaftResultChapter.Build(doc, result, diagram) };
-        var pictures = new List<(string File, byte[] Png)>();
+        var pictures = new List<ReportFigure>();
         var warnings = new List<string>();
         foreach (var s in DistinctUsed(sections))
         {
@@ -50,9 +50,9 @@ public static class ShaftReport
                 : $"Section '{s.Name}': shear stress per unit torque";
             byte[] bytes = SectionPicture.Render(SectionPlotData.From(s.Result, $"{s.Name}: {s.Source.TemplateSpec ?? Path.GetFileName(s.Source.DxfPath)}"),
                 ImageFormat.Png, new SectionPlotOptions { Width = 760, Height = 560, Torque = torque > 0 ? torque : null });
-            pictures.Add((file, bytes));
-            chapters.Add(ReportAdapters.SectionChapter($"Section '{s.Name}' ({s.Source.TemplateSpec ?? Path.GetFileName(s.Source.DxfPath)})",
-                s.Result, new ReportFigure(caption, ImageFormat.Png, bytes, file)));
+            var figure = new ReportFigure(caption, ImageFormat.Png, bytes, file);
+            pictures.Add(figure);
+            chapters.Add(ReportAdapters.SectionChapter($"Section '{s.Name}' ({s.Source.TemplateSpec ?? Path.GetFileName(s.Source.DxfPath)})", s.Result, figure));
             warnings.AddRange(s.Result.Warnings.Select(w => $"section '{s.Name}': {w.Message}"));
         }
         foreach (var seg in result.Segments.Where(x => x.ExceedsShearLimit || x.ExceedsTwistRateLimit))
@@ -105,7 +105,7 @@ public static class ShaftReport
         written.Add(report);
         Put("shaft.png", content.DiagramPng);
         Put("shaft.svg", ShaftDiagram.Render(content.Diagram, ImageFormat.Svg, DiagramWidth, DiagramHeight));
-        foreach (var (file, png) in content.SectionPictures) Put(file, png);
+        foreach (var f in content.SectionPictures) Put(f.FileName!, f.Data);
         return written;
     }
 
@@ -153,5 +153,5 @@ public sealed record ShaftReportOptions
 /// <param name="Model">The report model.</param>
 /// <param name="Diagram">What the shaft diagram shows.</param>
 /// <param name="DiagramPng">The shaft diagram, PNG.</param>
-/// <param name="SectionPictures">One contour picture per analysed section: file name and PNG bytes.</param>
-public sealed record ShaftReportContent(ReportModel Model, ShaftDiagramData Diagram, byte[] DiagramPng, IReadOnlyList<(string File, byte[] Png)> SectionPictures);
+/// <param name="SectionPictures">One contour picture per analysed section (PNG, with its file name).</param>
+public sealed record ShaftReportContent(ReportModel Model, ShaftDiagramData Diagram, byte[] DiagramPng, IReadOnlyList<ReportFigure> SectionPictures);

@@ -163,7 +163,8 @@ public sealed class ArcSegment : Segment
         double amax = sagitta >= Radius ? Math.PI / 2 : 2 * Math.Acos(1 - sagitta / Radius);
         amax = Math.Min(amax, Math.PI / 2);
         if (maxLength < double.PositiveInfinity) amax = Math.Min(amax, 2 * Math.Asin(Math.Min(1, maxLength / (2 * Radius))));
-        int n = Math.Max(1, (int)Math.Ceiling(Math.Abs(Sweep) / amax - 1e-9));
+        amax = Math.Max(amax, 1e-6); // a zero or denormal tolerance must not ask for unbounded pieces
+        int n = (int)Math.Clamp(Math.Ceiling(Math.Abs(Sweep) / amax - 1e-9), 1, 1_000_000);
         if (Math.Abs(Sweep) > Math.PI * 1.999) n = Math.Max(n, 3);
         var ts = new double[n + 1];
         for (int i = 0; i <= n; i++) ts[i] = (double)i / n;

@@ -128,7 +128,8 @@ public sealed class EllipticalArcSegment : Segment
         double dphi = sagitta >= rmin ? Math.PI / 2 : 2 * Math.Acos(1 - sagitta / rmin);
         double du = Math.Min(Math.PI / 4, dphi * rmin / rmax);
         if (maxLength < double.PositiveInfinity) du = Math.Min(du, maxLength / rmax);
-        int n = Math.Max(2, (int)Math.Ceiling(Math.Abs(Sweep) / du - 1e-9));
+        du = Math.Max(du, 1e-6); // a zero tolerance or an extreme axis ratio must not ask for unbounded pieces
+        int n = (int)Math.Clamp(Math.Ceiling(Math.Abs(Sweep) / du - 1e-9), 2, 1_000_000);
         if (Math.Abs(Sweep) > 1.999 * Math.PI) n = Math.Max(n, 4);
         var ts = new double[n + 1];
         for (int i = 0; i <= n; i++) ts[i] = (double)i / n;

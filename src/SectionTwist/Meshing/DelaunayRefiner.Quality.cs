@@ -7,7 +7,7 @@ internal sealed partial class DelaunayRefiner
 {
     private const double SharpCorner = Math.PI / 3; // input angles below 60 degrees get the small-angle treatment
     private readonly Queue<int> _segQ = new();
-    private readonly Queue<(int T, int A, int B, int C)> _triQ = new();
+    private readonly PriorityQueue<(int T, int A, int B, int C), double> _triQ = new();
     private readonly List<int> _cavity = [];
     private readonly List<int> _encroached = [];
     private int[] _mark = [];
@@ -17,6 +17,35 @@ internal sealed partial class DelaunayRefiner
     /// <summary>Triangles left with an angle below the target because of a small input angle.</summary>
     public int AcceptedSkinny { get; private set; }
 
+    private readonly List<int> _offCurve = [];
+
+    /// <summary>Vertices that could not be moved onto their curve (left on the chord).</summary>
+    public int OffCurveVertices => _offCurve.Count;
+
+    internal IReadOnlyList<int> OffCurveList => _offCurve;
+    internal (int Curve, double T) VertexCurve(int v) => (_vCurve[v], _vT[v]);
+
+    /// <summary>
+    /// Retries moving boundary vertices left on their chord onto the curve: refinement around them has usually
+    /// opened their star by now. Refines again after each successful round.
+    /// </summary>
+    private void RetryOffCurve()
+    {
+        for (int round = 0; round < 8 && _offCurve.Count > 0; round++)
+        {
+            var moved = new List<int>();
+            foreach (int v in _offCurve)
+            {
+                Point2 p = Curve[_vCurve[v]].PointAt(_vT[v]);
+                if (T.TryMove(v, p.X, p.Y, _scratch)) moved.Add(v);
+            }
+            if (moved.Count == 0) return;
+            _offCurve.RemoveAll(moved.Contains);
+            foreach (int v in moved) AfterInsert(v);
+            RunQueues();
+        }
+    }
+
     private void Refine()
     {
         double theta = _opt.MinAngleDegrees;
@@ -25,12 +54,16 @@ internal sealed partial class DelaunayRefiner
         double s = Math.Sin(theta * Math.PI / 180);
         _sin2Min = s * s;
         for (int c = 0; c < ChordCount; c++) if (Encroached(c)) _segQ.Enqueue(c);
-        for (int t = 0; t < T.TriangleCount; t++) if (T.Reg[t] >= 0) _triQ.Enqueue((t, T.V[3 * t], T.V[3 * t + 1], T.V[3 * t + 2]));
+        for (int t = 0; t < T.TriangleCount; t++) if (T.Reg[t] >= 0) EnqueueIfBad(t);
         RunQueues();
     }
 
     /// <summary>Continues refinement after chords were split from outside (Jacobian repair).</summary>
-    internal void ResumeRefinement() => RunQueues();
+    internal void ResumeRefinement()
+    {
+        RunQueues();
+        RetryOffCurve();
+    }
 
     private void RunQueues()
     {
@@ -79,9 +112,22 @@ internal sealed partial class DelaunayRefiner
         return (T.X[a] - T.X[x]) * (T.X[b] - T.X[x]) + (T.Y[a] - T.Y[x]) * (T.Y[b] - T.Y[x]) < 0;
     }
 
-    private bool IsBad(int t, out bool skinnyOnly)
+    /// <summary>
+    /// Queues a bad triangle: oversized ones first, most oversized first, then skinny ones, worst angle first
+    /// (processing the worst first gives fewer vertices; cf. Shewchuk 2002, section 5).
+    /// </summary>
+    private void EnqueueIfBad(int t)
+    {
+        if (IsBad(t, out bool skinnyOnly, out double priority))
+            _triQ.Enqueue((t, T.V[3 * t], T.V[3 * t + 1], T.V[3 * t + 2]), skinnyOnly ? priority : -priority);
+    }
+
+    private bool IsBad(int t, out bool skinnyOnly) => IsBad(t, out skinnyOnly, out _);
+
+    private bool IsBad(int t, out bool skinnyOnly, out double priority)
     {
         skinnyOnly = false;
+        priority = 0;
         int a = T.V[3 * t], b = T.V[3 * t + 1], c = T.V[3 * t + 2];
         double abx = T.X[b] - T.X[a], aby = T.Y[b] - T.Y[a], acx = T.X[c] - T.X[a], acy = T.Y[c] - T.Y[a];
         double bcx = T.X[c] - T.X[b], bcy = T.Y[c] - T.Y[b];
@@ -89,12 +135,13 @@ internal sealed partial class DelaunayRefiner
         double lmin = Math.Min(lab, Math.Min(lac, lbc)), lmax = Math.Max(lab, Math.Max(lac, lbc));
         if (lmin < 4 * _floor * _floor) return false;
         double h = Size.At((T.X[a] + T.X[b] + T.X[c]) / 3, (T.Y[a] + T.Y[b] + T.Y[c]) / 3);
-        if (lmax > h * h) return true;
+        if (lmax > h * h) { priority = lmax / (h * h); return true; }
         double area2 = abx * acy - aby * acx;
         // sin^2 of the smallest angle = (2A)^2 / (product of the squared lengths of the two edges beside it)
         double sin2 = area2 * area2 / (lab * lac * lbc / lmin);
         if (sin2 >= _sin2Min) return false;
         skinnyOnly = true;
+        priority = sin2;
         return true;
     }
 
@@ -109,8 +156,16 @@ internal sealed partial class DelaunayRefiner
         int u = T.V[3 * t + Triangulation.Next(k)], v = T.V[3 * t + Triangulation.Prev(k)], w = T.V[3 * t + k];
         int cu = _vCurve[u], cv = _vCurve[v];
         if (cu < 0 || cv < 0 || cu == cv) return false;
-        int corner = _curveNext[cu] == cv ? cv : _curveNext[cv] == cu ? cu : -1;
-        if (corner < 0 || _cornerAngle[corner] >= SharpCorner) return false;
+        // the input vertex shared by the two curves (two curves of a two-curve loop share both ends: take the nearer)
+        int corner = -1;
+        double dbest = double.PositiveInfinity;
+        foreach (int cand in (ReadOnlySpan<int>)[_curveNext[cu] == cv ? cv : -1, _curveNext[cv] == cu ? cu : -1])
+        {
+            if (cand < 0 || _cornerAngle[cand] >= SharpCorner) continue;
+            double dk = Point2.Distance(T.Node(u), T.Node(_curveStartVertex[cand]));
+            if (dk < dbest) { dbest = dk; corner = cand; }
+        }
+        if (corner < 0) return false;
         int kv = _curveStartVertex[corner];
         bool accept = w == kv;
         if (!accept)
@@ -166,7 +221,7 @@ internal sealed partial class DelaunayRefiner
                 SplitChord(s);
                 any = true;
             }
-            if (any) _triQ.Enqueue((t, T.V[3 * t], T.V[3 * t + 1], T.V[3 * t + 2]));
+            if (any) EnqueueIfBad(t);
             else AcceptedSkinny++;
             return;
         }
@@ -252,14 +307,14 @@ internal sealed partial class DelaunayRefiner
         int a = ChA[c], b = ChB[c], curve = ChCurve[c];
         double t0 = ChT0[c], t1 = ChT1[c];
         double tm = 0.5 * (t0 + t1);
-        double len = _curveLen[curve];
         bool atStart = t0 == 0, atEnd = t1 == 1;
-        if (atStart != atEnd && len > 0)
+        if (atStart != atEnd)
         {
-            double half = 0.5 * (t1 - t0) * len;
-            double dist = Math.Pow(2, Math.Round(Math.Log2(half)));
-            double tShell = atStart ? dist / len : 1 - dist / len;
-            if (tShell > t0 + 0.2 * (t1 - t0) && tShell < t1 - 0.2 * (t1 - t0)) tm = tShell;
+            // concentric shells: the new vertex at a power-of-two (Euclidean) distance from the input vertex
+            Point2 corner = atStart ? Curve[curve].Start : Curve[curve].End;
+            double full = Point2.Distance(corner, atStart ? T.Node(b) : T.Node(a));
+            double dist = Math.Pow(2, Math.Round(Math.Log2(0.5 * full)));
+            if (dist > 0.2 * full && dist < 0.8 * full) tm = ParameterAtDistance(curve, corner, dist, t0, t1, atStart);
         }
         int e = T.FindEdge(a, b);
         if (e < 0) throw Degenerate(a, "internal: a boundary chord was lost");
@@ -271,9 +326,25 @@ internal sealed partial class DelaunayRefiner
         ChB[c] = m; ChT1[c] = tm;
         T.SplitEdge(e / 3, e % 3, m, c, c2);
         T.Legalize();
-        if (!_curveStraight[curve] && !T.TryMove(m, p.X, p.Y, _scratch)) OffCurveVertices++;
+        if (!_curveStraight[curve] && !T.TryMove(m, p.X, p.Y, _scratch)) _offCurve.Add(m);
         AfterInsert(m);
         return m;
+    }
+
+    /// <summary>
+    /// The parameter in [t0, t1] whose curve point lies at <paramref name="dist"/> from <paramref name="corner"/>
+    /// (bisection; the distance grows monotonically away from the curve end on a chord-sized piece).
+    /// </summary>
+    private double ParameterAtDistance(int curve, Point2 corner, double dist, double t0, double t1, bool fromStart)
+    {
+        double lo = t0, hi = t1;
+        for (int i = 0; i < 60; i++)
+        {
+            double mid = 0.5 * (lo + hi);
+            bool inside = Point2.Distance(Curve[curve].PointAt(mid), corner) < dist;
+            if (inside == fromStart) lo = mid; else hi = mid;
+        }
+        return 0.5 * (lo + hi);
     }
 
     private void AfterInsert(int m)
@@ -281,7 +352,7 @@ internal sealed partial class DelaunayRefiner
         T.Star(m, _scratch);
         foreach (int t in _scratch)
         {
-            if (T.Reg[t] >= 0) _triQ.Enqueue((t, T.V[3 * t], T.V[3 * t + 1], T.V[3 * t + 2]));
+            if (T.Reg[t] >= 0) EnqueueIfBad(t);
             for (int i = 0; i < 3; i++)
             {
                 int s = T.Seg[3 * t + i];

@@ -36,9 +36,6 @@ internal sealed partial class DelaunayRefiner
     private int[] _vCurve = new int[64], _vCorner = new int[64];
     private double[] _vT = new double[64];
 
-    /// <summary>Vertices that could not be moved onto their curve (left on the chord).</summary>
-    public int OffCurveVertices { get; private set; }
-
     public DelaunayRefiner(Profile profile, MeshOptions options, CancellationToken ct)
     {
         _profile = profile; _opt = options; _ct = ct;
@@ -79,9 +76,13 @@ internal sealed partial class DelaunayRefiner
 
     internal int LoopOfChord(int c) => _curveLoop[ChCurve[c]];
 
+    private double _arcSagRatio;
+
     /// <summary>Runs the whole pipeline up to a refined constrained Delaunay triangulation.</summary>
     public void Run()
     {
+        // sagitta / chord of an arc piece spanning the largest allowed angle: tan(angle / 4) / 2
+        _arcSagRatio = 0.5 * Math.Tan(Math.Clamp(_opt.MaxArcAngleDegrees, 1, 90) * Math.PI / 180 / 4);
         BuildCurves();
         double hmax = _opt.MaxEdgeLength ?? _diag / 20;
         if (!(hmax > 0) || double.IsInfinity(hmax))
@@ -160,7 +161,7 @@ internal sealed partial class DelaunayRefiner
     /// <summary>
     /// Parameters of the boundary vertices on each curve: the curve's own subdivision, then bisection in the
     /// parameter until each chord is no longer than the local size and its sagitta is within the chord tolerance
-    /// (default 1e-3 of the local radius of curvature, estimated from the chord c and sagitta s as c^2 / 8s).
+    /// (default: the sagitta of an arc piece of MeshOptions.MaxArcAngleDegrees, so curved 6-node edges follow the curve).
     /// </summary>
     private List<double>[] SubdivideCurves(List<double>[]? start = null)
     {
@@ -191,7 +192,7 @@ internal sealed partial class DelaunayRefiner
             {
                 Point2 pm = seg.PointAt(0.5 * (t0 + t1));
                 double sag = Math.Abs(Point2.Cross(p1 - p0, pm - p0)) / len;
-                split = _opt.ChordTolerance is double tol ? sag > tol : sag * sag > 1.25e-4 * len * len;
+                split = _opt.ChordTolerance is double tol ? sag > tol : sag > _arcSagRatio * len;
             }
             if (t1 - t0 >= 1 && !_curveStraight[c]) split = true; // a closed curve needs interior points
         }

@@ -11,8 +11,15 @@ internal sealed record MeshOptions
     /// <summary>Smallest angle wanted in every triangle, degrees, except where the input itself has a smaller angle.</summary>
     public double MinAngleDegrees { get; init; } = 25;
 
-    /// <summary>Largest distance (metres) between an arc and the straight chord between two boundary vertices on it; null: 1e-3 of the local radius.</summary>
+    /// <summary>Largest distance (metres) between an arc and the straight chord between two boundary vertices on it; null: see MaxArcAngleDegrees.</summary>
     public double? ChordTolerance { get; init; }
+
+    /// <summary>
+    /// Largest angle (degrees) a boundary edge may span on a curve when no <see cref="ChordTolerance"/> is given. Curved
+    /// 6-node edges follow an arc to fourth order: 5 degrees (the default) keeps the area error of a circle near 1e-9,
+    /// 30 degrees near 3e-6 (the torsion analysis picks the angle from the requested accuracy and refines further).
+    /// </summary>
+    public double MaxArcAngleDegrees { get; init; } = 5;
 
     /// <summary>Optional wanted edge length at a point (metres); the mesh is refined until edges are no longer than this.</summary>
     public Func<Point2, double>? SizeField { get; init; }

@@ -7,7 +7,7 @@ namespace SectionTwist.Profiles;
 /// External involute spline shaft: module m, z teeth, pressure angle 30, 37.5 or 45 degrees, major diameter Da, minor
 /// diameter Df, root fillet r. The flanks are the true involute of the base circle m z cos(alpha) / 2 (below the base
 /// circle, radial), with the basic tooth thickness pi m / 2 on the pitch circle m z. Each flank is replaced by circular
-/// arcs through three involute points, refined until no arc deviates from the involute by more than 1e-5 m. The
+/// arcs through three involute points, refined until no arc deviates from the involute by more than 5e-5 m. The
 /// root fillet is the circle of radius r tangent to the flank and the minor circle, found by bisection on the
 /// involute roll angle. Default diameters (ISO 4156 external splines, from memory): 30 deg Da = m (z + 1),
 /// Df = m (z - 1.5); 37.5 deg Da = m (z + 0.9), Df = m (z - 1.4); 45 deg Da = m (z + 0.8), Df = m (z - 1.2);
@@ -16,10 +16,10 @@ namespace SectionTwist.Profiles;
 internal static class InvoluteSplineTemplate
 {
     /// <summary>Largest deviation of a fitted flank arc from the true involute, in modules.</summary>
-    internal const double FlankTolerance = 1e-5;
+    internal const double FlankTolerance = 5e-5;
 
     public static TemplateDefinition Definition { get; } = new(
-        new TemplateInfo("involute", "involute spline shaft (external), true involute flanks fitted by arcs within 1e-5 module",
+        new TemplateInfo("involute", "involute spline shaft (external), true involute flanks fitted by arcs within 5e-5 module",
             Params(new TemplateParameter("m", ParameterKind.Length, "module"),
                 new TemplateParameter("z", ParameterKind.Count, "number of teeth"),
                 new TemplateParameter("alpha", ParameterKind.Angle, "pressure angle: 30, 37.5 or 45", "30"),

@@ -34,6 +34,12 @@ internal sealed partial class ShaftFileReader
         {
             throw new SectionTwistException("shaft-file", $"{_file.FileName}:{e.Start.Line}:{e.Start.Column}: not valid YAML: {FirstLine(e.InnerException?.Message ?? e.Message)}; check the indentation and quoting there");
         }
+        catch (InvalidOperationException)
+        {
+            // The YAML scanner gives up without a position on some malformed input (e.g. an unclosed '{'): report the last good spot.
+            var (line, col) = LastGoodPosition(text);
+            throw new SectionTwistException("shaft-file", $"{_file.FileName}:{line}:{col}: not valid YAML after this point; check for an unclosed '{{' or '[' or a stray quote");
+        }
         if (stream.Documents.Count == 0)
             throw new SectionTwistException("shaft-file", $"{_file.FileName}:1: the file is empty; see docs/shaft-file.md for an example");
         var root = new YamlMap(_file, stream.Documents[0].RootNode, "the shaft file", TopKeys);
@@ -62,6 +68,19 @@ internal sealed partial class ShaftFileReader
             TwistRateLimit = limit,
         };
         return new ShaftDocument(path, model, units);
+    }
+
+    private static (long Line, long Column) LastGoodPosition(string text)
+    {
+        long line = 1, col = 1;
+        try
+        {
+            var parser = new Parser(new StringReader(text));
+            while (parser.MoveNext()) if (parser.Current is { } ev) { line = ev.Start.Line; col = ev.Start.Column; }
+        }
+        catch (YamlException e) { line = e.Start.Line; col = e.Start.Column; }
+        catch (InvalidOperationException) { }
+        return (line, col);
     }
 
     private static string FirstLine(string s) => s.Split('\n')[0].Trim().TrimEnd('.');

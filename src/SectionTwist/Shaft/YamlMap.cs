@@ -72,7 +72,7 @@ internal sealed class YamlMap
             int d = Distance(word.ToLowerInvariant(), c.ToLowerInvariant());
             if (d < bestD) { bestD = d; best = c; }
         }
-        return bestD <= Math.Max(1, Math.Min(3, word.Length / 2)) ? best : null;
+        return bestD <= Math.Max(2, Math.Min(3, word.Length / 2)) ? best : null;
     }
 
     private static int Distance(string a, string b)

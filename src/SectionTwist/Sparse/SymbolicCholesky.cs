@@ -76,7 +76,7 @@ internal sealed class SymbolicCholesky
         {
             FillOrdering.Natural => Identity(n),
             FillOrdering.Amd => Amd.Order(a, ct),
-            _ => Amd.Order(a, ct), // ND_PLACEHOLDER
+            _ => NestedDissection.Order(a, coordinates, ct),
         };
         ct.ThrowIfCancellationRequested();
         var (fp, fi, map) = Permute(a, perm);

@@ -52,11 +52,32 @@ internal static class AdaptiveSizing
     }
 
     /// <summary>
+    /// Size sources at the boundary edges whose shear is within 3 % of the peak: the new size is the edge length times
+    /// <paramref name="factor"/> (at most 200 sources, evenly picked).
+    /// </summary>
+    public static IReadOnlyList<(Point2 Where, double Size)> PeakSources(TorsionSolution sol, double factor)
+    {
+        var mesh = sol.Mesh;
+        var list = new List<(Point2, double)>();
+        foreach (var be in mesh.BoundaryEdges)
+        {
+            double q = Math.Abs(sol.BoundaryFlux[be.Mid]);
+            if (!(q >= 0.97 * sol.MaxGradient)) continue;
+            double len = Point2.Distance(mesh.Node(be.A), mesh.Node(be.Mid)) + Point2.Distance(mesh.Node(be.Mid), mesh.Node(be.B));
+            list.Add((mesh.Node(be.Mid), factor * len));
+        }
+        if (list.Count <= 200) return list;
+        int step = (list.Count + 199) / 200;
+        return list.Where((_, i) => i % step == 0).ToList();
+    }
+
+    /// <summary>
     /// A size field for a new mesh that aims at a relative J error of <paramref name="target"/>, sampled on a grid of
     /// buckets over the profile (each bucket keeps the smallest size wanted by the elements that overlap it).
     /// <paramref name="elementsPerParent"/> maps indicators measured on a uniformly refined mesh back to its parent elements.
     /// </summary>
-    public static Func<Point2, double> SizeField(Mesh mesh, double[] eta2, double j, double target, double hMax, int elementsPerParent = 1)
+    public static Func<Point2, double> SizeField(Mesh mesh, double[] eta2, double j, double target, double hMax,
+        IReadOnlyList<(Point2 Where, double Size)>? sources = null, int elementsPerParent = 1)
     {
         int ne = mesh.ElementCount / elementsPerParent;
         var parentEta = new double[ne];
@@ -86,6 +107,20 @@ internal static class AdaptiveSizing
             for (int ix = x0; ix <= x1; ix++)
                 for (int iy = y0; iy <= y1; iy++)
                     cell[ix * nc + iy] = Math.Min(cell[ix * nc + iy], hNew);
+        }
+        // point sources with a size growing 0.3 per unit distance around them
+        foreach (var (w, hs) in sources ?? [])
+        {
+            double reach = 8 * hs;
+            int x0 = Math.Clamp((int)((w.X - reach - box.MinX) / cw), 0, nc - 1), x1 = Math.Clamp((int)((w.X + reach - box.MinX) / cw), 0, nc - 1);
+            int y0 = Math.Clamp((int)((w.Y - reach - box.MinY) / ch), 0, nc - 1), y1 = Math.Clamp((int)((w.Y + reach - box.MinY) / ch), 0, nc - 1);
+            for (int ix = x0; ix <= x1; ix++)
+                for (int iy = y0; iy <= y1; iy++)
+                {
+                    var c = new Point2(box.MinX + (ix + 0.5) * cw, box.MinY + (iy + 0.5) * ch);
+                    double d = Math.Max(0, Point2.Distance(c, w) - 0.75 * Math.Max(cw, ch));
+                    cell[ix * nc + iy] = Math.Min(cell[ix * nc + iy], hs + 0.3 * d);
+                }
         }
         return p =>
         {

@@ -23,7 +23,7 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
     private SectionResult Run()
     {
         double acc = Math.Clamp(options.Accuracy, 1e-9, 0.1);
-        double shearTarget = Math.Max(10 * acc, 1e-4);
+        double shearTarget = Math.Clamp(50 * acc, 1e-3, 5e-3);
         var props = profile.Properties;
         var warnings = new List<AnalysisWarning>();
         var corners = CornerAnalysis.Corners(profile);
@@ -42,13 +42,14 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
         double h = Math.Min(0.6 * size * Math.Pow(acc, 0.25), profile.Bounds.Diagonal / 8);
         TorsionSolution? coarse = null, fine = null;
         Mesh? coarseMesh = null;
+        Func<Point2, double>? sizeField = null;
         double estJ = double.NaN, estT = double.NaN;
         Report("mesh", 0);
         for (int pass = 0; pass < MaxPasses; pass++)
         {
             ct.ThrowIfCancellationRequested();
             double f0 = (double)pass / MaxPasses, span = 1.0 / MaxPasses;
-            coarseMesh = Mesher.Generate(profile, new MeshOptions { MaxEdgeLength = h, MaxTriangles = options.MaxElements }, ct);
+            coarseMesh = Mesher.Generate(profile, new MeshOptions { MaxEdgeLength = h, MaxTriangles = options.MaxElements, SizeField = sizeField, MaxArcAngleDegrees = ArcAngle(acc) }, ct);
             Report("solve", f0 + 0.2 * span);
             coarse = TorsionSolver.Solve(coarseMesh, holeArea, ct);
             if (!options.EstimateError) { fine = coarse; break; }
@@ -73,10 +74,19 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
                     $"requested accuracy {acc:G2} not reached after {MaxPasses} passes (estimated {estJ:G2} for J); results carry the stated estimate"));
                 break;
             }
-            double factor = 1;
-            if (estJ > acc) factor = Math.Min(factor, Math.Pow(acc / estJ, 1 / p));
-            if (!shearOk) factor = Math.Min(factor, Math.Pow(shearTarget / estT, 1 / ShearOrder));
-            h *= Math.Clamp(0.8 * factor, 0.2, 0.7);
+            // Next pass: a size field from the Zienkiewicz-Zhu indicators of the coarse solution, aimed so that the next
+            // coarse mesh has a J error of about 2^p times the target (the refined solve then meets the target).
+            var coarseField = FieldRecovery.Build(coarse);
+            var eta2 = AdaptiveSizing.Indicators(coarse, coarseField);
+            // Richardson gives the coarse error E_r = |Jf - Jc| 2^p / (2^p - 1); the indicators give E_zz. Ask the
+            // indicators for the reduction that Richardson says is needed (this calibrates them at singular corners).
+            double coarseErr = Math.Abs(fine.J - coarse.J) * Math.Pow(2, p) / (Math.Pow(2, p) - 1) / fine.J;
+            double wanted = estJ > acc ? 0.5 * acc * (Math.Pow(2, p) - 1) : coarseErr;
+            double zz = eta2.Sum() / coarse.J;
+            double coarseTarget = coarseErr > 0 && zz > 0 ? zz * Math.Min(1, wanted / coarseErr) : acc;
+            // Peak shear not resolved yet: smaller boundary elements wherever the boundary shear is within 3 % of the peak.
+            var peaks = shearOk ? [] : AdaptiveSizing.PeakSources(coarse, Math.Clamp(0.8 * Math.Pow(shearTarget / estT, 1 / ShearOrder), 0.25, 0.7));
+            sizeField = AdaptiveSizing.SizeField(coarseMesh, eta2, coarse.J, coarseTarget, h, peaks);
             Report("mesh", f0 + span);
         }
         ct.ThrowIfCancellationRequested();
@@ -107,6 +117,9 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
             RegionTorsionConstants = regionJ,
         };
     }
+
+    /// <summary>Largest arc angle per boundary edge: coarse curved edges suffice at modest accuracy.</summary>
+    private static double ArcAngle(double accuracy) => Math.Clamp(30 * Math.Pow(accuracy / 1e-4, 0.125), 10, 45);
 
     private void Report(string stage, double fraction) => progress?.Report(new AnalysisProgress(stage, Math.Clamp(fraction, 0, 1)));
 

@@ -79,3 +79,19 @@ public class SectionPropertiesTests
         Assert.Equal("hole-outside", e.Code);
     }
 }
+
+public class SegmentSubdivisionTests
+{
+    // Found by fuzzing DXF input: a zero sagitta or an extreme ellipse must not overflow the piece count.
+    [Fact]
+    public void Zero_sagitta_and_thin_ellipse_give_bounded_subdivisions()
+    {
+        var arc = ArcSegment.Circle(default, 1);
+        var ts = arc.Subdivide(0);
+        Assert.InRange(ts.Length, 4, 1_000_001);
+        var thin = EllipticalArcSegment.Full(default, 1, 1e-9);
+        var te = thin.Subdivide(0);
+        Assert.InRange(te.Length, 3, 1_000_001);
+        Assert.Equal(1.0, te[^1]);
+    }
+}

@@ -78,6 +78,13 @@ internal static class MeshAssert
         new((m.X[m.Elements[6 * e]] + m.X[m.Elements[6 * e + 1]] + m.X[m.Elements[6 * e + 2]]) / 3,
             (m.Y[m.Elements[6 * e]] + m.Y[m.Elements[6 * e + 1]] + m.Y[m.Elements[6 * e + 2]]) / 3);
 
+    public static double ShortestEdge(Mesh m, int e)
+    {
+        double min = double.PositiveInfinity;
+        for (int i = 0; i < 3; i++) min = Math.Min(min, Point2.Distance(m.Node(m.Elements[6 * e + i]), m.Node(m.Elements[6 * e + (i + 1) % 3])));
+        return min;
+    }
+
     public static double LongestEdge(Mesh m, int e)
     {
         double max = 0;

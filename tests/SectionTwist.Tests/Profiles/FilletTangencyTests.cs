@@ -37,8 +37,8 @@ public class FilletTangencyTests
     }
 
     // Exact constructions: tangent to rounding. Involute flanks are arcs fitted through involute points within
-    // 1e-5 module, so their end tangents differ from the true involute's by up to about 1e-3 rad.
-    private static double Kink(string spec) => spec.StartsWith("involute", StringComparison.Ordinal) ? 1e-3 : 1e-7;
+    // 5e-5 module, so their end tangents differ from the true involute's by up to about 2.5e-3 rad.
+    private static double Kink(string spec) => spec.StartsWith("involute", StringComparison.Ordinal) ? 4e-3 : 1e-7;
 
     private static void AssertTangent(Segment a, Segment b, string spec, double tol)
     {

@@ -213,7 +213,7 @@ public class TemplateGeometryTests
     {
         // No root fillet: each tooth is {|phi| < psi(R)} between Df/2 and Da/2 with psi from the involute function
         // (half tooth angle psi(R) = pi/(2z) + inv(alpha) - inv(acos(Rb/R)), radial below the base circle).
-        // The flanks are arcs fitted within 1e-5 module, so the area agrees to about 1e-7.
+        // The flanks are arcs fitted within 5e-5 module, so the area agrees to about 1e-6.
         double m = 2 * Mm, alpha = alphaDeg * Math.PI / 180;
         var info = alphaDeg switch { 30 => (1.0, 1.5), 37.5 => (0.9, 1.4), _ => (0.8, 1.2) };
         double ra = m * (z + info.Item1) / 2, rf = m * (z - info.Item2) / 2, rb = m * z / 2 * Math.Cos(alpha);
@@ -230,7 +230,7 @@ public class TemplateGeometryTests
         double toothArea = Simpson(rf, Math.Max(rf, Math.Min(rb, ra))) + Simpson(Math.Max(rf, rb), ra);
         double expected = Math.PI * rf * rf + z * toothArea;
         var p = P(string.Create(System.Globalization.CultureInfo.InvariantCulture, $"involute:m=2,z={z},alpha={alphaDeg},r=0"));
-        Tol.Rel(expected, p.Area, 2e-7, "polar integral of the involute tooth");
+        Tol.Rel(expected, p.Area, 1e-6, "polar integral of the involute tooth");
         Tol.Rel(p.Ixx, p.Iyy, 1e-9);
         // A root fillet adds material.
         Assert.True(P(string.Create(System.Globalization.CultureInfo.InvariantCulture, $"involute:m=2,z={z},alpha={alphaDeg}")).Area > p.Area);

@@ -44,3 +44,25 @@ public class OrderingTests
         Assert.True(amd.Flops < 0.5 * nat.Flops, $"amd {amd.Flops} natural {nat.Flops}");
     }
 }
+
+public class NestedDissectionTests
+{
+    [Fact]
+    public void GeometricAndGraphDissectionArePermutationsWithLessFillThanNatural()
+    {
+        // m = 35 gives 4,761 unknowns, above the AMD leaf size, so at least one separator level is built.
+        var a = ReferenceProblems.P2Laplacian(35, out var xy);
+        var nat = SymbolicCholesky.Analyze(a, FillOrdering.Natural);
+        foreach (var coords in new[] { xy, null })
+        {
+            var p = NestedDissection.Order(a, coords);
+            Assert.True(SparseTestUtil.IsPermutation(p, a.N));
+            var s = SymbolicCholesky.Analyze(a, FillOrdering.NestedDissection, coords);
+            Assert.True(s.NonZerosL < 0.6 * nat.NonZerosL, $"nd {s.NonZerosL} natural {nat.NonZerosL}");
+            var (x, b) = SparseTestUtil.Manufactured(a);
+            var sol = new double[a.N];
+            SpdSolver.Factorize(s, a).Solve(b, sol);
+            Assert.True(SparseTestUtil.RelativeError(sol, x) < 1e-10);
+        }
+    }
+}

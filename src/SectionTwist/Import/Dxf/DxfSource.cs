@@ -1,0 +1,39 @@
+using SectionTwist.Geometry;
+
+namespace SectionTwist.Import.Dxf;
+
+/// <summary>The <c>.dxf</c> profile source: <see cref="DxfProfiles.Read(string, DxfReadOptions?)"/> behind <see cref="IProfileSource"/>.</summary>
+internal sealed class DxfSource : IProfileSource
+{
+    public string Name => "dxf";
+
+    public IReadOnlyList<string> Extensions { get; } = [".dxf"];
+
+    public bool CanLoad(string source) => string.Equals(Path.GetExtension(source), ".dxf", StringComparison.OrdinalIgnoreCase) && File.Exists(source);
+
+    public Profile Load(string source, ProfileSourceOptions options)
+    {
+        var read = DxfProfiles.Read(source, ToDxf(options));
+        Report(read.Report, options.Notes);
+        return read.Profile;
+    }
+
+    /// <summary>Maps the generic source options; the spline chord tolerance is a tenth of the requested accuracy (at most 1e-5).</summary>
+    internal static DxfReadOptions ToDxf(ProfileSourceOptions o) => new()
+    {
+        Unit = o.Unit,
+        Layer = o.Layer,
+        Part = o.Part,
+        SnapTolerance = o.SnapTolerance ?? 1e-6,
+        SplineTolerance = Math.Clamp(o.Accuracy / 10, 1e-9, 1e-5),
+    };
+
+    internal static void Report(DxfImportReport r, Action<string>? notes)
+    {
+        if (notes is null) return;
+        foreach (var w in r.Warnings) notes(w);
+        if (r.LargestGapClosed > 0) notes($"joined end points up to {r.LargestGapClosed:G3} {r.Unit?.Symbol ?? "drawing units"} apart");
+        if (r.DuplicatesDropped > 0) notes($"dropped {r.DuplicatesDropped} duplicate or overlapping piece(s)");
+        if (r.Parts.Count > 1 && r.SelectedPart is null) notes($"{r.Parts.Count} separate parts analysed together; pick one with --part N (largest first)");
+    }
+}

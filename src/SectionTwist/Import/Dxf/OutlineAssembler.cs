@@ -1,0 +1,137 @@
+using SectionTwist.Geometry;
+
+namespace SectionTwist.Import.Dxf;
+
+/// <summary>
+/// Builds closed loops from loose outline pieces: flattens splines, snaps end points that lie within a tolerance
+/// (uniform-grid spatial hash with cell size = tolerance, union-find clusters, so near ends join transitively), moves
+/// line ends onto the cluster point (arcs are re-fitted through their mid point), drops degenerate, duplicate and
+/// overlapping pieces, and chains the rest into loops by walking node adjacency.
+/// </summary>
+internal sealed partial class OutlineAssembler(string file, double snapTol, double splineTol, double diag)
+{
+    /// <summary>Largest distance an end point was moved by snapping (drawing units).</summary>
+    public double LargestGap { get; private set; }
+    public int DuplicatesDropped { get; private set; }
+    public int DegenerateDropped { get; private set; }
+    public List<Loop> Loops { get; } = [];
+    /// <summary>Layers that each loop's pieces came from.</summary>
+    public List<string[]> LoopLayers { get; } = [];
+
+    private readonly List<OutlinePiece> _pieces = [];
+    private List<Point2> _nodes = [];
+
+    public void Run(IEnumerable<SourcedCurve> curves)
+    {
+        foreach (var c in curves)
+        {
+            if (c.Segment is not null) { _pieces.Add(new OutlinePiece(c.Segment, c.Source, c.Layer)); continue; }
+            var pts = c.Spline!.Flatten(splineTol, 200_000);
+            var dedup = new List<Point2> { pts[0] };
+            for (int i = 1; i < pts.Count; i++) if (pts[i] != dedup[^1]) dedup.Add(pts[i]);
+            for (int i = 0; i + 1 < dedup.Count; i++) _pieces.Add(new OutlinePiece(new LineSegment(dedup[i], dedup[i + 1]), c.Source, c.Layer));
+        }
+        var closed = _pieces.Where(p => p.IsClosedCurve).ToList();
+        _pieces.RemoveAll(p => p.IsClosedCurve);
+        Snap();
+        Rebuild();
+        DropDuplicates();
+        AddClosedCurves(closed);
+        Chain();
+    }
+
+    private void AddClosedCurves(List<OutlinePiece> closed)
+    {
+        for (int i = 0; i < closed.Count; i++)
+        {
+            bool dup = false;
+            for (int j = 0; j < i && !dup; j++) dup = Covers(closed[j].Segment, closed[i].Segment);
+            if (dup) { DuplicatesDropped++; continue; }
+            Loops.Add(new Loop([closed[i].Segment]));
+            LoopLayers.Add([closed[i].Layer]);
+        }
+    }
+
+    private void Snap()
+    {
+        int n = _pieces.Count * 2;
+        var pts = new Point2[n];
+        for (int i = 0; i < _pieces.Count; i++) { pts[2 * i] = _pieces[i].Segment.Start; pts[2 * i + 1] = _pieces[i].Segment.End; }
+        var parent = new int[n];
+        for (int i = 0; i < n; i++) parent[i] = i;
+        int Find(int x) { while (parent[x] != x) { parent[x] = parent[parent[x]]; x = parent[x]; } return x; }
+        double cell = snapTol > 0 ? snapTol : Math.Max(diag, 1) * 1e-15;
+        var grid = new Dictionary<(long, long), List<int>>();
+        for (int i = 0; i < n; i++)
+        {
+            long cx = (long)Math.Floor(pts[i].X / cell), cy = (long)Math.Floor(pts[i].Y / cell);
+            for (long dx = -1; dx <= 1; dx++)
+                for (long dy = -1; dy <= 1; dy++)
+                    if (grid.TryGetValue((cx + dx, cy + dy), out var list))
+                        foreach (int j in list)
+                            if (Point2.Distance(pts[i], pts[j]) <= snapTol || pts[i] == pts[j])
+                            {
+                                int ri = Find(i), rj = Find(j);
+                                if (ri != rj) parent[ri] = rj;
+                            }
+            if (!grid.TryGetValue((cx, cy), out var own)) grid[(cx, cy)] = own = [];
+            own.Add(i);
+        }
+        // one node per cluster, placed at the end of the most exact curve in it
+        var nodeOf = new Dictionary<int, int>();
+        var nodes = new List<Point2>();
+        var best = new List<int>();
+        for (int i = 0; i < n; i++)
+        {
+            int r = Find(i);
+            int pr = _pieces[i / 2].Priority;
+            if (!nodeOf.TryGetValue(r, out int node)) { nodeOf[r] = node = nodes.Count; nodes.Add(pts[i]); best.Add(pr); }
+            else if (pr > best[node]) { nodes[node] = pts[i]; best[node] = pr; }
+            if (i % 2 == 0) _pieces[i / 2].A = node; else _pieces[i / 2].B = node;
+        }
+        _nodes = nodes;
+        for (int i = 0; i < n; i++)
+        {
+            int node = i % 2 == 0 ? _pieces[i / 2].A : _pieces[i / 2].B;
+            LargestGap = Math.Max(LargestGap, Point2.Distance(pts[i], _nodes[node]));
+        }
+    }
+
+    private void Rebuild()
+    {
+        foreach (var p in _pieces)
+        {
+            if (p.A == p.B) { p.Dead = true; DegenerateDropped++; continue; }
+            Point2 a = _nodes[p.A], b = _nodes[p.B];
+            var s = p.Segment;
+            if (s.Start == a && s.End == b) continue;
+            switch (s)
+            {
+                case LineSegment: p.Segment = new LineSegment(a, b); break;
+                case ArcSegment arc:
+                    try { p.Segment = ArcSegment.ThroughThreePoints(a, arc.PointAt(0.5), b); }
+                    catch (SectionTwistException) { p.Segment = new LineSegment(a, b); }
+                    break;
+                default:
+                    if (Point2.Distance(s.Start, a) > 1e-10 * diag || Point2.Distance(s.End, b) > 1e-10 * diag)
+                    {
+                        // an elliptical arc whose ends must move: replace it by chords within the spline tolerance
+                        var pts = s.Flatten(splineTol).ToArray();
+                        pts[0] = a; pts[^1] = b;
+                        var ids = new int[pts.Length];
+                        ids[0] = p.A; ids[^1] = p.B;
+                        for (int i = 1; i + 1 < pts.Length; i++) { ids[i] = _nodes.Count; _nodes.Add(pts[i]); }
+                        p.Segment = new LineSegment(pts[0], pts[1]);
+                        p.B = ids[1];
+                        for (int i = 1; i + 1 < pts.Length; i++)
+                            _extra.Add(new OutlinePiece(new LineSegment(pts[i], pts[i + 1]), p.Source, p.Layer) { A = ids[i], B = ids[i + 1] });
+                    }
+                    break;
+            }
+        }
+        _pieces.AddRange(_extra);
+        _extra.Clear();
+    }
+
+    private readonly List<OutlinePiece> _extra = [];
+}

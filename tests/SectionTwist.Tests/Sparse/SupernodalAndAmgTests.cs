@@ -1,0 +1,87 @@
+using SectionTwist.Sparse;
+
+namespace SectionTwist.Tests.Sparse;
+
+public class SupernodalAndAmgTests
+{
+    // Residual and cross-method checks on manufactured solutions (b = A x); tolerances are common practice, no source.
+
+    [Theory]
+    [InlineData(4)]
+    [InlineData(20)]
+    public void SupernodalEqualsSimplicial(int m)
+    {
+        var a = ReferenceProblems.P2Laplacian(m, out _);
+        var (x, b) = SparseTestUtil.Manufactured(a);
+        var s = SymbolicCholesky.Analyze(a, FillOrdering.Amd);
+        var x1 = new double[a.N];
+        var x2 = new double[a.N];
+        SimplicialCholesky.Factorize(s, a).Solve(b, x1);
+        SupernodalCholesky.Factorize(s, a).Solve(b, x2);
+        Assert.True(a.RelativeResidual(x2, b) < 1e-13);
+        Assert.True(SparseTestUtil.RelativeError(x2, x1) < 1e-11);
+        Assert.True(SparseTestUtil.RelativeError(x2, x) < 1e-10);
+    }
+
+    [Fact]
+    public void SupernodalSolvesRandomSpd()
+    {
+        var a = ReferenceProblems.RandomSpd(1500, 3, 11);
+        var (x, b) = SparseTestUtil.Manufactured(a);
+        var sol = new double[a.N];
+        SupernodalCholesky.Factorize(SymbolicCholesky.Analyze(a, FillOrdering.Amd), a).Solve(b, sol);
+        Assert.True(a.RelativeResidual(sol, b) < 1e-13);
+        Assert.True(SparseTestUtil.RelativeError(sol, x) < 1e-11);
+    }
+
+    [Fact]
+    public void SupernodesPartitionTheColumns()
+    {
+        var a = ReferenceProblems.P2Laplacian(15, out _);
+        var sn = SymbolicCholesky.Analyze(a, FillOrdering.Amd).Supernodes;
+        Assert.Equal(0, sn.Start[0]);
+        Assert.Equal(a.N, sn.Start[sn.Count]);
+        for (int k = 0; k < sn.Count; k++)
+        {
+            Assert.True(sn.Start[k + 1] > sn.Start[k]);
+            Assert.True(sn.Parent[k] == -1 || sn.Parent[k] > k);
+        }
+        Assert.True(sn.Count < a.N / 2, $"{sn.Count} supernodes for {a.N} columns"); // P2 grids give wide supernodes
+    }
+
+    [Fact]
+    public void AmgCgAgreesWithTheDirectSolve()
+    {
+        // m = 40 gives 6,241 unknowns: above the coarse size, so at least two levels are exercised.
+        var a = ReferenceProblems.P2Laplacian(40, out _);
+        var (x, b) = SparseTestUtil.Manufactured(a);
+        var direct = new double[a.N];
+        SpdSolver.CreateDirect(a).Solve(b, direct);
+        var cg = AmgCgSolver.Create(a, 1e-10);
+        Assert.True(cg.Hierarchy.Levels.Count >= 2);
+        var sol = new double[a.N];
+        cg.Solve(b, sol);
+        Assert.True(a.RelativeResidual(sol, b) <= 1e-10, $"residual {a.RelativeResidual(sol, b)}");
+        Assert.True(cg.LastIterations < 40, $"{cg.LastIterations} iterations");
+        Assert.True(SparseTestUtil.RelativeError(sol, direct) < 1e-7);
+    }
+
+    [Fact]
+    public void AmgCgSolvesRandomSpd()
+    {
+        var a = ReferenceProblems.RandomSpd(5000, 3, 5);
+        var (_, b) = SparseTestUtil.Manufactured(a);
+        var sol = new double[a.N];
+        AmgCgSolver.Create(a, 1e-10).Solve(b, sol);
+        Assert.True(a.RelativeResidual(sol, b) <= 1e-10);
+    }
+
+    [Fact]
+    public void AmgCgHonoursCancellation()
+    {
+        var a = ReferenceProblems.P2Laplacian(40, out _);
+        using var cts = new CancellationTokenSource();
+        cts.Cancel();
+        Assert.ThrowsAny<OperationCanceledException>(() => AmgCgSolver.Create(a, 1e-10, cts.Token));
+    }
+}
