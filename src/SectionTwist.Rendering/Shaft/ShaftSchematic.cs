@@ -59,8 +59,10 @@ internal static class ShaftSchematic
             else if (st.Support == SupportKind.Bearing) Bearing(c, x, y0 + half);
             float ay = y0 - Math.Max(maxHalf, 8) - 22;
             if (st.AppliedTorque != 0) Vector(c, x, ay, st.AppliedTorque, Load, $"{Signed(st.AppliedTorque)} N·m");
+            // the reaction takes the applied torque's row when the station has none (the usual fixed end), so that it stays
+            // clear of the heading when the shaft fills the band
             if (st.Support == SupportKind.Fixed && st.Reaction != 0)
-                Vector(c, x, ay - 30, st.Reaction, Reaction, $"R {Signed(st.Reaction)} N·m");
+                Vector(c, x, st.AppliedTorque != 0 ? ay - 30 : ay, st.Reaction, Reaction, $"R {Signed(st.Reaction)} N·m");
         }
         float by = y0 - Math.Max(maxHalf, 8) - 22;
         foreach (var dt in d.DistributedTorques.Where(t => t.Total != 0)) Spread(c, L.ToPixelX(Math.Min(dt.From, dt.To)), L.ToPixelX(Math.Max(dt.From, dt.To)), by, dt);
