@@ -24,7 +24,7 @@ internal sealed class VerifyCommand : ICommand
         string G(double v) => v.ToString("G6", CultureInfo.InvariantCulture);
         w.WriteLine($"{"case",-40} {"computed",-13} {"reference",-13} {"rel. error",-10} {"tol.",-8} result  source");
         foreach (var o in outcomes)
-            w.WriteLine($"{o.Case.Name,-40} {G(o.Computed),-13} {G(o.Case.Reference),-13} {o.RelativeError.ToString("0.0E+0", CultureInfo.InvariantCulture),-10} {o.Case.Tolerance.ToString("0E+0", CultureInfo.InvariantCulture),-8} {(o.Passed ? "pass" : "FAIL"),-7} {o.Case.Source}");
+            w.WriteLine($"{o.Case.Name,-40} {G(o.Computed),-13} {G(o.Case.Reference),-13} {o.RelativeError.ToString("0.0E+0", CultureInfo.InvariantCulture),-10} {o.Tolerance.ToString("0E+0", CultureInfo.InvariantCulture),-8} {(o.Passed ? "pass" : "FAIL"),-7} {o.Case.Source}");
         int failed = outcomes.Count(o => !o.Passed);
         w.WriteLine(failed == 0 ? $"all {outcomes.Count} verification cases passed" : $"{failed} of {outcomes.Count} verification cases FAILED");
         return failed == 0 ? 0 : 1;

@@ -18,7 +18,7 @@ public class ErrorEstimateTests
         var outcomes = VerificationSuite.Run(new AnalysisOptions { Accuracy = accuracy });
         foreach (var o in outcomes)
         {
-            Assert.True(o.Passed, $"{o.Case.Name}: error {o.RelativeError:E2} above tolerance {o.Case.Tolerance:E1} ({o.Case.Source})");
+            Assert.True(o.Passed, $"{o.Case.Name}: error {o.RelativeError:E2} above tolerance {o.Tolerance:E1} ({o.Case.Source})");
             Assert.True(o.RelativeError <= Math.Max(o.EstimatedRelativeError, 1e-10),
                 $"{o.Case.Name} at accuracy {accuracy}: true error {o.RelativeError:E2} exceeds the estimate {o.EstimatedRelativeError:E2}");
             if (o.Case.Quantity == VerifiedQuantity.TorsionConstant)
