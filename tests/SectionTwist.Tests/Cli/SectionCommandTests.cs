@@ -33,16 +33,6 @@ public class SectionCommandTests
     }
 
     [Fact]
-    public void Open_loop_error_names_the_gap()
-    {
-        // Loop built in code: the point list closes loops itself, so exercise the model directly too.
-        var e = Assert.Throws<SectionTwistException>(() => new Loop([
-            new LineSegment(new(0, 0), new(1, 0)), new LineSegment(new(1, 0), new(1, 1)), new LineSegment(new(1, 1), new(0.2, 0))]));
-        Assert.Equal("open-loop", e.Code);
-        Assert.Contains("gap of", e.Message, StringComparison.Ordinal);
-    }
-
-    [Fact]
     public void Hole_outside_and_overlapping_regions_are_reported()
     {
         var sq = LoopBuilder.Polygon([new(0, 0), new(1, 0), new(1, 1), new(0, 1)]);
