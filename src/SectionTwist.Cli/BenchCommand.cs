@@ -15,19 +15,25 @@ internal sealed class BenchCommand : ICommand
     public string Summary => "time the sparse solver on the reference P2 Laplacian (1e4 to 1e6 unknowns)";
 
     public string Usage => """
-        sectiontwist bench [--m 50,158,500] [--solver auto|direct|amg]
+        sectiontwist bench [--m 50,158,500] [--solver auto|direct|amg] [--sections only|skip]
           Assembles the P2 Laplacian on the unit square (m x m squares, two triangles each, Dirichlet boundary
           removed: (2m-1)^2 unknowns), solves A x = A 1 and prints assembly, set-up, factor and solve times, the
           relative residual, allocated bytes and the peak working set, then the growth exponent between sizes.
           --m       grid sizes, comma separated (default 50,158,500: 9,801 / 99,225 / 998,001 unknowns)
           --solver  auto (Cholesky up to 2e5 unknowns, multigrid-CG above), direct or amg (default auto)
+          --sections  also time the whole analysis to J within 1e-4 for a keyed 40 mm shaft and a square hollow
+                      section with corner radii, and check the error against a 1e-7 solve (default: included;
+                      'only' skips the reference problem, 'skip' skips the sections)
         """;
 
     public int Run(Args args, CliContext context)
     {
         string ms = args.Option("m") ?? "50,158,500";
         string solverName = args.Option("solver") ?? "auto";
+        string sections = args.Option("sections") ?? "yes";
         args.EnsureAllUsed();
+        if (sections is not ("yes" or "only" or "skip")) throw new UsageException($"--sections: '{sections}' is not one of only, skip");
+        if (sections == "only") { SectionBench.Run(context.Out); return 0; }
         var solver = solverName switch
         {
             "auto" => BenchSolver.Auto,
@@ -69,6 +75,7 @@ internal sealed class BenchCommand : ICommand
             double e = Math.Log(q.SolveTotal / p.SolveTotal) / Math.Log((double)q.Unknowns / p.Unknowns);
             w.WriteLine(string.Create(inv, $"growth {p.Unknowns:N0} -> {q.Unknowns:N0} unknowns: time ~ N^{e:F2}"));
         }
+        if (sections == "yes") SectionBench.Run(w);
         return 0;
     }
 }

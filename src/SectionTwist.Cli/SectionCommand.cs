@@ -10,7 +10,7 @@ internal sealed class SectionCommand : ICommand
     public string Name => "section";
     public string Summary => "torsion constant J, peak shear per torque and area properties of a cross-section";
     public string Usage => """
-        sectiontwist section SOURCE [--accuracy REL] [--unit U] [--layer NAME] [--part N] [--json] [--plot FILE.png|svg] [--torque T] [--plugins DIR]
+        sectiontwist section SOURCE [--accuracy REL] [--unit U] [--layer NAME] [--part N] [--json] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR]
           SOURCE      a template spec such as circle:d=40, keyed:d=40, rect:b=60,h=20, a drawing file (.dxf),
                       a point list (.csv, .pts) or anything a plugin reads
           --accuracy  requested relative accuracy of J (default 1e-4)
@@ -19,6 +19,8 @@ internal sealed class SectionCommand : ICommand
           --json      print one JSON object in SI base units (m, m^2, m^4, 1/m^3)
           --plot      write a shear-stress contour picture (PNG or SVG)
           --torque    torque in N*m for the plot colour bar in MPa (default: stress per unit torque)
+          --dxf       write the outline (layer PROFILE) and stress-function contours (layer PHI) to a DXF file for CAD
+          --dxf-mesh  also write the mesh edges (layer MESH)
           --plugins   load profile-source plugins (*.dll) from DIR; the SECTIONTWIST_PLUGINS environment
                       variable may list more folders (separated by the system path separator)
         """;
@@ -42,6 +44,8 @@ internal sealed class SectionCommand : ICommand
         };
         string? plot = args.Option("plot");
         double? torque = args.Double("torque");
+        string? dxf = args.Option("dxf");
+        bool dxfMesh = args.Flag("dxf-mesh");
         string? plugins = args.Option("plugins");
         if (args.Positional.Count != 1) throw new UsageException(args.Positional.Count == 0 ? "give one SOURCE (a template spec or a .dxf file)" : $"give one SOURCE, not {args.Positional.Count}");
         args.EnsureAllUsed();
@@ -49,6 +53,7 @@ internal sealed class SectionCommand : ICommand
         var profile = ProfileSources.Load(args.Positional[0], srcOptions);
         var result = SectionAnalyzer.Analyze(profile, new AnalysisOptions { Accuracy = accuracy });
         if (plot is not null) SectionPlotHook.Write(result, plot, torque);
+        if (dxf is not null) SectionDxfExport.Write(result, dxf, dxfMesh);
         if (json) ctx.Out.WriteLine(SectionJson.Write(result, args.Positional[0]));
         else SectionText.Write(ctx.Out, result, args.Positional[0]);
         return 0;

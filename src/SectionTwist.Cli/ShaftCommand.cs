@@ -1,24 +1,25 @@
 using System.Globalization;
+using SectionTwist.Rendering.Adapters;
+using SectionTwist.Rendering.Report;
 using SectionTwist.Shaft;
+using SectionTwist.Verification;
 
 namespace SectionTwist.Cli;
 
 /// <summary>
-/// <c>sectiontwist shaft design.yaml [--json] [--csv DIR]</c>: solves a segmented shaft file and prints stations, segments,
-/// reactions, the governing segment and margins in the file's units (JSON and CSV in SI).
+/// <c>sectiontwist shaft design.yaml [--json] [--csv DIR] [--report OUT.html]</c>: solves a segmented shaft file and prints
+/// stations, segments, reactions, the governing segment and margins in the file's units (JSON and CSV in SI); the report is
+/// assembled by <see cref="ShaftReport"/>.
 /// </summary>
 internal sealed class ShaftCommand : ICommand
 {
-    private const string Caution =
+    internal const string Caution =
         "caution: results assume linear elastic, Saint-Venant torsion; stress concentrations at shoulders, keyseat ends and fillets " +
         "are not included; verify against local codes and licensed engineering practice.";
 
-    /// <summary>Turns template and DXF sections into J and peak shear per unit torque; null: the standard
-    /// <see cref="ShaftSections"/> resolver (templates, profile sources, section analysis) with notes on standard error.</summary>
+    /// <summary>Turns template and DXF sections into J and peak shear per unit torque; null: a <see cref="ShaftSectionCatalog"/>
+    /// (templates, drawings, section analysis), which also keeps the solved sections for the report's pictures.</summary>
     internal static Func<SectionSource, SectionStiffness>? SectionResolver { get; set; }
-
-    /// <summary>Writes the <c>--report</c> HTML file (set by the rendering code); null: the option is refused.</summary>
-    internal static Action<ShaftDocument, ShaftResult, string>? ReportWriter { get; set; }
 
     public string Name => "shaft";
 
@@ -31,7 +32,7 @@ internal sealed class ShaftCommand : ICommand
         "  the governing segment, in the file's units.\n" +
         "  --json        print the result as JSON in SI base units (m, N*m, Pa, rad) instead of tables\n" +
         "  --csv DIR     also write DIR/stations.csv and DIR/segments.csv (SI units)\n" +
-        "  --report OUT  write an HTML report (when the rendering support is present)\n" +
+        "  --report OUT  also write one self-contained HTML report (inputs, tables, pictures, verification, method)\n" +
         "  Exceeded limits are flagged, not errors; the exit code is 0 when the shaft solved, 2 for bad input.";
 
     public int Run(Args args, CliContext context)
@@ -41,17 +42,23 @@ internal sealed class ShaftCommand : ICommand
         string? report = args.Option("report");
         args.EnsureAllUsed();
         if (args.Positional.Count != 1) throw new UsageException(args.Positional.Count == 0 ? "give the shaft file, e.g. 'sectiontwist shaft winch-shaft.yaml'" : "give exactly one shaft file");
-        if (report is not null && ReportWriter is null)
-            throw new UsageException("--report: HTML reports are not available in this build yet; use --json or --csv");
         string path = args.Positional[0];
+        if (report is not null) OutputPaths.CheckFile(report, "--report");
 
-        var doc = ShaftFile.Load(path, SectionResolver ?? ShaftSections.CreateResolver(notes: context.Err.WriteLine));
+        // the report's verification cases run beside the section analyses
+        var verifying = report is null ? null : Task.Run(() => VerificationSuite.Run());
+        var sections = new ShaftSectionCatalog(notes: context.Err.WriteLine);
+        var doc = ShaftFile.Load(path, SectionResolver ?? sections.Resolver);
         ShaftResult result;
         try { result = ShaftSolver.Solve(doc.Model); }
         catch (SectionTwistException e) { throw new SectionTwistException(e.Code, $"{Path.GetFileName(path)}: {e.Message}", e); }
 
         if (csv is not null) ShaftResultCsv.WriteAll(result, csv);
-        if (report is not null) ReportWriter!(doc, result, report);
+        if (report is not null)
+        {
+            ShaftReport.Write(ShaftReport.Build(doc, result, sections, verifying!.GetAwaiter().GetResult(), CliReport.Options()), report);
+            context.Err.WriteLine($"wrote {report}");
+        }
         if (json) context.Out.WriteLine(ShaftResultJson.Write(result, path));
         else PrintTables(context.Out, doc, result, path);
         if (csv is not null) context.Err.WriteLine($"wrote {Path.Combine(csv, "stations.csv")} and {Path.Combine(csv, "segments.csv")}");

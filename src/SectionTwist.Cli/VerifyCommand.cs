@@ -36,7 +36,7 @@ internal sealed class VerifyCommand : ICommand
         string G(double v) => v.ToString("G6", CultureInfo.InvariantCulture);
         w.WriteLine($"{"case",-40} {"computed",-13} {"reference",-13} {"rel. error",-10} {"tol.",-8} result  source");
         foreach (var o in outcomes)
-            w.WriteLine($"{o.Case.Name,-40} {G(o.Computed),-13} {G(o.Case.Reference),-13} {o.RelativeError.ToString("0.0E+0", CultureInfo.InvariantCulture),-10} {o.Case.Tolerance.ToString("0E+0", CultureInfo.InvariantCulture),-8} {(o.Passed ? "pass" : "FAIL"),-7} {o.Case.Source}");
+            w.WriteLine($"{o.Case.Name,-40} {G(o.Computed),-13} {G(o.Case.Reference),-13} {o.RelativeError.ToString("0.0E+0", CultureInfo.InvariantCulture),-10} {o.Tolerance.ToString("0E+0", CultureInfo.InvariantCulture),-8} {(o.Passed ? "pass" : "FAIL"),-7} {o.Case.Source}");
         w.WriteLine(failed == 0 ? $"all {outcomes.Count} verification cases passed" : $"{failed} of {outcomes.Count} verification cases FAILED");
     }
 
@@ -61,7 +61,7 @@ internal sealed class VerifyCommand : ICommand
                 SectionJson.Num(w, "reference", o.Case.Reference);
                 SectionJson.Num(w, "relativeError", o.RelativeError);
                 SectionJson.Num(w, "estimatedRelativeError", o.EstimatedRelativeError);
-                w.WriteNumber("tolerance", o.Case.Tolerance);
+                w.WriteNumber("tolerance", o.Tolerance);
                 w.WriteBoolean("passed", o.Passed);
                 w.WriteString("source", o.Case.Source);
                 w.WriteEndObject();

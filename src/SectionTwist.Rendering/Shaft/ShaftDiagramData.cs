@@ -17,7 +17,16 @@ public sealed record ShaftDiagramData
     public required IReadOnlyList<DiagramStation> Stations { get; init; }
     /// <summary>Segments between stations.</summary>
     public required IReadOnlyList<DiagramSegment> Segments { get; init; }
+    /// <summary>Torques spread uniformly along a stretch of the shaft (drawn as a row of small vectors).</summary>
+    public IReadOnlyList<DiagramDistributedTorque> DistributedTorques { get; init; } = [];
 }
+
+/// <summary>A torque spread uniformly from <paramref name="From"/> to <paramref name="To"/>.</summary>
+/// <param name="From">Start position, m.</param>
+/// <param name="To">End position, m.</param>
+/// <param name="Total">The whole torque (intensity times length), N*m, signed like the station torques.</param>
+/// <param name="Label">What it is, e.g. <c>drum</c>; may be null.</param>
+public sealed record DiagramDistributedTorque(double From, double To, double Total, string? Label = null);
 
 /// <summary>How a station is held.</summary>
 public enum SupportKind

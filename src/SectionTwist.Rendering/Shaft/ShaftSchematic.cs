@@ -57,12 +57,18 @@ internal static class ShaftSchematic
             float half = HalfAt(d, st.Position, vs);
             if (st.Support == SupportKind.Fixed) Wall(c, x, y0, Math.Max(half, 10) + 12, x < mid ? -1 : 1);
             else if (st.Support == SupportKind.Bearing) Bearing(c, x, y0 + half);
-            Ink.Label(c, st.Name, x, y0 + maxHalf + 30, 11, Ink.Text, SKTextAlign.Center);
             float ay = y0 - Math.Max(maxHalf, 8) - 22;
             if (st.AppliedTorque != 0) Vector(c, x, ay, st.AppliedTorque, Load, $"{Signed(st.AppliedTorque)} N·m");
+            // the reaction takes the applied torque's row when the station has none (the usual fixed end), so that it stays
+            // clear of the heading when the shaft fills the band
             if (st.Support == SupportKind.Fixed && st.Reaction != 0)
-                Vector(c, x, ay - 30, st.Reaction, Reaction, $"R {Signed(st.Reaction)} N·m");
+                Vector(c, x, st.AppliedTorque != 0 ? ay - 30 : ay, st.Reaction, Reaction, $"R {Signed(st.Reaction)} N·m");
         }
+        float by = y0 - Math.Max(maxHalf, 8) - 22;
+        foreach (var dt in d.DistributedTorques.Where(t => t.Total != 0)) Spread(c, L.ToPixelX(Math.Min(dt.From, dt.To)), L.ToPixelX(Math.Max(dt.From, dt.To)), by, dt);
+        // stations at the same place (e.g. the two halves of a coupling) share one label instead of overprinting
+        foreach (var group in d.Stations.GroupBy(s => s.Position).OrderBy(g => g.Key))
+            Ink.Label(c, string.Join(", ", group.Select(s => s.Name)), L.ToPixelX(group.Key), y0 + maxHalf + 30, 11, Ink.Text, SKTextAlign.Center);
     }
 
     internal static string Signed(double v) => (v > 0 ? "+" : "") + NiceScale.Sig(v, 4);
@@ -94,6 +100,30 @@ internal static class ShaftSchematic
         c.DrawPath(path, edge);
         c.DrawLine(x - 12, yTop + 13, x + 12, yTop + 13, edge);
         for (float h = x - 12; h < x + 12; h += 5) c.DrawLine(h, yTop + 18, h + 4, yTop + 13, edge);
+    }
+
+    /// <summary>A distributed torque: small double-headed vectors along the stretch under a bracket, with the total.</summary>
+    private static void Spread(SKCanvas c, float x0, float x1, float y, DiagramDistributedTorque t)
+    {
+        float dir = t.Total > 0 ? 1 : -1;
+        int n = Math.Clamp((int)((x1 - x0) / 26), 1, 12);
+        using var line = Ink.Stroke(Load, 1.3f);
+        using var head = Ink.Fill(Load);
+        for (int i = 0; i < n; i++)
+        {
+            float x = x0 + (i + 0.5f) * (x1 - x0) / n, tip = x + dir * 8;
+            c.DrawLine(x - dir * 8, y, tip, y, line);
+            foreach (float off in new[] { 0f, -5f })
+            {
+                using var p = new SKPath();
+                p.MoveTo(tip + dir * off, y); p.LineTo(tip + dir * (off - 5), y - 3); p.LineTo(tip + dir * (off - 5), y + 3); p.Close();
+                c.DrawPath(p, head);
+            }
+        }
+        c.DrawLine(x0, y - 7, x1, y - 7, line);
+        c.DrawLine(x0, y - 7, x0, y - 3, line);
+        c.DrawLine(x1, y - 7, x1, y - 3, line);
+        Ink.Label(c, $"{Signed(t.Total)} N·m spread{(t.Label is null ? "" : $" ({t.Label})")}", 0.5f * (x0 + x1), y - 12, 11, Load, SKTextAlign.Center);
     }
 
     /// <summary>A double-headed axial vector (right-hand rule): points +x for a positive torque.</summary>

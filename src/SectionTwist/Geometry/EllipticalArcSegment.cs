@@ -136,12 +136,7 @@ public sealed class EllipticalArcSegment : Segment
         return ts;
     }
 
-    internal override void Accumulate(ref AreaMoments m, Point2 origin)
-    {
-        int pieces = Math.Max(1, (int)Math.Ceiling(Math.Abs(Sweep) / (Math.PI / 4)));
-        for (int k = 0; k < pieces; k++)
-            AccumulateByQuadrature(ref m, origin, (double)k / pieces, (double)(k + 1) / pieces);
-    }
+    internal override void Accumulate(ref AreaMoments m, Point2 origin) => AccumulateInPieces(ref m, origin, Sweep);
 
     /// <inheritdoc />
     public override string ToString() => $"ellipse arc centre {Center} a={SemiMajor:G6} b={SemiMinor:G6}";

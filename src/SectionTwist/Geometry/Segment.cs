@@ -54,6 +54,14 @@ public abstract class Segment
     /// </summary>
     internal abstract void Accumulate(ref AreaMoments m, Point2 origin);
 
+    /// <summary>Quadrature of the boundary integrals on pieces of at most 45 degrees of the angle parameter.</summary>
+    private protected void AccumulateInPieces(ref AreaMoments m, Point2 origin, double sweep)
+    {
+        int pieces = Math.Max(1, (int)Math.Ceiling(Math.Abs(sweep) / (Math.PI / 4)));
+        for (int k = 0; k < pieces; k++)
+            AccumulateByQuadrature(ref m, origin, (double)k / pieces, (double)(k + 1) / pieces);
+    }
+
     /// <summary>Shared quadrature of the boundary integrals over t in [t0, t1].</summary>
     private protected void AccumulateByQuadrature(ref AreaMoments m, Point2 origin, double t0, double t1)
     {

@@ -22,6 +22,16 @@ public static class ShaftSections
     /// <summary>Builds and analyses one section.</summary>
     public static SectionStiffness Resolve(SectionSource source, AnalysisOptions? options = null, Action<string>? notes = null)
     {
+        var (r, outer) = Analyze(source, options, notes);
+        return new SectionStiffness(r.TorsionConstant, r.MaxShearPerTorque, source.TemplateSpec ?? Path.GetFileName(source.DxfPath), outer);
+    }
+
+    /// <summary>
+    /// Builds and analyses one section and returns the full result with the template's outer size (null for a DXF outline),
+    /// for callers that keep the solved field (the report's pictures).
+    /// </summary>
+    internal static (SectionResult Result, double? OuterSize) Analyze(SectionSource source, AnalysisOptions? options, Action<string>? notes)
+    {
         ArgumentNullException.ThrowIfNull(source);
         Geometry.Profile profile;
         double? outer = null;
@@ -47,6 +57,6 @@ public static class ShaftSections
         notes?.Invoke($"section '{source.Name}' ({source.TemplateSpec ?? Path.GetFileName(source.DxfPath)}): J = {r.TorsionConstant:G5} m^4, " +
                       $"peak shear per unit torque {r.MaxShearPerTorque:G5} 1/m^3 ({r.Mesh.Elements} elements)");
         foreach (var w in r.Warnings) notes?.Invoke($"section '{source.Name}': warning: {w.Message}");
-        return new SectionStiffness(r.TorsionConstant, r.MaxShearPerTorque, source.TemplateSpec ?? Path.GetFileName(source.DxfPath), outer);
+        return (r, outer);
     }
 }

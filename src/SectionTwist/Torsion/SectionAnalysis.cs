@@ -14,6 +14,9 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
 {
     /// <summary>Assumed convergence order of the boundary peak shear (conservative; observed 2 to 4).</summary>
     private const double ShearOrder = 2;
+
+    /// <summary>Resolution floor of the smoothed boundary peak (relative), measured on the verification cases.</summary>
+    private const double ShearFloor = 1e-5;
     private const int MaxPasses = 6;
 
     private SectionResult? _result;
@@ -65,7 +68,9 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
             fine = TorsionSolver.Solve(fineMesh, holeArea, ct);
             estJ = Math.Abs(fine.J - coarse.J) / (Math.Pow(2, p) - 1) / fine.J;
             double tc = coarse.MaxGradient / coarse.J, tf = fine.MaxGradient / fine.J;
-            estT = Math.Abs(tf - tc) / (Math.Pow(2, ShearOrder) - 1) / tf;
+            // The whole coarse-to-fine change (not divided by 2^p - 1) plus the resolution floor of the boundary
+            // recovery: the smoothed peak carries a bias of order 1e-5 that does not show between two meshes.
+            estT = Math.Abs(tf - tc) / tf + ShearFloor;
             bool shearOk = singular || estT <= shearTarget;
             if (estJ <= acc && shearOk) break;
             if (pass == MaxPasses - 1)

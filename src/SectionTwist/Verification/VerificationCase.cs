@@ -26,8 +26,9 @@ public sealed record VerificationCase(string Name, VerifiedQuantity Quantity, do
 /// <param name="Computed">The computed value (SI).</param>
 /// <param name="RelativeError">|computed - reference| / |reference|.</param>
 /// <param name="EstimatedRelativeError">The solver's own error estimate for that quantity.</param>
-public sealed record VerificationOutcome(VerificationCase Case, double Computed, double RelativeError, double EstimatedRelativeError)
+/// <param name="Tolerance">The tolerance applied: the case's own at the default accuracy, tighter when a finer accuracy was asked for.</param>
+public sealed record VerificationOutcome(VerificationCase Case, double Computed, double RelativeError, double EstimatedRelativeError, double Tolerance)
 {
-    /// <summary>True when the relative error is within the case's tolerance.</summary>
-    public bool Passed => RelativeError <= Case.Tolerance;
+    /// <summary>True when the relative error is within <see cref="Tolerance"/>.</summary>
+    public bool Passed => RelativeError <= Tolerance;
 }

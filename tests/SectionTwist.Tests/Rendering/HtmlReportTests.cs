@@ -1,4 +1,3 @@
-using System.Diagnostics;
 using System.Xml;
 using System.Xml.Linq;
 using SectionTwist.Geometry;
@@ -102,7 +101,7 @@ public class HtmlReportTests
     [SkippableFact]
     public void Report_opens_in_headless_chromium_without_console_errors()
     {
-        string? chromium = FindChromium();
+        string? chromium = Chromium.Find();
         Skip.If(chromium is null, "chromium is not installed here (.ci/run installs the Debian package)");
         string dir = Path.Combine(Path.GetTempPath(), "st-report-" + Guid.NewGuid().ToString("N"));
         Directory.CreateDirectory(dir);
@@ -111,44 +110,16 @@ public class HtmlReportTests
             var model = Sample();
             string path = Path.Combine(dir, "report.html");
             HtmlReportWriter.Save(model, path);
-            var psi = new ProcessStartInfo(chromium!)
-            {
-                RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false,
-            };
-            foreach (string a in new[]
-                     {
-                         "--headless", "--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update",
-                         "--disable-sync", "--no-first-run", "--enable-logging=stderr", "--v=0",
-                         "--user-data-dir=" + Path.Combine(dir, "profile"), "--dump-dom", new Uri(path).AbsoluteUri,
-                     })
-                psi.ArgumentList.Add(a);
-            using var p = Process.Start(psi)!;
-            var stderrTask = p.StandardError.ReadToEndAsync();
-            string dom = p.StandardOutput.ReadToEnd();
-            Assert.True(p.WaitForExit(90_000), "chromium did not finish within 90 s");
-            string stderr = stderrTask.Result;
+            var (dom, consoleErrors) = Chromium.DumpDom(chromium!, path, dir);
             Assert.Contains(model.KeyFigures[0].Value, dom, StringComparison.Ordinal);
             Assert.Contains("1 of 2 verification cases FAILED", dom, StringComparison.Ordinal);
             Assert.Contains("licensed engineering practice", dom, StringComparison.Ordinal);
-            // Chromium logs page console messages as ":CONSOLE" lines (all levels); the report has no script, so any is a fault
-            var consoleErrors = stderr.Split('\n').Where(l => l.Contains("Uncaught", StringComparison.Ordinal)
-                || l.Contains(":CONSOLE", StringComparison.Ordinal)).ToList();
+            // the report has no script, so any console message is a fault
             Assert.True(consoleErrors.Count == 0, string.Join('\n', consoleErrors));
         }
         finally
         {
             try { Directory.Delete(dir, true); } catch (IOException) { } catch (UnauthorizedAccessException) { }
         }
-    }
-
-    private static string? FindChromium()
-    {
-        foreach (string dir in (Environment.GetEnvironmentVariable("PATH") ?? "").Split(':'))
-            foreach (string name in new[] { "chromium", "chromium-browser" })
-            {
-                string p = Path.Combine(dir, name);
-                if (File.Exists(p)) return p;
-            }
-        return null;
     }
 }

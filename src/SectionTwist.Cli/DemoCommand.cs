@@ -1,0 +1,71 @@
+using System.Diagnostics;
+using SectionTwist.Rendering.Adapters;
+using SectionTwist.Rendering.Report;
+using SectionTwist.Shaft;
+using SectionTwist.Verification;
+
+namespace SectionTwist.Cli;
+
+/// <summary>
+/// <c>sectiontwist demo [--out DIR]</c>: solves the bundled winch drive shaft (sample-profiles/winch-shaft.yaml, embedded in
+/// this assembly so it runs from any folder) and writes its report and pictures to DIR.
+/// </summary>
+internal sealed class DemoCommand : ICommand
+{
+    /// <summary>Logical name of the embedded demo shaft file.</summary>
+    internal const string ResourceName = "SectionTwist.Cli.Demo.winch-shaft.yaml";
+
+    /// <summary>The default output folder, relative to the current folder.</summary>
+    internal const string DefaultFolder = "sectiontwist-demo";
+
+    public string Name => "demo";
+
+    public string Summary => "solve the bundled winch drive shaft and write its report and pictures";
+
+    public string Usage =>
+        "sectiontwist demo [--out DIR]\n" +
+        "  Solves the bundled demo: the drive shaft of a small winch (an invented scenario) with a keyed input, a hollow middle\n" +
+        "  and a splined output, driven through a flexible coupling. The keyed and splined sections are analysed, the shaft is\n" +
+        "  solved, the verification cases are run, and DIR receives report.html, shaft.png, shaft.svg and section-NAME.png.\n" +
+        $"  --out DIR   output folder (default ./{DefaultFolder}; created when missing)\n" +
+        "  The shaft file itself: sample-profiles/winch-shaft.yaml ('sectiontwist shaft' reads it too).";
+
+    public int Run(Args args, CliContext context)
+    {
+        string folder = args.Option("out") ?? DefaultFolder;
+        args.EnsureAllUsed();
+        if (args.Positional.Count > 0) throw new UsageException($"unexpected '{args.Positional[0]}'; the demo takes only --out DIR");
+        OutputPaths.PrepareFolder(folder, "--out");
+
+        var clock = Stopwatch.StartNew();
+        // the verification cases run beside the section analyses (both are single-threaded for these sizes)
+        var verifying = Task.Run(() => VerificationSuite.Run());
+        var sections = new ShaftSectionCatalog(notes: context.Err.WriteLine);
+        var doc = ShaftFile.Parse(ReadDemoFile(), "winch-shaft.yaml", resolver: sections.Resolver);
+        var result = ShaftSolver.Solve(doc.Model);
+        var verification = verifying.GetAwaiter().GetResult();
+        var content = ShaftReport.Build(doc, result, sections, verification, CliReport.Options());
+        var files = ShaftReport.WriteBundle(content, folder);
+
+        var w = context.Out;
+        w.WriteLine($"{doc.Model.Title ?? "demo shaft"} (bundled sample-profiles/winch-shaft.yaml)");
+        foreach (string line in ShaftReport.Summary(doc, result)) w.WriteLine("  " + line);
+        int failed = verification.Count(v => !v.Passed);
+        w.WriteLine(failed == 0
+            ? $"  Verification: all {verification.Count} cases passed on this build."
+            : $"  Verification: {failed} of {verification.Count} cases FAILED on this build (see the report).");
+        w.WriteLine($"wrote {files.Count} files to {Path.GetFullPath(folder)} in {clock.Elapsed.TotalSeconds:F1} s");
+        w.WriteLine($"report: {Path.GetFullPath(files[0])}");
+        w.WriteLine(ShaftCommand.Caution);
+        return 0;
+    }
+
+    /// <summary>The text of the bundled demo shaft file.</summary>
+    internal static string ReadDemoFile()
+    {
+        using var stream = typeof(DemoCommand).Assembly.GetManifestResourceStream(ResourceName)
+                           ?? throw new SectionTwistException("demo-missing", $"the demo shaft file ({ResourceName}) is not embedded in this build; rebuild the CLI from a full checkout");
+        using var reader = new StreamReader(stream);
+        return reader.ReadToEnd();
+    }
+}

@@ -1,0 +1,22 @@
+using SectionTwist.Cli;
+
+namespace SectionTwist.Tests.Cli;
+
+/// <summary>Runs the sectiontwist command in-process and captures its output streams.</summary>
+internal static class CliRunner
+{
+    public static (int Code, string Out, string Err) Run(params string[] args)
+    {
+        var o = new StringWriter(); var e = new StringWriter();
+        int code = Program.Run(args, new CliContext(o, e));
+        return (code, o.ToString(), e.ToString());
+    }
+
+    /// <summary>A fresh temporary folder for one test.</summary>
+    public static string TempDir()
+    {
+        string d = Path.Combine(Path.GetTempPath(), "sectiontwist-tests", Guid.NewGuid().ToString("N"));
+        Directory.CreateDirectory(d);
+        return d;
+    }
+}

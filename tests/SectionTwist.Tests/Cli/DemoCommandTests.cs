@@ -1,0 +1,107 @@
+using System.Globalization;
+using System.Text.RegularExpressions;
+using System.Xml.Linq;
+using SectionTwist.Cli;
+using SectionTwist.Tests.Rendering;
+using SkiaSharp;
+
+namespace SectionTwist.Tests.Cli;
+
+/// <summary>Runs <c>sectiontwist demo --out TMP</c> once for the tests of this class and removes the folder afterwards.</summary>
+public sealed class DemoRun : IDisposable
+{
+    public DemoRun()
+    {
+        Folder = Path.Combine(Path.GetTempPath(), "st-demo-" + Guid.NewGuid().ToString("N"));
+        (Code, Out, Err) = CliRun.Run("demo", "--out", Folder);
+    }
+
+    public string Folder { get; }
+    public int Code { get; }
+    public string Out { get; }
+    public string Err { get; }
+
+    public void Dispose()
+    {
+        try { Directory.Delete(Folder, true); } catch (IOException) { } catch (UnauthorizedAccessException) { }
+    }
+}
+
+/// <summary>Runs the command line in-process against string writers.</summary>
+internal static class CliRun
+{
+    public static (int Code, string Out, string Err) Run(params string[] argv)
+    {
+        var o = new StringWriter();
+        var e = new StringWriter();
+        int code = Program.Run(argv, new CliContext(o, e));
+        return (code, o.ToString(), e.ToString());
+    }
+}
+
+/// <summary>The demo command: exit code, files, summary lines, and the report in a browser.</summary>
+public class DemoCommandTests(DemoRun demo) : IClassFixture<DemoRun>
+{
+    [Fact]
+    public void Demo_exits_0_and_writes_the_report_and_pictures()
+    {
+        Assert.True(demo.Code == 0, demo.Err);
+        string[] expected = ["report.html", "shaft.png", "shaft.svg", "section-input-keyed.png", "section-spline-output.png"];
+        Assert.Equal(expected.Order(), Directory.GetFiles(demo.Folder).Select(Path.GetFileName).Order());
+        using (var shaft = SKBitmap.Decode(Path.Combine(demo.Folder, "shaft.png"))) Assert.Equal((1000, 900), (shaft.Width, shaft.Height));
+        foreach (string s in expected.Where(f => f.StartsWith("section-", StringComparison.Ordinal)))
+        {
+            using var bmp = SKBitmap.Decode(Path.Combine(demo.Folder, s));
+            Assert.Equal((760, 560), (bmp.Width, bmp.Height));
+        }
+        Assert.Equal("svg", XDocument.Load(Path.Combine(demo.Folder, "shaft.svg")).Root!.Name.LocalName);
+        Assert.Contains($"report: {Path.Combine(demo.Folder, "report.html")}", demo.Out, StringComparison.Ordinal);
+        Assert.Contains("Governing segment (shear): input (A – B)", demo.Out, StringComparison.Ordinal);
+        Assert.Contains("Total twist", demo.Out, StringComparison.Ordinal);
+        Assert.Contains("Verification: all", demo.Out, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Demo_numbers_match_hand_checks()
+    {
+        // 5.5 kW at 120 rpm: T = P / omega = 437.68 N*m through every section up to the spline (statics of a free shaft).
+        // Hollow middle 60/40 mm: tau = 16 T D / (pi (D^4 - d^4)) = 12.86 MPa (Timoshenko and Goodier, ch. 10).
+        string html = File.ReadAllText(Path.Combine(demo.Folder, "report.html"));
+        double t = 5500 / (120 * 2 * Math.PI / 60);
+        double tau = 16 * t * 0.060 / (Math.PI * (Math.Pow(0.060, 4) - Math.Pow(0.040, 4)));
+        Assert.Contains($">{(tau / 1e6).ToString("G4", CultureInfo.InvariantCulture)}<", html, StringComparison.Ordinal);
+        Assert.Contains($">-{t.ToString("G5", CultureInfo.InvariantCulture)}<", html, StringComparison.Ordinal);
+        // The keyed journal: its peak lies above the plain 45 mm round (16 T / (pi d^3) = 24.5 MPa), as a keyseat raises it
+        double printed = PrintedPeakMpa();
+        Assert.InRange(printed, 1.2 * 16 * t / (Math.PI * Math.Pow(0.045, 3)) / 1e6, 5.0 * 16 * t / (Math.PI * Math.Pow(0.045, 3)) / 1e6);
+    }
+
+    [SkippableFact]
+    public void Demo_report_opens_in_headless_chromium_with_the_key_figures()
+    {
+        Assert.True(demo.Code == 0, demo.Err);
+        string? chromium = Chromium.Find();
+        Skip.If(chromium is null, "chromium is not installed here (.ci/run installs the Debian package)");
+        var (dom, console) = Chromium.DumpDom(chromium!, Path.Combine(demo.Folder, "report.html"), demo.Folder);
+        Assert.True(console.Count == 0, string.Join('\n', console));
+        string text = Regex.Replace(dom, "<[^>]+>", " ");
+        string peak = PrintedPeakMpa().ToString("G4", CultureInfo.InvariantCulture) + " MPa";
+        Assert.Contains(peak, text, StringComparison.Ordinal);
+        Assert.Contains("Shaft report: winch drive shaft (demo)", text, StringComparison.Ordinal);
+        Assert.Contains("verification cases passed on this build", text, StringComparison.Ordinal);
+        Assert.Contains("licensed engineering practice", text, StringComparison.Ordinal);
+        Assert.Contains("Section 'input-keyed'", text, StringComparison.Ordinal);
+        // the diagram and one contour picture per analysed section, all embedded
+        var imgs = Regex.Matches(dom, "<img [^>]*src=\"([^\"]{0,30})").Select(m => m.Groups[1].Value).ToList();
+        Assert.Equal(3, imgs.Count);
+        Assert.All(imgs, s => Assert.StartsWith("data:image/png;base64,", s, StringComparison.Ordinal));
+    }
+
+    /// <summary>The governing segment's peak shear as the command printed it, MPa.</summary>
+    private double PrintedPeakMpa()
+    {
+        var m = Regex.Match(demo.Out, @"Governing segment \(shear\): [^\n]*?peak shear ([0-9.]+) MPa");
+        Assert.True(m.Success, demo.Out);
+        return double.Parse(m.Groups[1].Value, CultureInfo.InvariantCulture);
+    }
+}
