@@ -14,12 +14,7 @@ public sealed class JsonSchemaTests : IDisposable
 
     public void Dispose() => Directory.Delete(_dir, recursive: true);
 
-    private static (int Code, string Out, string Err) Run(params string[] argv)
-    {
-        var o = new StringWriter(); var e = new StringWriter();
-        int code = Program.Run(argv, new CliContext(o, e));
-        return (code, o.ToString(), e.ToString());
-    }
+    private static (int Code, string Out, string Err) Run(params string[] argv) => SectionTwist.Tests.Cli.CliRunner.Run(argv);
 
     private static JsonNode ValidOutput(string schemaName, params string[] argv)
     {

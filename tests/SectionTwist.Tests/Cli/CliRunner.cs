@@ -5,10 +5,13 @@ namespace SectionTwist.Tests.Cli;
 /// <summary>Runs the sectiontwist command in-process and captures its output streams.</summary>
 internal static class CliRunner
 {
-    public static (int Code, string Out, string Err) Run(params string[] args)
+    public static (int Code, string Out, string Err) Run(params string[] args) => Run(false, args);
+
+    /// <summary>Runs with standard error treated as a terminal (progress displays allowed) or not.</summary>
+    public static (int Code, string Out, string Err) Run(bool terminal, params string[] args)
     {
         var o = new StringWriter(); var e = new StringWriter();
-        int code = Program.Run(args, new CliContext(o, e));
+        int code = Program.Run(args, new CliContext(o, e, terminal));
         return (code, o.ToString(), e.ToString());
     }
 

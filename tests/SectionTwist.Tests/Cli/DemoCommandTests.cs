@@ -30,13 +30,7 @@ public sealed class DemoRun : IDisposable
 /// <summary>Runs the command line in-process against string writers.</summary>
 internal static class CliRun
 {
-    public static (int Code, string Out, string Err) Run(params string[] argv)
-    {
-        var o = new StringWriter();
-        var e = new StringWriter();
-        int code = Program.Run(argv, new CliContext(o, e));
-        return (code, o.ToString(), e.ToString());
-    }
+    public static (int Code, string Out, string Err) Run(params string[] argv) => CliRunner.Run(argv);
 }
 
 /// <summary>The demo command: exit code, files, summary lines, and the report in a browser.</summary>

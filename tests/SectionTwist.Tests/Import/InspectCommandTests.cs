@@ -5,13 +5,7 @@ namespace SectionTwist.Tests.Import;
 /// <summary>The <c>inspect</c> command on sample drawings.</summary>
 public class InspectCommandTests
 {
-    private static (int Code, string Out, string Err) Run(params string[] argv)
-    {
-        var o = new StringWriter();
-        var e = new StringWriter();
-        int code = Program.Run(argv, new CliContext(o, e));
-        return (code, o.ToString(), e.ToString());
-    }
+    private static (int Code, string Out, string Err) Run(params string[] argv) => SectionTwist.Tests.Cli.CliRunner.Run(argv);
 
     [Fact]
     public void Lists_layers_entities_units_loops_and_parts()

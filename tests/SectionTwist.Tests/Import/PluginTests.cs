@@ -83,12 +83,7 @@ public sealed class PluginTests : IDisposable
         Assert.Equal("no-plugin-folder", e.Code);
     }
 
-    private static (int Code, string Out, string Err) Run(params string[] argv)
-    {
-        var o = new StringWriter(); var e = new StringWriter();
-        int code = Program.Run(argv, new CliContext(o, e));
-        return (code, o.ToString(), e.ToString());
-    }
+    private static (int Code, string Out, string Err) Run(params string[] argv) => SectionTwist.Tests.Cli.CliRunner.Run(argv);
 
     [Fact]
     public void The_section_command_loads_plugins_from_the_plugins_option()

@@ -8,13 +8,7 @@ public class TemplateCliTests
 {
     private static (int Code, string Out, string Err) Run(params string[] argv) => Run(false, argv);
 
-    private static (int Code, string Out, string Err) Run(bool terminal, params string[] argv)
-    {
-        var o = new StringWriter();
-        var e = new StringWriter();
-        int code = Program.Run(argv, new CliContext(o, e, terminal));
-        return (code, o.ToString(), e.ToString());
-    }
+    private static (int Code, string Out, string Err) Run(bool terminal, params string[] argv) => SectionTwist.Tests.Cli.CliRunner.Run(terminal, argv);
 
     [Fact]
     public void Templates_lists_every_template_with_keys_defaults_and_units()

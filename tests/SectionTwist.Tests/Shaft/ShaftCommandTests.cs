@@ -9,12 +9,7 @@ public sealed class ShaftCommandTests : IDisposable
 
     public void Dispose() => Directory.Delete(_dir, recursive: true);
 
-    private (int Code, string Out, string Err) Run(params string[] argv)
-    {
-        var o = new StringWriter(); var e = new StringWriter();
-        int code = Program.Run(argv, new CliContext(o, e));
-        return (code, o.ToString(), e.ToString());
-    }
+    private (int Code, string Out, string Err) Run(params string[] argv) => SectionTwist.Tests.Cli.CliRunner.Run(argv);
 
     private string Write(string text, string name = "design.yaml")
     {
