@@ -65,7 +65,8 @@ internal sealed partial class ShaftFileReader
                 g = Material.ShearModulusFrom(PositiveStress(m, "E"), nu);
             }
             else g = lib?.ShearModulus ?? throw _file.Error(v, "G", $"material '{name}' needs a shear modulus: 'G', or 'E' and 'poisson', or 'library'");
-            if (!(g > 0)) throw _file.Error(m.Get("G")!, "G", "the shear modulus must be positive");
+            if (!(g > 0)) throw _file.Error(m.Get("G") ?? v, "G", "the shear modulus must be positive");
+            if (ShaftValueRange.Check(QuantityKind.Modulus, g) is { } odd) throw _file.Error(m.Get("G") ?? m.Get("E") ?? v, "G", $"material '{name}': the shear modulus {odd}");
 
             double? allow = lib?.AllowableShear, ssy = lib?.ShearYield;
             if (m.Has("yield") || m.Has("ultimate"))

@@ -8,7 +8,7 @@ namespace SectionTwist.Import.Dxf;
 /// line ends onto the cluster point (arcs are re-fitted through their mid point), drops degenerate, duplicate and
 /// overlapping pieces, and chains the rest into loops by walking node adjacency.
 /// </summary>
-internal sealed partial class OutlineAssembler(string file, double snapTol, double splineTol, double diag)
+internal sealed partial class OutlineAssembler(string file, double snapTol, double splineTol, double diag, CancellationToken ct = default)
 {
     /// <summary>Largest distance an end point was moved by snapping (drawing units).</summary>
     public double LargestGap { get; private set; }
@@ -26,24 +26,35 @@ internal sealed partial class OutlineAssembler(string file, double snapTol, doub
         foreach (var c in curves)
         {
             if (c.Segment is not null) { _pieces.Add(new OutlinePiece(c.Segment, c.Source, c.Layer)); continue; }
+            ct.ThrowIfCancellationRequested();
             var pts = c.Spline!.Flatten(splineTol, 200_000);
             var dedup = new List<Point2> { pts[0] };
             for (int i = 1; i < pts.Count; i++) if (pts[i] != dedup[^1]) dedup.Add(pts[i]);
             for (int i = 0; i + 1 < dedup.Count; i++) _pieces.Add(new OutlinePiece(new LineSegment(dedup[i], dedup[i + 1]), c.Source, c.Layer));
+            if (_pieces.Count > Limits.InputLimits.MaxDxfPieces)
+                throw new SectionTwistException("dxf-too-large", $"{file}: the splines flatten to more than {Limits.InputLimits.MaxDxfPieces} pieces; export only the section outline or simplify the splines");
         }
         var closed = _pieces.Where(p => p.IsClosedCurve).ToList();
         _pieces.RemoveAll(p => p.IsClosedCurve);
         Snap();
+        ct.ThrowIfCancellationRequested();
         Rebuild();
+        ct.ThrowIfCancellationRequested();
         DropDuplicates();
+        ct.ThrowIfCancellationRequested();
         AddClosedCurves(closed);
         Chain();
+        ct.ThrowIfCancellationRequested();
+        if (Loops.Count > Limits.InputLimits.MaxLoops)
+            throw new SectionTwistException("dxf-too-many-loops",
+                $"{file}: {Loops.Count} closed loops, more than the {Limits.InputLimits.MaxLoops} SectionTwist analyses together (contour or hatch lines?); pick the outline's layer with --layer NAME"); 
     }
 
     private void AddClosedCurves(List<OutlinePiece> closed)
     {
         for (int i = 0; i < closed.Count; i++)
         {
+            if ((i & 255) == 0) ct.ThrowIfCancellationRequested();
             bool dup = false;
             for (int j = 0; j < i && !dup; j++) dup = Covers(closed[j].Segment, closed[i].Segment);
             if (dup) { DuplicatesDropped++; continue; }
