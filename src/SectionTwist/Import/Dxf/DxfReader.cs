@@ -69,6 +69,7 @@ internal static class DxfReader
                     if (loopSet.Any(l => SameLoop(l, asm.Loops[li]))) foreach (var s in asm.LoopLayers[li]) lay.Add(s);
                 parts.Add(new DxfPartInfo(k + 1, regions[k].Area, regions[k].Holes.Count, regions[k].Outer.Bounds, lay.ToArray()));
             }
+            if (o.Part is null) StrayHoleCheck.Check(file, regions, asm.Loops, asm.LoopLayers, unit ?? LengthUnit.Millimetre);
             if (o.Part is { } pn && pn > regions.Count)
                 throw new SectionTwistException("dxf-no-part",
                     $"{file}: --part {pn} does not exist: the drawing holds {regions.Count} part(s) with areas {string.Join(", ", parts.Select(p => p.Area.ToString("G4", CultureInfo.InvariantCulture)))} (largest first)");
