@@ -41,7 +41,10 @@ public static class InputLimits
     public const int MaxDxfBlockDepth = 32;
 
     /// <summary>Most closed loops in one profile.</summary>
-    public const int MaxLoops = 20_000;
+    public const int MaxLoops = 5_000;
+
+    /// <summary>Most straight pieces (curves flattened finely) the outline check of a profile examines for crossings.</summary>
+    public const int MaxOutlineEdges = 2_000_000;
 
     /// <summary>Most points of a point list.</summary>
     public const int MaxPoints = 2_000_000;

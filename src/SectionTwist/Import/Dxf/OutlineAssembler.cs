@@ -73,8 +73,14 @@ internal sealed partial class OutlineAssembler(string file, double snapTol, doub
         int Find(int x) { while (parent[x] != x) { parent[x] = parent[parent[x]]; x = parent[x]; } return x; }
         double cell = snapTol > 0 ? snapTol : Math.Max(diag, 1) * 1e-15;
         var grid = new Dictionary<(long, long), List<int>>();
+        // exact copies (stacked duplicate entities) join their first occurrence directly: the grid sees each point once,
+        // so a crowd of coincident ends costs O(n), not O(n^2)
+        var exact = new Dictionary<Point2, int>();
         for (int i = 0; i < n; i++)
         {
+            if ((i & 4095) == 0) ct.ThrowIfCancellationRequested();
+            if (exact.TryGetValue(pts[i], out int first)) { parent[Find(i)] = Find(first); continue; }
+            exact[pts[i]] = i;
             long cx = (long)Math.Floor(pts[i].X / cell), cy = (long)Math.Floor(pts[i].Y / cell);
             for (long dx = -1; dx <= 1; dx++)
                 for (long dy = -1; dy <= 1; dy++)
