@@ -48,6 +48,9 @@ public sealed class Campaign(CampaignOptions o, TextWriter log)
     }
 
     private State _state = new();
+    // failures found while a worker runs are minimized after it ends: minimizing inside the read loop would stop reading
+    // the worker's output, block it on a full pipe and let its input budget run out
+    private readonly List<(string Target, long Index, Outcome Outcome)> _toMinimize = [];
     private readonly Stopwatch _clock = new();
     private double _previousSeconds;
 
@@ -151,21 +154,23 @@ public sealed class Campaign(CampaignOptions o, TextWriter log)
         }
         p.WaitForExit();
         reader.Wait(5000);
+        long resume = Math.Max(last + 1, end);
         if (current is { } c)
         {
             var outcome = killedFor ?? Outcome.Death;
             Count(target, outcome);
             Save(target, c, outcome, killedFor is null ? $"worker exit code {p.ExitCode}: {string.Join(" | ", errTail.TakeLast(3))}" : $"worker ended by the {outcome.Name()} watchdog");
-            return c + 1;
+            resume = c + 1;
         }
-        if (p.ExitCode != 0 && last + 1 < end)
+        else if (p.ExitCode != 0 && last + 1 < end)
         {
             // died between inputs (should not happen): count the next input as the culprit
             Count(target, Outcome.Death);
             Save(target, last + 1, Outcome.Death, $"worker exit code {p.ExitCode} between inputs");
-            return last + 2;
+            resume = last + 2;
         }
-        return Math.Max(last + 1, end);
+        MinimizePending(target);
+        return resume;
     }
 
     private Process StartWorker(IReadOnlyList<string> args)
@@ -198,18 +203,30 @@ public sealed class Campaign(CampaignOptions o, TextWriter log)
         var input = Runner.Make(target, o.Seed, index);
         File.WriteAllBytes(path, input);
         string entry = $"{name}: {message}";
-        int failuresSaved;
-        lock (_state) failuresSaved = _state.Findings.Count(f => !f.StartsWith("slow", StringComparison.Ordinal));
-        if (outcome.IsFailure() && failuresSaved < 200)
-        {
-            var min = Minimizer.Minimize(input, candidate => Replay(target, candidate) == outcome);
-            File.WriteAllBytes(Path.Combine(o.Out, "findings", name + ".min" + t.Extension), min);
-            entry += $" (minimized {input.Length} -> {min.Length} bytes)";
-        }
         lock (_state)
         {
+            if (outcome.IsFailure() && _toMinimize.Count(x => x.Target == target) < 20) _toMinimize.Add((target, index, outcome));
             if (_state.Findings.Count < 2000) _state.Findings.Add(entry);
             log.WriteLine(entry);
+        }
+    }
+
+    /// <summary>Minimizes the failures this target's last worker found (bounded replays each), saving NAME.min.EXT beside them.</summary>
+    private void MinimizePending(string target)
+    {
+        List<(string Target, long Index, Outcome Outcome)> mine;
+        lock (_state)
+        {
+            mine = _toMinimize.Where(x => x.Target == target).ToList();
+            _toMinimize.RemoveAll(x => x.Target == target);
+        }
+        var t = FuzzTarget.Get(target);
+        foreach (var (_, index, outcome) in mine)
+        {
+            var input = Runner.Make(target, o.Seed, index);
+            var min = Minimizer.Minimize(input, candidate => Replay(target, candidate) == outcome);
+            File.WriteAllBytes(Path.Combine(o.Out, "findings", $"{outcome.Name()}-{target}-{index}.min{t.Extension}"), min);
+            lock (_state) log.WriteLine($"{outcome.Name()}-{target}-{index}: minimized {input.Length} -> {min.Length} bytes");
         }
     }
 

@@ -21,7 +21,7 @@ internal sealed partial class ShaftFileReader
         {
             if (m.String(key) is not { } symbol) continue;
             double f = QuantityText.UnitFactor(symbol, kind)
-                ?? throw _file.Error(m.Get(key)!, key, $"'{symbol}' is not a {key} unit; use one of {QuantityText.Examples(kind)}");
+                ?? throw _file.Error(m.Get(key)!, key, $"'{YamlGuard.Short(symbol)}' is not a {key} unit; use one of {QuantityText.Examples(kind)}");
             _file.SetDefault(kind, symbol, f);
             found[key] = new DisplayUnit(symbol, f);
         }
@@ -38,7 +38,7 @@ internal sealed partial class ShaftFileReader
         foreach (var (k, v) in map.Children)
         {
             string name = ((YamlScalarNode)k).Value ?? "";
-            var m = new YamlMap(_file, v, $"material '{name}'", "name", "library", "G", "E", "poisson", "allowableShear", "shearYield", "yield", "ultimate", "source");
+            var m = new YamlMap(_file, v, $"material '{YamlGuard.Short(name)}'", "name", "library", "G", "E", "poisson", "allowableShear", "shearYield", "yield", "ultimate", "source");
             Material? lib = null;
             if (m.Get("library") is { } ln)
             {
@@ -46,27 +46,27 @@ internal sealed partial class ShaftFileReader
                 if (!ShaftMaterials.TryGet(key, out var found))
                 {
                     string? near = YamlMap.Nearest(key, ShaftMaterials.All.Keys);
-                    throw _file.Error(ln, "library", $"unknown library material '{key}'{(near is null ? "" : $"; did you mean '{near}'?")} (library: {string.Join(", ", ShaftMaterials.All.Keys)})");
+                    throw _file.Error(ln, "library", $"unknown library material '{YamlGuard.Short(key)}'{(near is null ? "" : $"; did you mean '{near}'?")} (library: {YamlMap.Names(ShaftMaterials.All.Keys)})");
                 }
                 lib = found;
             }
             double g;
             if (m.Has("G"))
             {
-                if (m.Has("E") || m.Has("poisson")) throw _file.Error(m.KeyNode("E"), "E", $"material '{name}': give either G or E with poisson, not both");
+                if (m.Has("E") || m.Has("poisson")) throw _file.Error(m.KeyNode("E"), "E", $"material '{YamlGuard.Short(name)}': give either G or E with poisson, not both");
                 g = m.Quantity("G", QuantityKind.Modulus)!.Value;
             }
             else if (m.Has("E") || m.Has("poisson"))
             {
                 if (!m.Has("E") || !m.Has("poisson"))
-                    throw _file.Error(v, m.Has("E") ? "poisson" : "E", $"material '{name}': G = E / (2 (1 + poisson)) needs both 'E' and 'poisson'");
+                    throw _file.Error(v, m.Has("E") ? "poisson" : "E", $"material '{YamlGuard.Short(name)}': G = E / (2 (1 + poisson)) needs both 'E' and 'poisson'");
                 double nu = m.Quantity("poisson", QuantityKind.Number)!.Value;
                 if (!(nu > -1 && nu < 0.5)) throw _file.Error(m.Get("poisson")!, "poisson", "Poisson's ratio must lie between -1 and 0.5 (steel about 0.3)");
                 g = Material.ShearModulusFrom(PositiveStress(m, "E"), nu);
             }
-            else g = lib?.ShearModulus ?? throw _file.Error(v, "G", $"material '{name}' needs a shear modulus: 'G', or 'E' and 'poisson', or 'library'");
+            else g = lib?.ShearModulus ?? throw _file.Error(v, "G", $"material '{YamlGuard.Short(name)}' needs a shear modulus: 'G', or 'E' and 'poisson', or 'library'");
             if (!(g > 0)) throw _file.Error(m.Get("G") ?? v, "G", "the shear modulus must be positive");
-            if (ShaftValueRange.Check(QuantityKind.Modulus, g) is { } odd) throw _file.Error(m.Get("G") ?? m.Get("E") ?? v, "G", $"material '{name}': the shear modulus {odd}");
+            if (ShaftValueRange.Check(QuantityKind.Modulus, g) is { } odd) throw _file.Error(m.Get("G") ?? m.Get("E") ?? v, "G", $"material '{YamlGuard.Short(name)}': the shear modulus {odd}");
 
             double? allow = lib?.AllowableShear, ssy = lib?.ShearYield;
             if (m.Has("yield") || m.Has("ultimate"))
@@ -97,7 +97,7 @@ internal sealed partial class ShaftFileReader
         if (ShaftMaterials.TryGet(key, out var lib)) return lib;
         var all = materials.Keys.Concat(ShaftMaterials.All.Keys).ToArray();
         string? near = YamlMap.Nearest(key, all);
-        throw _file.Error(node, "material", $"unknown material '{key}'{(near is null ? "" : $"; did you mean '{near}'?")} (file: {(materials.Count == 0 ? "none" : string.Join(", ", materials.Keys))}; library: {string.Join(", ", ShaftMaterials.All.Keys)}); define it under 'materials:'");
+        throw _file.Error(node, "material", $"unknown material '{YamlGuard.Short(key)}'{(near is null ? "" : $"; did you mean '{near}'?")} (file: {(materials.Count == 0 ? "none" : YamlMap.Names(materials.Keys))}; library: {YamlMap.Names(ShaftMaterials.All.Keys)}); define it under 'materials:'");
     }
 
     private Dictionary<string, (YamlNode Node, Func<SectionStiffness> Get)> ReadSections(YamlNode? node)
@@ -117,11 +117,11 @@ internal sealed partial class ShaftFileReader
     /// <summary>Checks a section definition now and returns a cached getter (template and DXF sections are analysed once, on first use).</summary>
     private Func<SectionStiffness> ReadSection(YamlNode node, string name)
     {
-        var m = new YamlMap(_file, node, $"section '{name}'", "round", "tube", "J", "shearFactor", "torsionalModulus", "description", "outerDiameter", "template", "dxf", "layer", "part");
+        var m = new YamlMap(_file, node, $"section '{YamlGuard.Short(name)}'", "round", "tube", "J", "shearFactor", "torsionalModulus", "description", "outerDiameter", "template", "dxf", "layer", "part");
         string[] kinds = [.. new[] { "round", "tube", "J", "template", "dxf" }.Where(m.Has)];
         if (kinds.Length != 1)
             throw _file.Error(node, kinds.Length == 0 ? "round" : kinds[1],
-                $"section '{name}' needs exactly one of 'round', 'tube', 'J' (with 'shearFactor'), 'template' or 'dxf'{(kinds.Length > 1 ? $", found {string.Join(" and ", kinds)}" : "")}");
+                $"section '{YamlGuard.Short(name)}' needs exactly one of 'round', 'tube', 'J' (with 'shearFactor'), 'template' or 'dxf'{(kinds.Length > 1 ? $", found {string.Join(" and ", kinds)}" : "")}");
         string? description = m.String("description");
         double? od = m.Has("outerDiameter") ? Diameter(m.Get("outerDiameter")!, "outerDiameter") : null;
         switch (kinds[0])
@@ -134,7 +134,7 @@ internal sealed partial class ShaftFileReader
                 }
             case "tube":
                 {
-                    var t = new YamlMap(_file, m.Get("tube")!, $"tube of section '{name}'", "outer", "inner");
+                    var t = new YamlMap(_file, m.Get("tube")!, $"tube of section '{YamlGuard.Short(name)}'", "outer", "inner");
                     double outer = Diameter(t.Require("outer", "give the outer diameter"), "outer");
                     double inner = t.Quantity("inner", QuantityKind.Length) ?? throw _file.Error(m.Get("tube")!, "inner", "give the inner diameter (0 for solid: use 'round' instead)");
                     if (!(inner >= 0 && inner < outer)) throw _file.Error(t.Get("inner")!, "inner", "the inner diameter must be at least 0 and smaller than the outer diameter");
@@ -147,7 +147,7 @@ internal sealed partial class ShaftFileReader
                     if (!(j > 0)) throw _file.Error(m.Get("J")!, "J", "the torsion constant must be positive");
                     double factor;
                     if (m.Has("shearFactor") == m.Has("torsionalModulus"))
-                        throw _file.Error(node, "shearFactor", $"section '{name}' with 'J' needs exactly one of 'shearFactor' (peak shear per unit torque, e.g. '1.2e-4 1/mm^3') or 'torsionalModulus' (T / tau_max, e.g. '12 cm^3')");
+                        throw _file.Error(node, "shearFactor", $"section '{YamlGuard.Short(name)}' with 'J' needs exactly one of 'shearFactor' (peak shear per unit torque, e.g. '1.2e-4 1/mm^3') or 'torsionalModulus' (T / tau_max, e.g. '12 cm^3')");
                     if (m.Has("shearFactor")) factor = m.Quantity("shearFactor", QuantityKind.ShearPerTorque)!.Value;
                     else
                     {

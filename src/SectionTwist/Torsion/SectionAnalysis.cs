@@ -61,6 +61,13 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
                 warnings.Add(new AnalysisWarning("accuracy-not-reached", $"{budget.Describe()} stopped refinement; results carry the error estimate of the last pass"));
                 break;
             }
+            if (mesh.ElementCount > budget.MaxElements)
+            {
+                // the estimate before meshing is a lower bound; the mesh itself is the measure
+                if (pass == 0) throw budget.Refusal(mesh.ElementCount);
+                warnings.Add(new AnalysisWarning("accuracy-not-reached", $"{budget.Describe()} stopped refinement; results carry the error estimate of the last pass"));
+                break;
+            }
             coarseMesh = mesh;
             Report("solve", f0 + 0.2 * span);
             coarse = TorsionSolver.Solve(coarseMesh, holeArea, ct);
