@@ -48,6 +48,9 @@ public sealed class Campaign(CampaignOptions o, TextWriter log)
     }
 
     private State _state = new();
+    // counts of batches still running; merged into the state when their batch ends, so that state.json (and --resume)
+    // only ever holds whole batches
+    private readonly Dictionary<string, Dictionary<string, long>> _running = [];
     // failures found while a worker runs are minimized after it ends: minimizing inside the read loop would stop reading
     // the worker's output, block it on a full pipe and let its input budget run out
     private readonly List<(string Target, long Index, Outcome Outcome)> _toMinimize = [];
@@ -75,6 +78,7 @@ public sealed class Campaign(CampaignOptions o, TextWriter log)
                 while (next < end) next = RunBatch(t, next, end);
                 lock (_state)
                 {
+                    Commit(t);
                     _state.Next[t] = end;
                     _state.Seconds = _previousSeconds + _clock.Elapsed.TotalSeconds;
                     File.WriteAllText(statePath, JsonSerializer.Serialize(_state));
@@ -92,6 +96,7 @@ public sealed class Campaign(CampaignOptions o, TextWriter log)
                     if (next >= perTarget) continue;
                     long end = Math.Min(perTarget, next + o.Batch);
                     while (next < end) next = RunBatch(t, next, end);
+                    Commit(t);
                     _state.Next[t] = end;
                     _state.Seconds = _previousSeconds + _clock.Elapsed.TotalSeconds;
                     File.WriteAllText(statePath, JsonSerializer.Serialize(_state));
@@ -190,9 +195,17 @@ public sealed class Campaign(CampaignOptions o, TextWriter log)
     {
         lock (_state)
         {
-            var c = _state.Counts[target];
+            if (!_running.TryGetValue(target, out var c)) _running[target] = c = [];
             c[outcome.Name()] = c.GetValueOrDefault(outcome.Name()) + 1;
         }
+    }
+
+    /// <summary>Adds the counts of the batch of <paramref name="target"/> that just ended to the state (call under the lock).</summary>
+    private void Commit(string target)
+    {
+        if (!_running.Remove(target, out var c)) return;
+        var s = _state.Counts[target];
+        foreach (var (k, v) in c) s[k] = s.GetValueOrDefault(k) + v;
     }
 
     private void Save(string target, long index, Outcome outcome, string message)

@@ -43,6 +43,7 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
         var holeArea = profile.Regions.SelectMany(r => r.Loops).Select(l => Math.Abs(l.SignedArea)).ToArray();
         double size = Math.Sqrt(props.Area);
         double h = Math.Min(0.6 * size * Math.Pow(acc, 0.25), profile.Bounds.Diagonal / 8);
+        MeshFeasibility.Check(profile);
         var budget = AnalysisBudget.For(profile, options, acc, h);
         TorsionSolution? coarse = null, fine = null;
         Mesh? coarseMesh = null;
