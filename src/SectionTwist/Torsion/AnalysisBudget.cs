@@ -8,7 +8,7 @@ namespace SectionTwist.Torsion;
 /// The memory budget of one analysis turned into an element limit, and the estimate of the first pass checked against
 /// it before anything is meshed (<see cref="MeshFeasibility.EstimateElements"/>; the first pass meshes once and refines
 /// uniformly once, 1 + 4 times the estimate). <see cref="BytesPerElement"/> was measured as the peak working set over the
-/// element count of the finest solve on a keyseat (1.2e5 elements, 5.3 kB) and a thin tube (1.7e5 elements, 6.7 kB), and 7.5 kB on a 7e5-element multigrid solve; rounded up.
+/// element count of the finest solve on a keyseat (1.2e5 elements, 5.3 kB) and a thin tube (1.7e5 elements, 6.7 kB); rounded up to 8 kB as a margin for the larger multigrid solves, which were not measured.
 /// </summary>
 internal sealed class AnalysisBudget
 {
