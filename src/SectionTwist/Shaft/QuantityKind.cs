@@ -15,5 +15,6 @@ internal enum QuantityKind
     AreaMoment,
     ShearPerTorque,
     TwistRate,
+    Density,
     Number,
 }

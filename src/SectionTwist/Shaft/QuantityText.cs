@@ -76,6 +76,7 @@ internal static partial class QuantityText
         QuantityKind.AreaMoment => "mm^4, cm^4, m^4, in^4",
         QuantityKind.ShearPerTorque => "1/mm^3, 1/m^3, 1/in^3",
         QuantityKind.TwistRate => "deg/m, deg/ft, rad/m",
+        QuantityKind.Density => "kg/m^3, g/cm^3, lb/in^3",
         _ => "no unit",
     };
 
@@ -103,6 +104,7 @@ internal static partial class QuantityText
             QuantityKind.TorquePerLength => typeof(TorquePerLength),
             QuantityKind.RotationalStiffness => typeof(RotationalStiffness),
             QuantityKind.AreaMoment => typeof(AreaMomentOfInertia),
+            QuantityKind.Density => typeof(Density),
             _ => null,
         };
         if (t is null || !Quantity.TryParse(CultureInfo.InvariantCulture, t, "1 " + unit, out IQuantity? q)) return null;
@@ -117,6 +119,7 @@ internal static partial class QuantityText
             RotationalStiffness rs => rs.NewtonMetersPerRadian,
             AreaMomentOfInertia a => a.MetersToTheFourth,
             Volume vol => vol.CubicMeters,
+            Density d => d.KilogramsPerCubicMeter,
             _ => null,
         };
     }

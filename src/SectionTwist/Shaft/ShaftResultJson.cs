@@ -41,6 +41,8 @@ internal static class ShaftResultJson
             length = s.Length,
             section = s.Section,
             material = s.Material.Name,
+            materialSource = s.Material.Source,
+            materialStrengthBasis = s.Material.StrengthBasis switch { MaterialBasis.SpecifiedMinimum => "specified-minimum", MaterialBasis.Typical => "typical", _ => "user" },
             stiffness = s.Stiffness,
             internalTorque = s.InternalTorque,
             torqueAtFrom = s.TorqueAtFrom,
