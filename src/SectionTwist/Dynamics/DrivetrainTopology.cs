@@ -14,7 +14,7 @@ public enum TrainPartKind
 }
 
 /// <summary>One segment as the dynamics sees it: ends ordered along the axis, stiffness and inertia data.</summary>
-internal sealed record SegmentData(int Part, int A, int B, double Length, double G, double Density, double? J, double? Ip, double DiameterA, double DiameterB)
+internal sealed record SegmentData(int Part, int A, int B, double Length, double G, double Density, double? J, double? Ip, double DiameterA, double DiameterB, double ShearPerTorque)
 {
     public bool IsTaper => J is null;
 
@@ -124,7 +124,8 @@ internal sealed class DrivetrainTopology
             ip = s.PolarMoment ?? throw new SectionTwistException("bad-drivetrain",
                 $"segment '{seg.Label}' of shaft '{shaft}': section '{s.Description}' has no polar second moment of area (Ix + Iy, not J), which the shaft's own inertia needs; add 'polarMoment' to the section");
         }
-        Segments.Add(new SegmentData(Parts.Count, a, b, Math.Abs(xb - xa), seg.Material.ShearModulus, rho, seg.Section?.TorsionConstant, ip, dA, dB));
+        Segments.Add(new SegmentData(Parts.Count, a, b, Math.Abs(xb - xa), seg.Material.ShearModulus, rho, seg.Section?.TorsionConstant, ip, dA, dB,
+            seg.Section?.ShearPerTorque ?? 16 / (Math.PI * Math.Pow(Math.Min(dA, dB), 3))));
         Parts.Add(new TrainPart(TrainPartKind.Segment, seg.Label, shaft, Index[seg.From], Index[seg.To]));
     }
 
