@@ -5,8 +5,9 @@ namespace SectionTwist.Dynamics;
 /// <summary>
 /// The symmetric-definite generalized eigenproblem K x = lambda M x for small dense matrices (Golub and Van Loan, Matrix
 /// Computations, 4th ed., sec. 8.7.2): Cholesky M = L L^T, the standard symmetric problem C y = lambda y with
-/// C = L^-1 K L^-T solved by Math.NET's symmetric eigenvalue decomposition (Householder tridiagonalisation and the
-/// implicit QL iteration), x = L^-T y. Unknowns without inertia (a station held only by springs) are first removed by exact
+/// C = L^-1 K L^-T, x = L^-T y. When only the lowest few pairs are wanted, C y = lambda y is solved by
+/// <see cref="LowestEigenpairs"/> (tridiagonalisation, bisection, inverse iteration); when all are wanted (forced response),
+/// by Math.NET's symmetric eigenvalue decomposition (Householder tridiagonalisation and the implicit QL iteration). Unknowns without inertia (a station held only by springs) are first removed by exact
 /// static condensation, K* = K_rr - K_rz K_zz^-1 K_zr, and recovered from x_z = -K_zz^-1 K_zr x_r.
 /// </summary>
 internal static class SymmetricDefiniteEigen
@@ -54,15 +55,21 @@ internal static class SymmetricDefiniteEigen
         SolveLower(mr, r, c, r);
         for (int i = 0; i < r; i++)
             for (int j = 0; j < i; j++) { double a = 0.5 * (c[i * r + j] + c[j * r + i]); c[i * r + j] = a; c[j * r + i] = a; }
-        var evd = Matrix<double>.Build.Dense(r, r, c).Evd(Symmetricity.Symmetric);
-        var order = Enumerable.Range(0, r).OrderBy(i => evd.EigenValues[i].Real).ToArray();
-        var values = order.Select(i => evd.EigenValues[i].Real).ToArray();
         int take = Math.Min(wanted, r);
+        double[] values;
+        double[][] ys;
+        if (take < r) (values, ys) = LowestEigenpairs.Solve(c, r, take);
+        else
+        {
+            var evd = Matrix<double>.Build.Dense(r, r, c).Evd(Symmetricity.Symmetric);
+            var order = Enumerable.Range(0, r).OrderBy(i => evd.EigenValues[i].Real).ToArray();
+            values = [.. order.Select(i => evd.EigenValues[i].Real)];
+            ys = [.. order.Select(j => Enumerable.Range(0, r).Select(i => evd.EigenVectors[i, j]).ToArray())];
+        }
         var vectors = new double[take][];
-        var y = new double[r];
         for (int q = 0; q < take; q++)
         {
-            for (int i = 0; i < r; i++) y[i] = evd.EigenVectors[i, order[q]];
+            var y = ys[q];
             SolveUpperT(mr, r, y, 1);
             var x = new double[n];
             for (int i = 0; i < r; i++) x[massive[i]] = y[i];
