@@ -84,12 +84,5 @@ internal static class ModesText
         w.WriteLine(ModalResultJson.Caution);
     }
 
-    private static void Table(TextWriter w, List<string[]> rows)
-    {
-        int cols = rows[0].Length;
-        var width = new int[cols];
-        foreach (var row in rows) for (int c = 0; c < cols; c++) width[c] = Math.Max(width[c], row[c].Length);
-        foreach (var row in rows)
-            w.WriteLine("  " + string.Join("  ", row.Select((cell, c) => c == cols - 1 ? cell : cell.PadRight(width[c]))).TrimEnd());
-    }
+    private static void Table(TextWriter w, List<string[]> rows) => ShaftCommand.Table(w, rows);
 }

@@ -142,7 +142,7 @@ internal sealed class ShaftCommand : ICommand
         w.WriteLine(Caution);
     }
 
-    private static void Table(TextWriter w, List<string[]> rows)
+    internal static void Table(TextWriter w, List<string[]> rows)
     {
         int cols = rows[0].Length;
         var width = new int[cols];
