@@ -23,7 +23,10 @@ public static class ShaftSections
     public static SectionStiffness Resolve(SectionSource source, AnalysisOptions? options = null, Action<string>? notes = null)
     {
         var (r, outer) = Analyze(source, options, notes);
-        return new SectionStiffness(r.TorsionConstant, r.MaxShearPerTorque, source.TemplateSpec ?? Path.GetFileName(source.DxfPath), outer);
+        return new SectionStiffness(r.TorsionConstant, r.MaxShearPerTorque, source.TemplateSpec ?? Path.GetFileName(source.DxfPath), outer)
+        {
+            Bending = SectionTwist.Bending.BendingSection.FromSection(r, outer),
+        };
     }
 
     /// <summary>
