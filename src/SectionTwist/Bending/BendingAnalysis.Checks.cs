@@ -51,6 +51,9 @@ internal sealed partial class BendingAnalysis
                 default:
                     throw new SectionTwistException("bad-load", $"unsupported transverse load {load.GetType().Name}");
             }
+            // round-off of cos(90 deg) and the like: components below 1e-12 of the load's size are zero
+            double size = Math.Max(Math.Max(Math.Abs(py), Math.Abs(pz)), Math.Abs(px));
+            py = Clean(py, size); pz = Clean(pz, size); px = Clean(px, size); my = Clean(my, Math.Abs(my) + Math.Abs(mz)); mz = Clean(mz, Math.Abs(my) + Math.Abs(mz));
             if (!double.IsFinite(py + pz + px + my + mz)) throw new SectionTwistException("bad-load", $"load at '{load.Station}' is not finite");
             fy[n] += py; fz[n] += pz; fx[n] += px;
             // in-plane moments in the sense of a positive slope: plane Y (x toward Y) is about +Z, plane Z (x toward Z) about -Y
@@ -59,6 +62,8 @@ internal sealed partial class BendingAnalysis
         }
         return (fy, fz, fx, cy, cz, resolved);
     }
+
+    private static double Clean(double v, double size) => Math.Abs(v) <= 1e-12 * size ? 0 : v + 0.0;
 
     private (int Node, double Reaction) _thrust;
 
@@ -137,7 +142,7 @@ internal sealed partial class BendingAnalysis
             {
                 Label = b.Label, Station = b.Station, Position = _x[node],
                 ForceY = first ? y.Reactions[si].Force : 0, ForceZ = first ? z.Reactions[si].Force : 0,
-                AxialForce = b.TakesThrust ? _thrust.Reaction : 0,
+                AxialForce = b.TakesThrust ? _thrust.Reaction + 0.0 : 0,
                 MomentY = first && clamp ? y.Reactions[si].Moment : 0, MomentZ = first && clamp ? z.Reactions[si].Moment : 0,
                 Slope = clamp ? 0 : Math.Sqrt(sy * sy + sz * sz),
                 SlopeLimit = b.SlopeLimit ?? _b.SlopeLimit,

@@ -29,7 +29,7 @@ internal sealed partial class BendingAnalysis
             double kt = loc.Kt ?? est?.Kt ?? throw new SectionTwistException("bad-fatigue", $"{where}: give 'Kt' and 'Kts', or a 'feature' (shoulder-sharp, shoulder-rounded, keyseat-end-mill, ring-groove)");
             double kts = loc.Kts ?? est?.Kts ?? throw new SectionTwistException("bad-fatigue", $"{where}: give 'Kts' (torsion) beside 'Kt'");
             if (kt < 1 || kts < 1) throw new SectionTwistException("bad-fatigue", $"{where}: stress-concentration factors are at least 1");
-            string ktSource = loc.Kt is not null ? "given" : $"{loc.Feature} estimate (Shigley 10th ed., Table 7-1, from memory)";
+            string ktSource = loc.Kt is not null ? "given" : $"{NotchFactors.Name(loc.Feature)} estimate (Shigley 10th ed., Table 7-1, from memory)";
             string ktsSource = loc.Kts is not null ? "given" : ktSource;
             double d = section.OuterDiameter;
             double? r = loc.NotchRadius ?? (est is { RadiusRatio: var rd } && double.IsFinite(rd) ? rd * d : null);

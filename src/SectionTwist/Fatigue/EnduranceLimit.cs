@@ -51,7 +51,7 @@ public sealed record EnduranceLimit
             UnmodifiedSource = se0Source,
             Factors = new[]
             {
-                new FatigueFactor("ka", "surface", ka, $"{a} S_ut^{b} (S_ut in MPa), {settings.Surface} (Shigley 10th ed., Table 6-2, from memory)"),
+                new FatigueFactor("ka", "surface", ka, $"{a} S_ut^{b} (S_ut in MPa), {SurfaceName(settings.Surface)} (Shigley 10th ed., Table 6-2, from memory)"),
                 new FatigueFactor("kb", "size", kb, kbSource),
                 new FatigueFactor("kc", "load", 1, "bending; torsion enters through the von Mises stress (Shigley 10th ed., sec. 7-4)"),
                 new FatigueFactor("kd", "temperature", settings.TemperatureFactor, settings.TemperatureFactor == 1 ? "room temperature (given: 1)" : "given"),
@@ -60,6 +60,15 @@ public sealed record EnduranceLimit
             }.AsReadOnly(),
         };
     }
+
+    /// <summary>The finish's name in the shaft file.</summary>
+    public static string SurfaceName(SurfaceFinish s) => s switch
+    {
+        SurfaceFinish.Ground => "ground",
+        SurfaceFinish.HotRolled => "hot-rolled",
+        SurfaceFinish.AsForged => "as-forged",
+        _ => "machined or cold-drawn",
+    };
 
     /// <summary>Where <see cref="Unmodified"/> comes from.</summary>
     public string UnmodifiedSource { get; init; } = "";

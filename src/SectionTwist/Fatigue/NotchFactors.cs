@@ -17,6 +17,16 @@ public static class NotchFactors
         _ => null,
     };
 
+    /// <summary>The feature's name in the shaft file, e.g. <c>shoulder-rounded</c>.</summary>
+    public static string Name(NotchFeature feature) => feature switch
+    {
+        NotchFeature.ShoulderSharp => "shoulder-sharp",
+        NotchFeature.ShoulderRounded => "shoulder-rounded",
+        NotchFeature.KeyseatEndMill => "keyseat-end-mill",
+        NotchFeature.RetainingRingGroove => "ring-groove",
+        _ => "none",
+    };
+
     /// <summary>
     /// Neuber notch sensitivity for steel, q = 1 / (1 + sqrt(a / r)); null outside the fit's range 340..1700 MPa of S_ut (then
     /// use q = 1, which is conservative).
