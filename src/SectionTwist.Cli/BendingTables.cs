@@ -45,7 +45,7 @@ internal static class BendingTables
             sr.Add([s.Label, u.Torque.Format(s.MaxMoment), u.Length.Format(s.Position), $"{u.Length.Format(s.Stress.X, "G3")},{u.Length.Format(s.Stress.Y, "G3")}",
                 u.Stress.Format(s.Stress.VonMises, "G4"), u.Stress.Format(s.Stress.Tresca, "G4"), s.Stress.Dominant,
                 s.YieldStrength is { } sy ? u.Stress.Format(sy, "G4") + (s.StrengthBasis == "typical" ? " (typical)" : "") : "-",
-                Sf(s.SafetyFactor), Sf(s.FatigueSafetyFactor), s.ExceedsYield ? "!! OVER YIELD" : s.FatigueSafetyFactor < 1 ? "!! FATIGUE" : "ok"]);
+                Sf(s.SafetyFactor), Sf(s.FatigueSafetyFactor), s.ExceedsYield ? "!! OVER YIELD" : s.FatigueSafetyFactor < 1 ? "!! FATIGUE" : s.SafetyFactor is null ? "no yield strength" : s.FatigueSafetyFactor is null ? "ok (yield)" : "ok (yield, unnotched fatigue)"]);
         Table(w, sr);
         if (r.Governing is { } g)
             w.WriteLine($"governing (static): {g.Label} at {u.Length.Format(g.Position)} {L}: von Mises {u.Stress.Format(g.Stress.VonMises, "G4")} {S}, " +

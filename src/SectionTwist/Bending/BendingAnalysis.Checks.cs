@@ -162,6 +162,8 @@ internal sealed partial class BendingAnalysis
             var mat = s.Model.Material;
             if (mat.StrengthBasis == MaterialBasis.Typical)
                 _warnings.Add($"segment '{s.Result.Label}': the yield strength of '{mat.Name}' is a typical value, not a specified minimum: the static factor of safety is not a design value");
+            if (s.Model.Section?.Bending is { HasSingularCorner: true })
+                _warnings.Add($"segment '{s.Result.Label}': its section has a sharp re-entrant corner, where the torsional shear (and so the combined stress) is singular and grows with refinement; model the real fillet radius");
             if (mat.YieldStrength is null)
                 _warnings.Add($"segment '{s.Result.Label}': material '{mat.Name}' has no yield strength; give 'yield' for the static check");
             list.Add(new SegmentStress

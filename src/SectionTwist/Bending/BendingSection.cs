@@ -28,6 +28,9 @@ public sealed class BendingSection
     public double OuterDiameter { get; }
     /// <summary>Where the boundary shear comes from: <c>exact</c> (round, tube) or <c>field</c> (the Prandtl solution).</summary>
     public string ShearSource { get; }
+    /// <summary>True when the section has a sharp re-entrant corner: its peak shear there is singular (mesh-dependent).</summary>
+    public bool HasSingularCorner { get; private init; }
+
     /// <summary>Boundary sample points relative to the centroid, with their shear per unit torque.</summary>
     public IReadOnlyList<BoundarySample> Points => Array.AsReadOnly(_points);
 
@@ -75,7 +78,10 @@ public sealed class BendingSection
         // the located peak lies between nodes in general: keep it as its own sample
         list.Add(new BoundarySample(result.MaxShearLocation.X - c.X, result.MaxShearLocation.Y - c.Y, result.MaxShearPerTorque));
         double od = outerDiameter ?? Math.Max(result.Profile.Bounds.Width, result.Profile.Bounds.Height);
-        return new BendingSection(p.Area, p.Ixx, p.Iyy, p.Ixy, [.. list], od, "field");
+        return new BendingSection(p.Area, p.Ixx, p.Iyy, p.Ixy, [.. list], od, "field")
+        {
+            HasSingularCorner = result.Warnings.Any(w => w.Code == "sharp-reentrant-corner"),
+        };
     }
 
     /// <summary>
@@ -90,7 +96,7 @@ public sealed class BendingSection
         double iyy = Ixx * sn * sn + Iyy * cs * cs - 2 * Ixy * sn * cs;
         double ixy = (Iyy - Ixx) * sn * cs + Ixy * (cs * cs - sn * sn);
         var pts = _points.Select(q => new BoundarySample(cs * q.X - sn * q.Y, sn * q.X + cs * q.Y, q.ShearPerTorque)).ToArray();
-        return new BendingSection(Area, ixx, iyy, ixy, pts, OuterDiameter, ShearSource);
+        return new BendingSection(Area, ixx, iyy, ixy, pts, OuterDiameter, ShearSource) { HasSingularCorner = HasSingularCorner };
     }
 
     /// <summary>
