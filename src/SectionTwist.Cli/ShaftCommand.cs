@@ -139,6 +139,7 @@ internal sealed class ShaftCommand : ICommand
         w.WriteLine($"end-to-end twist: {F(Deg(r.EndToEndTwist), "F4")} deg ({F(r.EndToEndTwist, "G4")} rad)");
         if (r.AnyLimitExceeded) w.WriteLine("!! at least one segment exceeds its limit (see 'check' above)");
         w.WriteLine();
+        ShaftWarpingText.Write(w, doc, r);
         w.WriteLine(Caution);
     }
 

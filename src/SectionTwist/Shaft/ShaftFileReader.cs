@@ -11,7 +11,7 @@ namespace SectionTwist.Shaft;
 /// </summary>
 internal sealed partial class ShaftFileReader
 {
-    private static readonly string[] TopKeys = ["title", "units", "materials", "sections", "stations", "segments", "loads", "supports", "springs", "reference", "twistLimit"];
+    private static readonly string[] TopKeys = ["title", "units", "materials", "sections", "stations", "segments", "loads", "supports", "springs", "reference", "twistLimit", "warping"];
     private readonly ShaftFileContext _file;
     private readonly string _baseDirectory;
     private readonly Func<SectionSource, SectionStiffness>? _resolver;
@@ -66,6 +66,7 @@ internal sealed partial class ShaftFileReader
             Springs = springs,
             ReferenceStation = reference,
             TwistRateLimit = limit,
+            Warping = root.Get("warping") is { } wn ? ReadWarping(wn) : null,
         };
         return new ShaftDocument(path, model, units);
     }

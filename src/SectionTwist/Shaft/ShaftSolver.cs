@@ -14,6 +14,6 @@ public static class ShaftSolver
     public static ShaftResult Solve(ShaftModel model)
     {
         ArgumentNullException.ThrowIfNull(model);
-        return new ShaftAnalysis(model).Compute();
+        return WarpingTorsion.ShaftWarping.Attach(new ShaftAnalysis(model).Compute());
     }
 }

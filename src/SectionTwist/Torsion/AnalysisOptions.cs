@@ -22,6 +22,12 @@ public sealed record AnalysisOptions
     /// </summary>
     public bool Warping { get; init; }
 
+    /// <summary>
+    /// Solve the warping function only when the section looks open (J below half the polar moment): shaft files use this
+    /// so that round, keyed and splined shafts pay nothing.
+    /// </summary>
+    internal bool WarpingIfOpen { get; init; }
+
     /// <summary>The default options.</summary>
     public static AnalysisOptions Default { get; } = new();
 }

@@ -107,7 +107,7 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
         }
         if (singular) estT = double.PositiveInfinity;
         Warping.WarpingResult? warping = null;
-        if (options.Warping)
+        if (options.Warping || (options.WarpingIfOpen && j < 0.5 * props.PolarMoment))
         {
             Report("warping", 0.97);
             warping = Warping.WarpingProperties.Compute(useC.Mesh, useF.Mesh, props, j, ct);

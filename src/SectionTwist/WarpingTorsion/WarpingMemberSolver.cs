@@ -46,6 +46,17 @@ public static class WarpingMemberSolver
             elements.Add((seg, a, b, el));
         }
         foreach (var p in member.Loads.OfType<PointTorque>()) f[2 * Station(p.Station, "a point torque")] += p.Torque;
+        foreach (var load in member.Loads)
+        {
+            if (load is DistributedTorque dt)
+            {
+                int p = Station(dt.From, "a distributed torque"), q = Station(dt.To, "a distributed torque");
+                if (!elements.Any(e => e.A == Math.Min(p, q) && e.B == Math.Max(p, q)))
+                    throw new SectionTwistException("bad-member", $"a distributed torque runs from {dt.From} to {dt.To}, which is not one segment; spread it over single segments");
+            }
+            else if (load is not PointTorque)
+                throw new SectionTwistException("bad-member", $"the warping analysis takes point and uniform torques only, not {load.GetType().Name}; remove that load or the warping restraints");
+        }
         var fixedDof = new bool[n];
         if (member.FixedStations.Count == 0)
             throw new SectionTwistException("bad-member", "no station is held against rotation; fix at least one station (supports)");
