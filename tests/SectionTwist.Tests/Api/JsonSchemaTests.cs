@@ -124,6 +124,13 @@ public sealed class JsonSchemaTests : IDisposable
     }
 
     [Fact]
+    public void Shaft_json_with_restrained_warping_matches_its_schema()
+    {
+        var n = ValidOutput("shaft", "shaft", Path.Combine(RepoPaths.SampleProfiles, "conveyor-cross-beam.yaml"), "--json");
+        Assert.Equal(2, n["warping"]!["segments"]!.AsArray().Count);
+    }
+
+    [Fact]
     public void A_schema_rejects_output_that_breaks_it()
     {
         // The validator itself must reject: a missing required field and an unknown extra field.
