@@ -25,7 +25,7 @@ internal static class WarpingChapter
             Paragraphs =
             [
                 "Segments of open section whose warping is restrained at a station are solved as one member in non-uniform (Vlasov) torsion, " +
-                "E Iw φ'''' − G J φ'' = m, with exact elements (theory manual, section 6). These rotations replace the free-warping ones of the " +
+                "E Iw φ'''' − G J φ'' = m, with exact elements (theory manual, section 7). These rotations replace the free-warping ones of the " +
                 "result tables; the warping normal stress E |ω|max |φ''| acts at the flange tips and adds to bending stresses.",
                 "Not included: warping shear stresses, lateral-torsional buckling, local buckling and connection design. Follow the local steel design code.",
             ],

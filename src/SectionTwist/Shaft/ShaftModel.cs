@@ -37,6 +37,8 @@ public sealed record ShaftModel
     /// null when not stated (open sections then draw a warning), empty when free warping everywhere is stated.
     /// </summary>
     public IReadOnlyDictionary<string, WarpingTorsion.WarpingEnd>? Warping { get; init; }
+    /// <summary>Bearings, transverse loads and strength checks (bending with torsion); null for torsion only.</summary>
+    public Bending.BendingModel? Bending { get; init; }
     /// <summary>Optional title for reports.</summary>
     public string? Title { get; init; }
 }

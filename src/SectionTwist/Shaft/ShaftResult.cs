@@ -27,6 +27,8 @@ public sealed record ShaftResult
     public WarpingTorsion.WarpingMemberResult? Warping { get; init; }
     /// <summary>Warnings about warping: open sections solved with free warping, and the cautions of the warping analysis.</summary>
     public IReadOnlyList<string> WarpingWarnings { get; init; } = [];
+    /// <summary>The bending solution and strength checks, or null when the model has no <see cref="ShaftModel.Bending"/>.</summary>
+    public SectionTwist.Bending.BendingResult? Bending { get; init; }
     /// <summary>Twist-rate limit, rad/m, or null.</summary>
     public double? TwistRateLimit => Model.TwistRateLimit;
     /// <summary>True when some segment exceeds its allowable shear or the twist-rate limit.</summary>
