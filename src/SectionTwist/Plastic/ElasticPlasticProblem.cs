@@ -149,14 +149,15 @@ internal sealed class ElasticPlasticProblem
             yielded[_free[i]] = gap[_free[i]] <= tol;
         }
         return new ElasticPlasticState(lambda, load, 0.5 * quad - lambda * load, psi, yielded, (double[])c.Clone(), outcome)
-            { PlasticFraction = PlasticArea(gap, tol) };
+            { PlasticFraction = PlasticArea(psi, gap, tol) };
     }
 
     /// <summary>
     /// Fraction of the section area that has yielded: quadrature points (7 per element) where the interpolated gap
-    /// between psi and its obstacle vanishes. Resolves the elastic-plastic border to about an element.
+    /// between psi and its obstacle vanishes or the shear is within 0.5 % of yield (|grad psi| &gt;= 0.995). Resolves the
+    /// elastic-plastic border to a fraction of an element.
     /// </summary>
-    private double PlasticArea(double[] gap, double tol)
+    private double PlasticArea(double[] psi, double[] gap, double tol)
     {
         var rule = P2Triangle.Degree5;
         double total = 0, plastic = 0;
@@ -168,10 +169,14 @@ internal sealed class ElasticPlasticProblem
             {
                 double w = rule.W[q] * P2Triangle.Gradients(rule, q, xe, ye, dx, dy);
                 var nq = rule.N.AsSpan(q * 6, 6);
-                double g = 0;
-                for (int a = 0; a < 6; a++) g += nq[a] * gap[_mesh.Elements[6 * e + a]];
+                double g = 0, gx = 0, gy = 0;
+                for (int a = 0; a < 6; a++)
+                {
+                    int nd = _mesh.Elements[6 * e + a];
+                    g += nq[a] * gap[nd]; gx += dx[a] * psi[nd]; gy += dy[a] * psi[nd];
+                }
                 total += w;
-                if (g <= tol) plastic += w;
+                if (g <= tol || gx * gx + gy * gy >= 0.995 * 0.995) plastic += w;
             }
         }
         return total > 0 ? plastic / total : 0;

@@ -94,7 +94,7 @@ public sealed class PlasticClosedFormTests
             Tol.Rel(exact, p.TorqueRatio, 3e-4, $"Beer et al. sec. 3.9, theta/theta_y = {p.TwistRatio}");
             Assert.True(Tol.RelErr(exact, p.TorqueRatio) <= p.EstimatedRelativeError + 2e-4,
                 $"estimate {p.EstimatedRelativeError:E2} vs error {Tol.RelErr(exact, p.TorqueRatio):E2} at {p.TwistRatio} (plus the first-yield error)");
-            Tol.Abs(1 - 1 / (p.TwistRatio * p.TwistRatio), p.PlasticFraction, 0.1, "plastic annulus area fraction (approximate: the border is resolved to about an element)");
+            Tol.Abs(1 - 1 / (p.TwistRatio * p.TwistRatio), p.PlasticFraction, 0.03, "plastic annulus area fraction (approximate: the border is resolved to about an element)");
         }
         Assert.True(r.Curve.Zip(r.Curve.Skip(1)).All(q => q.Second.Torque > q.First.Torque), "torque rises with twist");
         Assert.True(r.Curve[^1].Torque < r.FullyPlasticTorque * (1 + 1e-4), "never above the fully plastic torque");
