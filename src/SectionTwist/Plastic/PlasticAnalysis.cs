@@ -85,6 +85,7 @@ internal sealed class PlasticAnalysis(SectionResult elastic, double yieldShear, 
         }
         var boundaries = mesh.Loops.Select(l =>
             (IReadOnlyList<Point2>)l.Geometry.Flatten(1e-4 * Math.Max(l.Geometry.Bounds.Diagonal, 1e-300))).ToList();
-        return new PlasticField((double[])mesh.X.Clone(), (double[])mesh.Y.Clone(), tris, boundaries, yielded.AsReadOnly());
+        return new PlasticField((double[])mesh.X.Clone(), (double[])mesh.Y.Clone(), tris, boundaries, yielded.AsReadOnly(),
+            mesh.NodeLoop.Select(l => l < 0).ToArray());
     }
 }

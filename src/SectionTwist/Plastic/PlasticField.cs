@@ -8,8 +8,10 @@ namespace SectionTwist.Plastic;
 /// </summary>
 public sealed class PlasticField
 {
-    internal PlasticField(double[] x, double[] y, int[] triangles, IReadOnlyList<IReadOnlyList<Point2>> boundaries, IReadOnlyList<IReadOnlyList<bool>> yielded)
+    internal PlasticField(double[] x, double[] y, int[] triangles, IReadOnlyList<IReadOnlyList<Point2>> boundaries, IReadOnlyList<IReadOnlyList<bool>> yielded,
+        bool[] free)
     {
+        Free = Array.AsReadOnly(free);
         X = Array.AsReadOnly(x); Y = Array.AsReadOnly(y); Triangles = Array.AsReadOnly(triangles);
         Boundaries = boundaries; Yielded = yielded;
     }
@@ -22,6 +24,8 @@ public sealed class PlasticField
     public IReadOnlyList<int> Triangles { get; }
     /// <summary>Boundary loops as fine polylines, m.</summary>
     public IReadOnlyList<IReadOnlyList<Point2>> Boundaries { get; }
+    /// <summary>True for interior nodes (they carry the yield state); boundary nodes are fixed and never marked.</summary>
+    public IReadOnlyList<bool> Free { get; }
     /// <summary>For each curve point (same order as <see cref="PlasticResult.Curve"/>) whether each node has yielded.</summary>
     public IReadOnlyList<IReadOnlyList<bool>> Yielded { get; }
 }
