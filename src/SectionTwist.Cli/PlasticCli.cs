@@ -2,7 +2,6 @@ using System.Globalization;
 using System.Text.Json;
 using SectionTwist.Plastic;
 using SectionTwist.Shaft;
-using SectionTwist.Torsion;
 
 namespace SectionTwist.Cli;
 
@@ -59,15 +58,7 @@ internal static class PlasticCli
             w.WriteEndObject();
         }
         w.WriteEndArray();
-        w.WriteStartArray("warnings");
-        foreach (var warn in r.Warnings)
-        {
-            w.WriteStartObject();
-            w.WriteString("code", warn.Code);
-            w.WriteString("message", warn.Message);
-            w.WriteEndObject();
-        }
-        w.WriteEndArray();
+        SectionJson.Warnings(w, r.Warnings);
         w.WriteEndObject();
     }
 }

@@ -51,8 +51,14 @@ internal static class SectionJson
         w.WriteNumber("elements", r.Mesh.Elements);
         Num(w, "minAngleDeg", r.Mesh.MinAngleDeg);
         w.WriteEndObject();
+        Warnings(w, r.Warnings);
+    }
+
+    /// <summary>Writes a <c>warnings</c> array of code and message objects.</summary>
+    internal static void Warnings(Utf8JsonWriter w, IEnumerable<AnalysisWarning> warnings)
+    {
         w.WriteStartArray("warnings");
-        foreach (var warn in r.Warnings)
+        foreach (var warn in warnings)
         {
             w.WriteStartObject();
             w.WriteString("code", warn.Code);
