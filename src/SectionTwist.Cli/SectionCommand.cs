@@ -45,6 +45,7 @@ internal sealed class SectionCommand : ICommand
             Part = args.Int("part"),
             Accuracy = accuracy,
             Notes = json ? null : note => ctx.Err.WriteLine($"note: {note}"),
+            Cancellation = ctx.Cancellation,
         };
         string? plot = args.Option("plot");
         double? torque = args.Double("torque");
@@ -58,7 +59,7 @@ internal sealed class SectionCommand : ICommand
         args.EnsureAllUsed();
         LoadPlugins(plugins);
         var profile = ProfileSources.Load(args.Positional[0], srcOptions);
-        var result = SectionAnalyzer.Analyze(profile, new AnalysisOptions { Accuracy = accuracy });
+        var result = SectionAnalyzer.Analyze(profile, ctx.Analysis(accuracy), ctx.Cancellation);
         if (plot is not null) SectionPlotHook.Write(result, plot, torque);
         if (dxf is not null) SectionDxfExport.Write(result, dxf, dxfMesh);
         var plastic = plasticYield is { } yv ? Plastic.PlasticAnalyzer.Analyze(result, yv.Item1) : null;

@@ -46,13 +46,14 @@ internal sealed class ShaftCommand : ICommand
         if (report is not null) OutputPaths.CheckFile(report, "--report");
 
         // the report's verification cases run beside the section analyses
-        var verifying = report is null ? null : Task.Run(() => VerificationSuite.Run());
-        var sections = new ShaftSectionCatalog(notes: context.Err.WriteLine);
+        var verifying = report is null ? null : Task.Run(() => VerificationSuite.Run(context.Analysis(), context.Cancellation));
+        var sections = new ShaftSectionCatalog(context.Analysis(), context.Err.WriteLine, context.Cancellation);
         var doc = ShaftFile.Load(path, SectionResolver ?? sections.Resolver);
         ShaftResult result;
         try { result = ShaftSolver.Solve(doc.Model); }
         catch (SectionTwistException e) { throw new SectionTwistException(e.Code, $"{Path.GetFileName(path)}: {e.Message}", e); }
 
+        context.Cancellation.ThrowIfCancellationRequested();
         if (csv is not null) ShaftResultCsv.WriteAll(result, csv);
         if (report is not null)
         {

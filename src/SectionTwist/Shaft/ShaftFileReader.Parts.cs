@@ -67,7 +67,8 @@ internal sealed partial class ShaftFileReader
             else if (m.Has("E") && lib is null)
                 throw _file.Error(v, "poisson", $"material '{name}': G = E / (2 (1 + poisson)) needs both 'E' and 'poisson' (or give G)");
             else g = lib?.ShearModulus ?? throw _file.Error(v, "G", $"material '{name}' needs a shear modulus: 'G', or 'E' and 'poisson', or 'library'");
-            if (!(g > 0)) throw _file.Error(m.Get("G")!, "G", "the shear modulus must be positive");
+            if (!(g > 0)) throw _file.Error(m.Get("G") ?? v, "G", "the shear modulus must be positive");
+            if (ShaftValueRange.Check(QuantityKind.Modulus, g) is { } odd) throw _file.Error(m.Get("G") ?? m.Get("E") ?? v, "G", $"material '{name}': the shear modulus {odd}");
 
             double? allow = lib?.AllowableShear, ssy = lib?.ShearYield, sy = lib?.YieldStrength, su = lib?.UltimateStrength;
             bool strengthsGiven = m.Has("yield") || m.Has("ultimate") || m.Has("allowableShear") || m.Has("shearYield");

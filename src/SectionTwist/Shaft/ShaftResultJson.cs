@@ -14,7 +14,20 @@ internal static class ShaftResultJson
         PropertyNamingPolicy = JsonNamingPolicy.CamelCase,
         WriteIndented = true,
         DefaultIgnoreCondition = JsonIgnoreCondition.Never,
+        Converters = { new FiniteOrNull() },
     };
+
+    /// <summary>Writes a non-finite double as null: JSON has no infinity, and the result guard should never let one through.</summary>
+    private sealed class FiniteOrNull : JsonConverter<double>
+    {
+        public override double Read(ref Utf8JsonReader reader, Type typeToConvert, JsonSerializerOptions options) => reader.GetDouble();
+
+        public override void Write(Utf8JsonWriter writer, double value, JsonSerializerOptions options)
+        {
+            if (double.IsFinite(value)) writer.WriteNumberValue(value);
+            else writer.WriteNullValue();
+        }
+    }
 
     public static string Write(ShaftResult r, string? file = null) => JsonSerializer.Serialize(ToDto(r, file), Options);
 

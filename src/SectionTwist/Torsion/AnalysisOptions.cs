@@ -12,6 +12,16 @@ public sealed record AnalysisOptions
     /// <summary>Upper limit on the number of elements of a single solve.</summary>
     public int MaxElements { get; init; } = 2_000_000;
 
+    /// <summary>
+    /// Memory the analysis may use, bytes (default <see cref="DefaultMemoryBudget"/>). The element count is estimated
+    /// before meshing and solving: a section that would need more is refused with a message, and refinement stops with an
+    /// accuracy warning before a pass would exceed it.
+    /// </summary>
+    public long MemoryBudgetBytes { get; init; } = DefaultMemoryBudget;
+
+    /// <summary>The default memory budget: 4 GiB, or half the memory available to the process when that is less.</summary>
+    public static long DefaultMemoryBudget { get; } = Math.Min(4L << 30, Math.Max(256L << 20, GC.GetGCMemoryInfo().TotalAvailableMemoryBytes / 2));
+
     /// <summary>Angle (degrees, measured inside the material) above which an unfilleted corner is reported as a singular re-entrant corner.</summary>
     public double ReentrantWarningAngleDeg { get; init; } = 185;
 

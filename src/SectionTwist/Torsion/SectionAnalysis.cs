@@ -43,6 +43,7 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
         var holeArea = profile.Regions.SelectMany(r => r.Loops).Select(l => Math.Abs(l.SignedArea)).ToArray();
         double size = Math.Sqrt(props.Area);
         double h = Math.Min(0.6 * size * Math.Pow(acc, 0.25), profile.Bounds.Diagonal / 8);
+        var budget = AnalysisBudget.For(profile, options, acc, h);
         TorsionSolution? coarse = null, fine = null;
         Mesh? coarseMesh = null;
         Func<Point2, double>? sizeField = null;
@@ -52,19 +53,29 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
         {
             ct.ThrowIfCancellationRequested();
             double f0 = (double)pass / MaxPasses, span = 1.0 / MaxPasses;
-            coarseMesh = Mesher.Generate(profile, new MeshOptions { MaxEdgeLength = h, MaxTriangles = options.MaxElements, SizeField = sizeField, MaxArcAngleDegrees = ArcAngle(acc) }, ct);
+            Mesh mesh;
+            try { mesh = Mesher.Generate(profile, new MeshOptions { MaxEdgeLength = h, MaxTriangles = budget.MaxElements, SizeField = sizeField, MaxArcAngleDegrees = ArcAngle(acc) }, ct); }
+            catch (SectionTwistException e) when (e.Code == "mesh-too-large")
+            {
+                if (pass == 0) throw budget.Refusal();
+                warnings.Add(new AnalysisWarning("accuracy-not-reached", $"{budget.Describe()} stopped refinement; results carry the error estimate of the last pass"));
+                break;
+            }
+            coarseMesh = mesh;
             Report("solve", f0 + 0.2 * span);
             coarse = TorsionSolver.Solve(coarseMesh, holeArea, ct);
             if (!options.EstimateError) { fine = coarse; break; }
-            if (4L * coarseMesh.ElementCount > options.MaxElements)
+            if (4L * coarseMesh.ElementCount > budget.MaxElements)
             {
                 warnings.Add(new AnalysisWarning("accuracy-not-reached",
-                    $"the element limit ({options.MaxElements}) stopped refinement; the error estimate is from the last two meshes"));
+                    $"{budget.Describe()} stopped refinement; the error estimate is from the last two meshes"));
                 fine = coarse;
                 break;
             }
             Report("refine", f0 + 0.4 * span);
+            ct.ThrowIfCancellationRequested();
             var fineMesh = MeshRefinement.Uniform(coarseMesh);
+            ct.ThrowIfCancellationRequested();
             fine = TorsionSolver.Solve(fineMesh, holeArea, ct);
             estJ = Math.Abs(fine.J - coarse.J) / (Math.Pow(2, p) - 1) / fine.J;
             double tc = coarse.MaxGradient / coarse.J, tf = fine.MaxGradient / fine.J;
@@ -81,8 +92,10 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
             }
             // Next pass: a size field from the Zienkiewicz-Zhu indicators of the coarse solution, aimed so that the next
             // coarse mesh has a J error of about 2^p times the target (the refined solve then meets the target).
+            ct.ThrowIfCancellationRequested();
             var coarseField = FieldRecovery.Build(coarse);
             var eta2 = AdaptiveSizing.Indicators(coarse, coarseField);
+            ct.ThrowIfCancellationRequested();
             // Richardson gives the coarse error E_r = |Jf - Jc| 2^p / (2^p - 1); the indicators give E_zz. Ask the
             // indicators for the reduction that Richardson says is needed (this calibrates them at singular corners).
             double coarseErr = Math.Abs(fine.J - coarse.J) * Math.Pow(2, p) / (Math.Pow(2, p) - 1) / fine.J;
