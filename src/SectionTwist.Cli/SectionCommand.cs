@@ -62,7 +62,7 @@ internal sealed class SectionCommand : ICommand
         var result = SectionAnalyzer.Analyze(profile, ctx.Analysis(accuracy), ctx.Cancellation);
         if (plot is not null) SectionPlotHook.Write(result, plot, torque);
         if (dxf is not null) SectionDxfExport.Write(result, dxf, dxfMesh);
-        var plastic = plasticYield is { } yv ? Plastic.PlasticAnalyzer.Analyze(result, yv.Item1) : null;
+        var plastic = plasticYield is { } yv ? Plastic.PlasticAnalyzer.Analyze(result, yv.Item1, null, ctx.Cancellation) : null;
         if (plastic is not null && plasticPlot is not null) PlasticPlotHook.Write(plastic, plasticPlot);
         if (json) ctx.Out.WriteLine(SectionJson.Write(result, args.Positional[0], plastic is null ? null : w => PlasticCli.WriteJson(w, plastic, plasticYield!.Value.Item2)));
         else
