@@ -41,6 +41,11 @@ public static class ShaftReport
         var chapters = new List<ReportChapter> { ShaftResultChapter.Build(doc, result, diagram) };
         var pictures = new List<ReportFigure>();
         var warnings = new List<string>();
+        if (result.Bending is { } bending)
+        {
+            chapters.Add(BendingChapter.Build(doc, result, unit));
+            warnings.AddRange(bending.Warnings);
+        }
         foreach (var s in DistinctUsed(sections))
         {
             double torque = MaxTorqueOn(result, s);
@@ -70,6 +75,7 @@ public static class ShaftReport
             Verification = ReportAdapters.Verification(verification),
             Warnings = warnings,
             Method = [.. ReportText.DefaultMethod, SectionsMethod],
+            Caution = result.Bending is null ? ReportText.DefaultCaution : BendingChapter.Caution,
         };
         return new ShaftReportContent(model, data, png, pictures);
     }

@@ -17,4 +17,6 @@ internal enum QuantityKind
     TwistRate,
     Density,
     Number,
+    Force,
+    Angle,
 }

@@ -36,6 +36,8 @@ internal static partial class QuantityText
                 return null;
             case QuantityKind.Power when u is "hp" or "HP" or "hp(I)":
                 return ShaftPower.MechanicalHorsepower;
+            case QuantityKind.Angle:
+                return AngleRadians(u);
             case QuantityKind.ShearPerTorque:
                 {
                     // 1/mm^3, /in^3, 1/m³: per cube of a length
@@ -77,6 +79,8 @@ internal static partial class QuantityText
         QuantityKind.ShearPerTorque => "1/mm^3, 1/m^3, 1/in^3",
         QuantityKind.TwistRate => "deg/m, deg/ft, rad/m",
         QuantityKind.Density => "kg/m^3, g/cm^3, lb/in^3",
+        QuantityKind.Force => "N, kN, lbf",
+        QuantityKind.Angle => "deg, rad",
         _ => "no unit",
     };
 
@@ -105,6 +109,7 @@ internal static partial class QuantityText
             QuantityKind.RotationalStiffness => typeof(RotationalStiffness),
             QuantityKind.AreaMoment => typeof(AreaMomentOfInertia),
             QuantityKind.Density => typeof(Density),
+            QuantityKind.Force => typeof(Force),
             _ => null,
         };
         if (t is null || !Quantity.TryParse(CultureInfo.InvariantCulture, t, "1 " + unit, out IQuantity? q)) return null;
@@ -120,6 +125,7 @@ internal static partial class QuantityText
             AreaMomentOfInertia a => a.MetersToTheFourth,
             Volume vol => vol.CubicMeters,
             Density d => d.KilogramsPerCubicMeter,
+            Force fo => fo.Newtons,
             _ => null,
         };
     }

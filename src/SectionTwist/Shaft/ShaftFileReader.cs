@@ -11,7 +11,7 @@ namespace SectionTwist.Shaft;
 /// </summary>
 internal sealed partial class ShaftFileReader
 {
-    private static readonly string[] TopKeys = ["title", "units", "materials", "sections", "stations", "segments", "loads", "supports", "springs", "reference", "twistLimit"];
+    private static readonly string[] TopKeys = ["title", "units", "materials", "sections", "stations", "segments", "loads", "supports", "springs", "reference", "twistLimit", "bending"];
     private readonly ShaftFileContext _file;
     private readonly string _baseDirectory;
     private readonly Func<SectionSource, SectionStiffness>? _resolver;
@@ -72,6 +72,7 @@ internal sealed partial class ShaftFileReader
             Springs = springs,
             ReferenceStation = reference,
             TwistRateLimit = limit,
+            Bending = root.Get("bending") is { } bn ? ReadBending(bn) : null,
         };
         return new ShaftDocument(path, model, units);
     }

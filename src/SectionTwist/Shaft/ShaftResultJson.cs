@@ -71,5 +71,6 @@ internal static class ShaftResultJson
         }),
         reactions = r.Reactions.Select(x => new { station = x.Station, torque = x.Torque }),
         springs = r.Springs.Select(x => new { name = x.Label, stationA = x.StationA, stationB = x.StationB, torque = x.Torque, windup = x.Windup }),
+        bending = r.Bending is null ? null : Bending.BendingJson.ToDto(r.Bending),
     };
 }

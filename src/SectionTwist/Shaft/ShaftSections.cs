@@ -28,7 +28,10 @@ public static class ShaftSections
     public static SectionStiffness Resolve(SectionSource source, AnalysisOptions? options = null, Action<string>? notes = null, CancellationToken cancellationToken = default)
     {
         var (r, outer) = Analyze(source, options, notes, cancellationToken);
-        return new SectionStiffness(r.TorsionConstant, r.MaxShearPerTorque, source.TemplateSpec ?? Path.GetFileName(source.DxfPath), outer);
+        return new SectionStiffness(r.TorsionConstant, r.MaxShearPerTorque, source.TemplateSpec ?? Path.GetFileName(source.DxfPath), outer)
+        {
+            Bending = SectionTwist.Bending.BendingSection.FromSection(r, outer),
+        };
     }
 
     /// <summary>

@@ -14,6 +14,7 @@ public static class ShaftSolver
     public static ShaftResult Solve(ShaftModel model)
     {
         ArgumentNullException.ThrowIfNull(model);
-        return new ShaftAnalysis(model).Compute();
+        var result = new ShaftAnalysis(model).Compute();
+        return model.Bending is null ? result : result with { Bending = Bending.ShaftBending.Solve(result) };
     }
 }

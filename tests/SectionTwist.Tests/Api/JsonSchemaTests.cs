@@ -124,6 +124,16 @@ public sealed class JsonSchemaTests : IDisposable
     }
 
     [Fact]
+    public void Shaft_json_with_bending_of_the_conveyor_sample_matches_its_schema()
+    {
+        var n = ValidOutput("shaft", "shaft", Path.Combine(RepoPaths.SampleProfiles, "conveyor-head-shaft.yaml"), "--json");
+        var b = n["bending"]!;
+        Assert.Equal(2, b["bearings"]!.AsArray().Count);
+        Assert.Single(b["fatigue"]!.AsArray());
+        Assert.Single(b["connections"]!.AsArray());
+    }
+
+    [Fact]
     public void A_schema_rejects_output_that_breaks_it()
     {
         // The validator itself must reject: a missing required field and an unknown extra field.
