@@ -57,4 +57,19 @@ public sealed class PlasticConvergenceTests(ITestOutputHelper output)
         for (int i = 1; i < t.Count; i++)
             Assert.True(err[i] <= Math.Abs(t[i] - t[i - 1]) / t[i], $"level {i}: error {err[i]:E2} above the estimate");
     }
+
+    [Fact]
+    public void Two_separate_tubes_carry_twice_the_fully_plastic_torque_of_one()
+    {
+        // Each region has its own hole constant (a hole of another region is out of reach): two tubes ro = 1, ri = 0.6
+        // side by side give 2 x 2 pi (ro^3 - ri^3) / 3 (Nadai sand heap, frustum with plateau), with c = ro - ri each.
+        SectionTwist.Geometry.Region Tube(double cx) => new(SectionTwist.Geometry.LoopBuilder.Circle(new(cx, 0), 1),
+            [SectionTwist.Geometry.LoopBuilder.Circle(new(cx, 0), 0.6)]);
+        var p = new SectionTwist.Geometry.Profile([Tube(0), Tube(3)], LengthUnit.Metre);
+        var mesh = MeshRefinement.Uniform(Mesher.Generate(p, new MeshOptions { MaxEdgeLength = 0.15, MaxArcAngleDegrees = 10 }));
+        var (t, c) = FullyPlasticTorque.Compute(mesh, LoopAreas(p));
+        Tol.Rel(2 * 2 * Math.PI * (1 - 0.216) / 3, t, 1e-5, "Nadai sand heap: two frustums with plateaus");
+        Assert.Equal(2, c.Length);
+        foreach (double ck in c) Tol.Rel(0.4, ck, 1e-6, "plateau height ro - ri");
+    }
 }
