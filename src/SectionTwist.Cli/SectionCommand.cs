@@ -10,13 +10,15 @@ internal sealed class SectionCommand : ICommand
     public string Name => "section";
     public string Summary => "torsion constant J, peak shear per torque and area properties of a cross-section";
     public string Usage => """
-        sectiontwist section SOURCE [--accuracy REL] [--unit U] [--layer NAME] [--part N] [--json] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR] [--plastic MATERIAL|STRESS [--plastic-plot FILE.png|svg]]
+        sectiontwist section SOURCE [--accuracy REL] [--unit U] [--layer NAME] [--part N] [--json] [--warping] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR] [--plastic MATERIAL|STRESS [--plastic-plot FILE.png|svg]]
           SOURCE      a template spec such as circle:d=40, keyed:d=40, rect:b=60,h=20, a drawing file (.dxf),
                       a point list (.csv, .pts) or anything a plugin reads
           --accuracy  requested relative accuracy of J (default 1e-4)
           --unit      length unit of the input (mm, cm, m, in, ft); specs default to mm
           --layer     use only this drawing layer;  --part N  use only the N-th separate part (largest first)
           --json      print one JSON object in SI base units (m, m^2, m^4, 1/m^3)
+          --warping   also solve the warping function: shear centre, warping constant Iw, largest sectorial
+                      coordinate, warping length for steel and whether restrained warping matters
           --plot      write a shear-stress contour picture (PNG or SVG)
           --torque    torque in N*m for the plot colour bar in MPa (default: stress per unit torque)
           --dxf       write the outline (layer PROFILE) and stress-function contours (layer PHI) to a DXF file for CAD
@@ -35,6 +37,7 @@ internal sealed class SectionCommand : ICommand
     public int Run(Args args, CliContext ctx)
     {
         bool json = args.Flag("json");
+        bool warping = args.Flag("warping");
         double accuracy = args.Double("accuracy") ?? 1e-4;
         if (!(accuracy > 0 && accuracy < 0.5)) throw new UsageException("--accuracy must lie between 0 and 0.5, e.g. 1e-4");
         var unitText = args.Option("unit");
@@ -59,7 +62,7 @@ internal sealed class SectionCommand : ICommand
         args.EnsureAllUsed();
         LoadPlugins(plugins);
         var profile = ProfileSources.Load(args.Positional[0], srcOptions);
-        var result = SectionAnalyzer.Analyze(profile, ctx.Analysis(accuracy), ctx.Cancellation);
+        var result = SectionAnalyzer.Analyze(profile, ctx.Analysis(accuracy) with { Warping = warping }, ctx.Cancellation);
         if (plot is not null) SectionPlotHook.Write(result, plot, torque);
         if (dxf is not null) SectionDxfExport.Write(result, dxf, dxfMesh);
         var plastic = plasticYield is { } yv ? Plastic.PlasticAnalyzer.Analyze(result, yv.Item1, null, ctx.Cancellation) : null;

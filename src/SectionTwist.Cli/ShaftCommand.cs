@@ -145,6 +145,7 @@ internal sealed class ShaftCommand : ICommand
             BendingTables.Print(w, u, bending, doc.Model.Bending!.Rotating);
             w.WriteLine();
         }
+        ShaftWarpingText.Write(w, doc, r);
         w.WriteLine(Caution);
     }
 

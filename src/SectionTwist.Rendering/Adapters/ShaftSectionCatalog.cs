@@ -42,7 +42,7 @@ public sealed class ShaftSectionCatalog
         // a template knows its outer size; a drawing's is the larger side of its bounds
         double outer = templateOuter ?? Math.Max(r.Profile.Bounds.Width, r.Profile.Bounds.Height);
         _sections.Add(new AnalysedSection(source, r, outer, LargestHole(r.Profile)));
-        return new SectionStiffness(r.TorsionConstant, r.MaxShearPerTorque, source.TemplateSpec ?? Path.GetFileName(source.DxfPath), outer)
+        return ShaftSections.Stiffness(r, source.TemplateSpec ?? Path.GetFileName(source.DxfPath), outer) with
         {
             Bending = SectionTwist.Bending.BendingSection.FromSection(r, templateOuter),
         };

@@ -60,6 +60,8 @@ public static class ShaftReport
             chapters.Add(ReportAdapters.SectionChapter($"Section '{s.Name}' ({s.Source.TemplateSpec ?? Path.GetFileName(s.Source.DxfPath)})", s.Result, figure));
             warnings.AddRange(s.Result.Warnings.Select(w => $"section '{s.Name}': {w.Message}"));
         }
+        if (WarpingChapter.Build(doc, result) is { } warping) chapters.Insert(1, warping);
+        warnings.AddRange(result.WarpingWarnings);
         foreach (var seg in result.Segments.Where(x => x.ExceedsShearLimit || x.ExceedsTwistRateLimit))
             warnings.Add($"segment '{seg.Label}': {ShaftResultChapter.Flags(seg)}");
 

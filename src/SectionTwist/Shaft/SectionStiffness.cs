@@ -11,6 +11,15 @@ namespace SectionTwist.Shaft;
 /// <param name="OuterDiameter">Optional outer diameter, m, for drawings.</param>
 public sealed record SectionStiffness(double TorsionConstant, double ShearPerTorque, string? Description = null, double? OuterDiameter = null)
 {
+    /// <summary>Warping constant Iw about the shear centre, m^6, when the warping function was solved; else null.</summary>
+    public double? WarpingConstant { get; init; }
+
+    /// <summary>Largest |sectorial coordinate| of the section, m^2, when the warping function was solved; else null.</summary>
+    public double? MaxSectorialCoordinate { get; init; }
+
+    /// <summary>True for an open thin-walled section whose members are sensitive to restrained warping (see <c>WarpingResult.Classification</c>).</summary>
+    public bool WarpingSensitive { get; init; }
+
     /// <summary>
     /// Exact values for a solid round of diameter <paramref name="diameter"/> (m): J = pi d^4 / 32, tau = 16 T / (pi d^3)
     /// (Timoshenko and Goodier, Theory of Elasticity, ch. 10).

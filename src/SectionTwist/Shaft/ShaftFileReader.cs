@@ -11,7 +11,7 @@ namespace SectionTwist.Shaft;
 /// </summary>
 internal sealed partial class ShaftFileReader
 {
-    private static readonly string[] TopKeys = ["title", "units", "materials", "sections", "stations", "segments", "loads", "supports", "springs", "reference", "twistLimit", "bending"];
+    private static readonly string[] TopKeys = ["title", "units", "materials", "sections", "stations", "segments", "loads", "supports", "springs", "reference", "twistLimit", "bending", "warping"];
     private readonly ShaftFileContext _file;
     private readonly string _baseDirectory;
     private readonly Func<SectionSource, SectionStiffness>? _resolver;
@@ -73,6 +73,7 @@ internal sealed partial class ShaftFileReader
             ReferenceStation = reference,
             TwistRateLimit = limit,
             Bending = root.Get("bending") is { } bn ? ReadBending(bn) : null,
+            Warping = root.Get("warping") is { } wn ? ReadWarping(wn) : null,
         };
         return new ShaftDocument(path, model, units);
     }

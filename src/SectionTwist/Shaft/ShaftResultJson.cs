@@ -71,6 +71,20 @@ internal static class ShaftResultJson
         }),
         reactions = r.Reactions.Select(x => new { station = x.Station, torque = x.Torque }),
         springs = r.Springs.Select(x => new { name = x.Label, stationA = x.StationA, stationB = x.StationB, torque = x.Torque, windup = x.Windup }),
+        warpingWarnings = r.WarpingWarnings,
+        warping = r.Warping is not { } w ? null : new
+        {
+            stations = w.Stations.Select(s => new { name = s.Name, position = s.Position, rotation = s.Rotation, rateOfTwist = s.RateOfTwist, reactionTorque = s.ReactionTorque, reactionBimoment = s.ReactionBimoment }),
+            segments = w.Segments.Select(s => new
+            {
+                name = s.Label,
+                warpingLength = s.WarpingLength,
+                maxRotation = s.MaxRotation,
+                maxBimoment = s.MaxBimoment,
+                maxWarpingNormalStress = s.MaxWarpingNormalStress,
+                maxSaintVenantShear = s.MaxSaintVenantShear,
+            }),
+        },
         bending = r.Bending is null ? null : Bending.BendingJson.ToDto(r.Bending),
     };
 }

@@ -28,11 +28,20 @@ public static class ShaftSections
     public static SectionStiffness Resolve(SectionSource source, AnalysisOptions? options = null, Action<string>? notes = null, CancellationToken cancellationToken = default)
     {
         var (r, outer) = Analyze(source, options, notes, cancellationToken);
-        return new SectionStiffness(r.TorsionConstant, r.MaxShearPerTorque, source.TemplateSpec ?? Path.GetFileName(source.DxfPath), outer)
+        return Stiffness(r, source.TemplateSpec ?? Path.GetFileName(source.DxfPath), outer) with
         {
             Bending = SectionTwist.Bending.BendingSection.FromSection(r, outer),
         };
     }
+
+    /// <summary>The shaft-model values of an analysed section, with its warping values when they were solved.</summary>
+    internal static SectionStiffness Stiffness(SectionResult r, string? description, double? outer) =>
+        new(r.TorsionConstant, r.MaxShearPerTorque, description, outer)
+        {
+            WarpingConstant = r.Warping?.WarpingConstant,
+            MaxSectorialCoordinate = r.Warping?.MaxSectorialCoordinate,
+            WarpingSensitive = r.Warping?.Classification == Warping.WarpingClass.WarpingSensitive,
+        };
 
     /// <summary>
     /// Builds and analyses one section and returns the full result with the template's outer size (null for a DXF outline),
@@ -61,10 +70,13 @@ public static class ShaftSections
         }
         else throw new SectionTwistException("bad-section", $"{source.Location}: section '{source.Name}' names neither a template nor a DXF file");
 
-        var r = SectionAnalyzer.Analyze(profile, options, ct);
+        // open-looking sections also get their warping function (restrained-warping check of the shaft)
+        var r = SectionAnalyzer.Analyze(profile, (options ?? AnalysisOptions.Default) with { WarpingIfOpen = true }, ct);
         notes?.Invoke($"section '{source.Name}' ({source.TemplateSpec ?? Path.GetFileName(source.DxfPath)}): J = {r.TorsionConstant:G5} m^4, " +
                       $"peak shear per unit torque {r.MaxShearPerTorque:G5} 1/m^3 ({r.Mesh.Elements} elements)");
         foreach (var w in r.Warnings) notes?.Invoke($"section '{source.Name}': warning: {w.Message}");
+        if (r.Warping is { Classification: Warping.WarpingClass.WarpingSensitive } wr)
+            notes?.Invoke($"section '{source.Name}': open thin-walled, warping constant Iw = {wr.WarpingConstant:G5} m^6, warping length for steel {wr.SteelWarpingLength:G4} m");
         return (r, outer);
     }
 }

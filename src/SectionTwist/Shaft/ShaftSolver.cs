@@ -15,6 +15,7 @@ public static class ShaftSolver
     {
         ArgumentNullException.ThrowIfNull(model);
         var result = new ShaftAnalysis(model).Compute();
-        return model.Bending is null ? result : result with { Bending = Bending.ShaftBending.Solve(result) };
+        result = model.Bending is null ? result : result with { Bending = Bending.ShaftBending.Solve(result) };
+        return WarpingTorsion.ShaftWarping.Attach(result);
     }
 }

@@ -119,6 +119,16 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
             for (int r = 0; r < regionJ.Length; r++) regionJ[r] = useF.RegionJ[r] + (useF.RegionJ[r] - useC.RegionJ[r]) * k;
         }
         if (singular) estT = double.PositiveInfinity;
+        Warping.WarpingResult? warping = null;
+        if (options.Warping || (options.WarpingIfOpen && j < 0.5 * props.PolarMoment))
+        {
+            Report("warping", 0.97);
+            warping = Warping.WarpingProperties.Compute(useC.Mesh, useF.Mesh, props, j, ct);
+            if (warping is null)
+                warnings.Add(new AnalysisWarning("warping-not-computed",
+                    $"the profile has {profile.Regions.Count} separate parts: they warp independently and have no common shear centre; analyse each part alone for its warping properties"));
+            else estJ = Bracket(j, useF.J, warping.TorsionConstantUpperBound, estJ);
+        }
         var field = FieldRecovery.Build(useF);
         Report("done", 1);
         return new SectionResult
@@ -133,7 +143,22 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
             Warnings = warnings.AsReadOnly(),
             Field = field,
             RegionTorsionConstants = Array.AsReadOnly(regionJ),
+            Warping = warping,
         };
+    }
+
+    /// <summary>
+    /// On the same mesh the stress-function J is a lower bound (complementary energy) and the warping-function J an upper
+    /// bound (potential energy) of the exact J of the mesh's domain, so for a polygonal profile (the mesh domain is the
+    /// exact one) the extrapolated J lies within max(J - lower, upper - J) of the truth. The estimate becomes the smaller
+    /// of that guaranteed bracket and the Richardson estimate; curved outlines keep the Richardson estimate.
+    /// </summary>
+    private double Bracket(double j, double lower, double upper, double estimate)
+    {
+        bool polygonal = profile.Loops.All(l => l.Segments.All(s => s is LineSegment));
+        if (!polygonal || !(lower <= j && j <= upper)) return estimate;
+        double bound = Math.Max(j - lower, upper - j) / j;
+        return double.IsNaN(estimate) ? bound : Math.Min(estimate, bound);
     }
 
     /// <summary>Largest arc angle per boundary edge: coarse curved edges suffice at modest accuracy.</summary>
