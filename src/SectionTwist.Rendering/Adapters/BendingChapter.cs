@@ -22,6 +22,24 @@ public static class BendingChapter
     private static string F(double v, string f = "G4") => v.ToString(f, CultureInfo.InvariantCulture);
     private static string Sf(double? v) => v is { } x ? double.IsFinite(x) ? F(x, "F2") : "∞" : "–";
 
+    /// <summary>The governing location's section with the combined stress on its boundary (prismatic segments only).</summary>
+    private static ReportFigure? WorstPicture(ShaftDocument doc, ShaftResult result, BendingResult b)
+    {
+        if (b.Governing is not { } g) return null;
+        var seg = doc.Model.Segments.FirstOrDefault(s => s.Label == g.Label);
+        if (seg?.Section?.Bending is not { } section) return null;
+        var sample = b.Samples.Where(p => p.Segment == g.Label && p.Position == g.Position).MaxBy(p => p.Stress.VonMises);
+        if (sample is null) return null;
+        bool rotating = doc.Model.Bending?.Rotating ?? true;
+        var stresses = CombinedStress.AtBoundary(section, sample.AxialForce, -sample.MomentZ, sample.MomentY, sample.Torque, rotating);
+        string at = $"{doc.Units.Length.Format(g.Position)} {doc.Units.Length.Symbol}";
+        byte[] png = CombinedStressPicture.Render(section, stresses, $"{g.Label} at {at}: combined stress on the boundary", ImageFormat.Png);
+        _ = result;
+        return new ReportFigure($"The governing location ({g.Label}, {at}): von Mises stress at each boundary point of the real section" +
+                                (rotating ? ", each at its worst angle to the bending moment (rotating shaft)" : "") + " (axes through the centroid); ringed: the worst point",
+            ImageFormat.Png, png, "bending-worst-section.png");
+    }
+
     /// <summary>Builds the chapter with its diagram (PNG, file name <c>bending.png</c>).</summary>
     public static ReportChapter Build(ShaftDocument doc, ShaftResult result, LengthUnit unit)
     {
@@ -34,6 +52,8 @@ public static class BendingChapter
         byte[] png = BendingDiagram.Render(b, sy, $"{doc.Model.Title ?? "shaft"}: bending with torsion", unit, ImageFormat.Png);
         var figure = new ReportFigure("Bending moment in both planes and resultant, deflection, combined von Mises stress (dashed: lowest yield strength) " +
                                       "and the unnotched fatigue factor of safety along the shaft; bearings dotted", ImageFormat.Png, png, "bending.png");
+        var figures = new List<ReportFigure> { figure };
+        if (WorstPicture(doc, result, b) is { } worstFigure) figures.Add(worstFigure);
         var tables = new List<ReportTable>
         {
             new("Loads on the shaft (gear and pull forces from the torque at their station)", ["station", "kind", "Fy [N]", "Fz [N]", "axial [N]", "what"],
@@ -83,7 +103,7 @@ public static class BendingChapter
                 "Fatigue factors are estimates; every factor is listed with its source (\"from memory\" where quoted from memory).",
             ],
             Tables = tables,
-            Figures = [figure],
+            Figures = figures,
         };
     }
 }

@@ -15,7 +15,7 @@ internal static class BendingCsv
         return sb.ToString();
     }
 
-    private static string N(double? v) => v is { } x ? double.IsFinite(x) ? x.ToString("R", CultureInfo.InvariantCulture) : double.IsPositiveInfinity(x) ? "inf" : "" : "";
+    private static string N(double? v) => Shaft.ShaftResultCsv.N(v);
 
-    private static string Text(string s) => s.AsSpan().IndexOfAny(",\"\n") >= 0 ? "\"" + s.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"" : s;
+    private static string Text(string s) => Shaft.ShaftResultCsv.Text(s);
 }

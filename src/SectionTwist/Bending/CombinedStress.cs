@@ -26,19 +26,32 @@ public static class CombinedStress
     public static CombinedStressPoint Worst(BendingSection section, double axialForce, double mx, double my, double torque, bool rotating)
     {
         ArgumentNullException.ThrowIfNull(section);
-        double sigmaN = axialForce / section.Area;
-        double m = Math.Sqrt(mx * mx + my * my);
         CombinedStressPoint? best = null;
         foreach (var p in section.PointSpan)
         {
-            var (cx, cy) = section.Coefficients(p.X, p.Y);
-            double sb = rotating ? (sigmaN >= 0 ? 1 : -1) * m * Math.Sqrt(cx * cx + cy * cy) : cx * mx + cy * my;
-            double sigma = sigmaN + sb, tau = Math.Abs(torque) * p.ShearPerTorque;
-            double vm = Math.Sqrt(sigma * sigma + 3 * tau * tau);
-            if (best is null || vm > best.VonMises)
-                best = new CombinedStressPoint(p.X, p.Y, sigma, sb, sigmaN, tau, vm, Math.Sqrt(sigma * sigma + 4 * tau * tau));
+            var q = At(section, p, axialForce, mx, my, torque, rotating);
+            if (best is null || q.VonMises > best.VonMises) best = q;
         }
         return best!;
+    }
+
+    /// <summary>The combined stress at every boundary sample of <paramref name="section"/>, in the order of <see cref="BendingSection.Points"/> (arguments as for <see cref="Worst"/>).</summary>
+    public static IReadOnlyList<CombinedStressPoint> AtBoundary(BendingSection section, double axialForce, double mx, double my, double torque, bool rotating)
+    {
+        ArgumentNullException.ThrowIfNull(section);
+        var list = new CombinedStressPoint[section.PointSpan.Length];
+        for (int i = 0; i < list.Length; i++) list[i] = At(section, section.PointSpan[i], axialForce, mx, my, torque, rotating);
+        return Array.AsReadOnly(list);
+    }
+
+    private static CombinedStressPoint At(BendingSection section, BoundarySample p, double axialForce, double mx, double my, double torque, bool rotating)
+    {
+        double sigmaN = axialForce / section.Area;
+        double m = Math.Sqrt(mx * mx + my * my);
+        var (cx, cy) = section.Coefficients(p.X, p.Y);
+        double sb = rotating ? (sigmaN >= 0 ? 1 : -1) * m * Math.Sqrt(cx * cx + cy * cy) : cx * mx + cy * my;
+        double sigma = sigmaN + sb, tau = Math.Abs(torque) * p.ShearPerTorque;
+        return new CombinedStressPoint(p.X, p.Y, sigma, sb, sigmaN, tau, Math.Sqrt(sigma * sigma + 3 * tau * tau), Math.Sqrt(sigma * sigma + 4 * tau * tau));
     }
 
     /// <summary>Largest bending-stress amplitude per unit moment over the boundary of a rotating shaft, max |c(p)|, 1/m^3 (32 / (pi d^3) for a round).</summary>

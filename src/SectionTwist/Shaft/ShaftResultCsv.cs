@@ -31,7 +31,7 @@ internal static class ShaftResultCsv
         if (r.Bending is { } b) AtomicFile.WriteText(Path.Combine(directory, "bending.csv"), Bending.BendingCsv.Samples(b));
     }
 
-    private static string N(double? v) => v is { } x ? double.IsFinite(x) ? x.ToString("R", CultureInfo.InvariantCulture) : double.IsPositiveInfinity(x) ? "inf" : "" : "";
+    internal static string N(double? v) => v is { } x ? double.IsFinite(x) ? x.ToString("R", CultureInfo.InvariantCulture) : double.IsPositiveInfinity(x) ? "inf" : "" : "";
 
-    private static string Text(string s) => s.AsSpan().IndexOfAny(",\"\n") >= 0 ? "\"" + s.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"" : s;
+    internal static string Text(string s) => s.AsSpan().IndexOfAny(",\"\n") >= 0 ? "\"" + s.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"" : s;
 }

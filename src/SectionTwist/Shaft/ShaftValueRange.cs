@@ -24,6 +24,8 @@ internal static class ShaftValueRange
         QuantityKind.AreaMoment => (1e2, 1e-36),
         QuantityKind.ShearPerTorque => (1e27, 1e-6),
         QuantityKind.TwistRate => (1e6, 1e-12),
+        QuantityKind.Force => (1e10, 0),
+        QuantityKind.Angle => (1e3, 0),
         _ => (1e6, 0),
     };
 

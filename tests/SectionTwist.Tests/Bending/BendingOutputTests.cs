@@ -22,10 +22,15 @@ public class BendingOutputTests
         Tol.Rel(weight - b.Loads.Sum(l => l.ForceZ), b.Bearings.Sum(x => x.ForceZ), 1e-10, "statics Z with the weight");
         var content = ShaftReport.Build(doc, result, catalog, []);
         var chapter = content.Model.Chapters.Single(c => c.Heading == "Bending with torsion");
-        Assert.Single(chapter.Figures);
-        Assert.Equal(0x89, chapter.Figures[0].Data[0]);   // PNG signature
+        Assert.Equal(2, chapter.Figures.Count);              // the diagram and the governing section's boundary stresses
+        Assert.All(chapter.Figures, f => Assert.Equal(0x89, f.Data[0]));   // PNG signature
         Assert.Contains(chapter.Tables, t => t.Caption.StartsWith("Fatigue at", StringComparison.Ordinal) && t.Rows.Any(r => r[3].Contains("from memory", StringComparison.Ordinal)));
         Assert.Contains("fretting", content.Model.Caution, StringComparison.Ordinal);
+        // the picture's values are those of the governing point
+        var g = b.Governing!;
+        var seat = doc.Model.Segments.Single(s => s.Label == g.Label).Section!.Bending!;
+        var sample = b.Samples.Where(p => p.Segment == g.Label && p.Position == g.Position).MaxBy(p => p.Stress.VonMises)!;
+        Tol.Rel(g.Stress.VonMises, SectionTwist.Bending.CombinedStress.AtBoundary(seat, sample.AxialForce, -sample.MomentZ, sample.MomentY, sample.Torque, true).Max(p => p.VonMises), 1e-12);
         // the keyed seat's fatigue location shows the concentration its section resolves
         Assert.True(b.Fatigue[0].SectionTorsionConcentration > 1.5);
     }
