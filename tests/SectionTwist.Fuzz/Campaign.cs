@@ -67,43 +67,36 @@ public sealed class Campaign(CampaignOptions o, TextWriter log)
         foreach (var t in o.Targets) { _state.Next.TryAdd(t, 0); _state.Counts.TryAdd(t, []); }
         _clock.Start();
         long perTarget = o.Count / o.Targets.Count;
-        void RunTarget(string t)
+        var busy = new HashSet<string>();
+        // a lane takes the free target with the fewest inputs done, runs one batch of it, and repeats: the targets
+        // advance together; a lane ends when every target left is finished or taken by another lane
+        void Lane()
         {
             while (true)
             {
+                string? t;
                 long next;
-                lock (_state) next = _state.Next[t];
-                if (next >= perTarget) return;
+                lock (_state)
+                {
+                    t = o.Targets.Where(x => !busy.Contains(x) && _state.Next[x] < perTarget).OrderBy(x => _state.Next[x]).FirstOrDefault();
+                    if (t is null) return;
+                    busy.Add(t);
+                    next = _state.Next[t];
+                }
                 long end = Math.Min(perTarget, next + o.Batch);
                 while (next < end) next = RunBatch(t, next, end);
                 lock (_state)
                 {
                     Commit(t);
                     _state.Next[t] = end;
+                    busy.Remove(t);
                     _state.Seconds = _previousSeconds + _clock.Elapsed.TotalSeconds;
                     File.WriteAllText(statePath, JsonSerializer.Serialize(_state));
                     WriteSummary(commandLine, perTarget);
                 }
             }
         }
-        if (o.Lanes <= 1)
-        {
-            // one core: the targets take turns batch by batch
-            while (o.Targets.Any(t => _state.Next[t] < perTarget))
-                foreach (var t in o.Targets)
-                {
-                    long next = _state.Next[t];
-                    if (next >= perTarget) continue;
-                    long end = Math.Min(perTarget, next + o.Batch);
-                    while (next < end) next = RunBatch(t, next, end);
-                    Commit(t);
-                    _state.Next[t] = end;
-                    _state.Seconds = _previousSeconds + _clock.Elapsed.TotalSeconds;
-                    File.WriteAllText(statePath, JsonSerializer.Serialize(_state));
-                    WriteSummary(commandLine, perTarget);
-                }
-        }
-        else Parallel.ForEach(o.Targets, new ParallelOptions { MaxDegreeOfParallelism = o.Lanes }, RunTarget);
+        Task.WaitAll([.. Enumerable.Range(0, Math.Max(1, o.Lanes)).Select(_ => Task.Factory.StartNew(Lane, TaskCreationOptions.LongRunning))]);
         lock (_state) WriteSummary(commandLine, perTarget);
         return _state.Counts.Values.Sum(c => c.Where(kv => Outcomes.Parse(kv.Key).IsFailure()).Sum(kv => kv.Value));
     }
