@@ -10,9 +10,9 @@ namespace SectionTwist.Tests.Hostile;
 public class FuzzShortRunTests
 {
     [Theory]
-    [InlineData("dxf", 150)]
-    [InlineData("points", 200)]
-    [InlineData("shaft", 250)]
+    [InlineData("dxf", 100)]
+    [InlineData("points", 120)]
+    [InlineData("shaft", 120)]
     public void Mutated_inputs_end_ok_or_in_a_clean_error(string target, int count)
     {
         var t = FuzzTarget.Get(target);
