@@ -9,13 +9,15 @@ internal sealed class SectionCommand : ICommand
 {
     public string Name => "section";
     public string Summary => "torsion constant J, peak shear per torque and area properties of a cross-section";
-    public string Usage => """
-        sectiontwist section SOURCE [--accuracy REL] [--unit U] [--layer NAME] [--part N] [--json] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR]
+    public string Usage => $$"""
+        sectiontwist section SOURCE [--accuracy REL] [--unit U] [drawing options] [--json] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR]
           SOURCE      a template spec such as circle:d=40, keyed:d=40, rect:b=60,h=20, a drawing file (.dxf),
                       a point list (.csv, .pts) or anything a plugin reads
           --accuracy  requested relative accuracy of J (default 1e-4)
           --unit      length unit of the input (mm, cm, m, in, ft); specs default to mm
-          --layer     use only this drawing layer;  --part N  use only the N-th separate part (largest first)
+        drawing options (see 'sectiontwist inspect' to list layers and parts):
+        {{DrawingOptions.Usage}}
+        output options:
           --json      print one JSON object in SI base units (m, m^2, m^4, 1/m^3)
           --plot      write a shear-stress contour picture (PNG or SVG)
           --torque    torque in N*m for the plot colour bar in MPa (default: stress per unit torque)
@@ -34,14 +36,13 @@ internal sealed class SectionCommand : ICommand
         double accuracy = args.Double("accuracy") ?? 1e-4;
         if (!(accuracy > 0 && accuracy < 0.5)) throw new UsageException("--accuracy must lie between 0 and 0.5, e.g. 1e-4");
         var unitText = args.Option("unit");
-        var srcOptions = new ProfileSourceOptions
+        var drawingNotes = new List<string>();
+        var srcOptions = DrawingOptions.Read(args, new ProfileSourceOptions
         {
             Unit = unitText is null ? null : LengthUnit.Parse(unitText),
-            Layer = args.Option("layer"),
-            Part = args.Int("part"),
             Accuracy = accuracy,
-            Notes = json ? null : note => ctx.Err.WriteLine($"note: {note}"),
-        };
+            Notes = json ? drawingNotes.Add : note => ctx.Err.WriteLine($"note: {note}"),
+        });
         string? plot = args.Option("plot");
         double? torque = args.Double("torque");
         string? dxf = args.Option("dxf");
@@ -52,6 +53,9 @@ internal sealed class SectionCommand : ICommand
         LoadPlugins(plugins);
         var profile = ProfileSources.Load(args.Positional[0], srcOptions);
         var result = SectionAnalyzer.Analyze(profile, new AnalysisOptions { Accuracy = accuracy });
+        // in JSON the reader's notes (parts analysed together, entities left out, facets) travel with the warnings
+        if (drawingNotes.Count > 0)
+            result = result with { Warnings = drawingNotes.Select(n => new AnalysisWarning("drawing", n)).Concat(result.Warnings).ToList().AsReadOnly() };
         if (plot is not null) SectionPlotHook.Write(result, plot, torque);
         if (dxf is not null) SectionDxfExport.Write(result, dxf, dxfMesh);
         if (json) ctx.Out.WriteLine(SectionJson.Write(result, args.Positional[0]));

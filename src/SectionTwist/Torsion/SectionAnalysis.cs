@@ -32,13 +32,14 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
         var corners = CornerAnalysis.Corners(profile);
         double p = CornerAnalysis.TorsionConstantOrder(corners);
         double warnAngle = options.ReentrantWarningAngleDeg * Math.PI / 180;
-        var sharp = corners.Where(c => c.InteriorAngle > warnAngle).ToList();
+        var (sharp, facetWarnings) = FacetWarnings.Split(profile, corners.Where(c => c.InteriorAngle > warnAngle).ToList(), Show);
+        warnings.AddRange(facetWarnings);
         foreach (var c in sharp.Take(5))
             warnings.Add(new AnalysisWarning("sharp-reentrant-corner",
                 $"sharp re-entrant corner at {Show(c.Where)} (interior angle {c.InteriorAngle * 180 / Math.PI:F0} deg): the peak shear there is singular and grows with refinement; model the real fillet radius"));
         if (sharp.Count > 5)
             warnings.Add(new AnalysisWarning("sharp-reentrant-corner", $"{sharp.Count - 5} more sharp re-entrant corners; model the real fillet radii"));
-        bool singular = sharp.Count > 0;
+        bool singular = sharp.Count > 0 || facetWarnings.Count > 0;
 
         var holeArea = profile.Regions.SelectMany(r => r.Loops).Select(l => Math.Abs(l.SignedArea)).ToArray();
         double size = Math.Sqrt(props.Area);
