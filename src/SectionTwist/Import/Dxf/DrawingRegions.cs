@@ -152,12 +152,37 @@ internal sealed class DrawingRegions
         return best;
     }
 
+    /// <summary>
+    /// Point in loop: the winding number on a coarse polygon (chords within 1e-4 of the loop size), decided there
+    /// unless the point lies within twice that of the polygon; then on a fine one (1e-7, as <see cref="Loop.Contains"/>).
+    /// </summary>
     private bool Inside(int j, Point2 p)
     {
         var b = _box[j];
         if (p.X < b.MinX || p.X > b.MaxX || p.Y < b.MinY || p.Y > b.MaxY) return false;
-        var poly = _poly[j] ??= _loops[j].Flatten(1e-7 * Math.Max(b.Diagonal, double.Epsilon));
-        return Loop.WindingNumber(poly, p) != 0;
+        double size = Math.Max(b.Diagonal, double.Epsilon), sag = 1e-4 * size;
+        var poly = _poly[j] ??= _loops[j].Flatten(sag);
+        int wn = 0;
+        double near = double.PositiveInfinity;
+        for (int i = 0; i < poly.Count; i++)
+        {
+            Point2 a = poly[i], c = poly[(i + 1) % poly.Count];
+            double cross = (c.X - a.X) * (p.Y - a.Y) - (p.X - a.X) * (c.Y - a.Y);
+            if (a.Y <= p.Y) { if (c.Y > p.Y && cross > 0) wn++; }
+            else if (c.Y <= p.Y && cross < 0) wn--;
+            near = Math.Min(near, DistanceSquared(p, a, c));
+        }
+        if (near > 4 * sag * sag) return wn != 0;
+        return Loop.WindingNumber(_loops[j].Flatten(1e-7 * size), p) != 0;
+    }
+
+    private static double DistanceSquared(Point2 p, Point2 a, Point2 c)
+    {
+        Point2 d = c - a, e = p - a;
+        double l2 = Point2.Dot(d, d);
+        double t = l2 > 0 ? Math.Clamp(Point2.Dot(e, d) / l2, 0, 1) : 0;
+        Point2 q = e - t * d;
+        return Point2.Dot(q, q);
     }
 
     /// <summary>The middle of the widest span of material on a few horizontal lines through the region.</summary>
@@ -172,7 +197,8 @@ internal sealed class DrawingRegions
             var xs = new List<double>();
             foreach (int k in holes.Prepend(outer))
             {
-                var poly = _poly[k] ??= _loops[k].Flatten(1e-7 * Math.Max(_box[k].Diagonal, double.Epsilon));
+                if (_box[k].MinY > y || _box[k].MaxY < y) continue;
+                var poly = _poly[k] ??= _loops[k].Flatten(1e-4 * Math.Max(_box[k].Diagonal, double.Epsilon));
                 for (int i = 0; i < poly.Count; i++)
                 {
                     Point2 a = poly[i], c = poly[(i + 1) % poly.Count];

@@ -115,32 +115,49 @@ internal sealed partial class OutlineAssembler
         return pruned;
     }
 
-    /// <summary>Connected groups of pieces (sharing a node other than the <paramref name="barrier"/> nodes).</summary>
-    private static IEnumerable<List<OutlinePiece>> Components(List<OutlinePiece> pieces, HashSet<int> barrier)
+    /// <summary>Connected groups of pieces (sharing a node other than the <paramref name="barrier"/> nodes); union-find over node ids.</summary>
+    private List<List<OutlinePiece>> Components(List<OutlinePiece> pieces, HashSet<int> barrier)
     {
-        var parent = new Dictionary<long, long>();
-        long Find(long x)
+        int nn = _nodes.Count;
+        var parent = new int[nn + 2 * pieces.Count];
+        for (int i = 0; i < parent.Length; i++) parent[i] = i;
+        int Find(int x)
         {
-            if (!parent.TryGetValue(x, out long p)) { parent[x] = x; return x; }
-            while (p != x) { long g = parent[p]; parent[x] = g; x = p; p = g; }
+            while (parent[x] != x) { parent[x] = parent[parent[x]]; x = parent[x]; }
             return x;
         }
         // a barrier node joins nothing: each piece end there gets a private id
-        long Id(int i, int node, int side) => barrier.Contains(node) ? -1L - (2L * i + side) : node;
-        var roots = new long[pieces.Count];
+        int Id(int i, int node, int side) => barrier.Contains(node) ? nn + 2 * i + side : node;
         for (int i = 0; i < pieces.Count; i++)
         {
-            long a = Find(Id(i, pieces[i].A, 0)), b = Find(Id(i, pieces[i].B, 1));
+            int a = Find(Id(i, pieces[i].A, 0)), b = Find(Id(i, pieces[i].B, 1));
             if (a != b) parent[a] = b;
         }
-        for (int i = 0; i < pieces.Count; i++) roots[i] = Find(Id(i, pieces[i].A, 0));
-        return Enumerable.Range(0, pieces.Count).GroupBy(i => roots[i]).Select(g => g.Select(i => pieces[i]).ToList());
+        var groups = new Dictionary<int, List<OutlinePiece>>();
+        var result = new List<List<OutlinePiece>>();
+        for (int i = 0; i < pieces.Count; i++)
+        {
+            int r = Find(Id(i, pieces[i].A, 0));
+            if (!groups.TryGetValue(r, out var g)) { groups[r] = g = []; result.Add(g); }
+            g.Add(pieces[i]);
+        }
+        return result;
     }
 
     private void GroupLoose(HashSet<OutlinePiece> pruned, Dictionary<int, List<OutlinePiece>> at, HashSet<int> keptNodes)
     {
         foreach (var comp in Components(pruned.ToList(), keptNodes))
         {
+            if (comp.Count == 1)
+            {
+                // the common case on sheets: one loose piece (a centre line, a leader, a table line)
+                var q = comp[0];
+                var ends = new List<(Point2, string)>(2);
+                if (at[q.A].Count == 1) ends.Add((_nodes[q.A], q.Source));
+                if (at[q.B].Count == 1) ends.Add((_nodes[q.B], q.Source));
+                Loose.Add(new LooseGroup([q.Source], [q.Layer], [.. ends], q.Segment.Bounds, q.Segment is LineSegment, [q.Segment]));
+                continue;
+            }
             var free = comp.SelectMany(p => new[] { p.A, p.B }).Distinct().Where(n => at[n].Count == 1).ToList();
             var box = Box2.Empty;
             foreach (var p in comp) box = box.Union(p.Segment.Bounds);

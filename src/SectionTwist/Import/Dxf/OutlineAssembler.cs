@@ -47,13 +47,26 @@ internal sealed partial class OutlineAssembler(double snapTol, double splineRel,
         Chain();
     }
 
+    /// <summary>Full circles and ellipses are loops by themselves; a copy lying on an earlier one is dropped (sweep over boxes sorted by their left edge).</summary>
     private void AddClosedCurves(List<OutlinePiece> closed)
     {
+        var boxes = closed.Select(c => c.Segment.Bounds).ToArray();
+        var order = Enumerable.Range(0, closed.Count).OrderBy(i => boxes[i].MinX).ThenBy(i => i).ToArray();
+        var dropped = new bool[closed.Count];
+        double tol = Math.Max(snapTol, 1e-12 * diag);
+        for (int oi = 0; oi < order.Length; oi++)
+        {
+            int i = order[oi];
+            if (dropped[i]) continue;
+            for (int oj = oi + 1; oj < order.Length && boxes[order[oj]].MinX <= boxes[i].MinX + tol; oj++)
+            {
+                int j = order[oj];
+                if (!dropped[j] && boxes[i].Intersects(boxes[j], tol) && Covers(closed[i].Segment, closed[j].Segment)) dropped[j] = true;
+            }
+        }
         for (int i = 0; i < closed.Count; i++)
         {
-            bool dup = false;
-            for (int j = 0; j < i && !dup; j++) dup = Covers(closed[j].Segment, closed[i].Segment);
-            if (dup) { DuplicatesDropped++; continue; }
+            if (dropped[i]) { DuplicatesDropped++; continue; }
             Loops.Add(new Loop([closed[i].Segment]));
             LoopLayers.Add([closed[i].Layer]);
             LoopSources.Add([closed[i].Source]);
