@@ -107,6 +107,7 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
             for (int r = 0; r < regionJ.Length; r++) regionJ[r] = useF.RegionJ[r] + (useF.RegionJ[r] - useC.RegionJ[r]) * k;
         }
         if (singular) estT = double.PositiveInfinity;
+        estJ += CurveTerm(useF);
         var field = FieldRecovery.Build(useF);
         Report("done", 1);
         return new SectionResult
@@ -122,6 +123,21 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
             Field = field,
             RegionTorsionConstants = Array.AsReadOnly(regionJ),
         };
+    }
+
+    /// <summary>
+    /// The effect on J of drawn curves replaced within <see cref="Profile.CurveTolerance"/> h: by the shape derivative of
+    /// the torsion constant, dJ = integral over the boundary of |grad phi|^2 times the normal displacement (Hadamard's
+    /// formula for the Dirichlet problem; Sokolowski and Zolesio, Introduction to Shape Optimization, Springer 1992,
+    /// ch. 3; for the torsional rigidity see Polya and Szego, Isoperimetric Inequalities in Mathematical Physics, 1951),
+    /// so |dJ| / J &lt;= h (max |grad phi|)^2 (perimeter) / J, a bound.
+    /// </summary>
+    private double CurveTerm(TorsionSolution s)
+    {
+        double h = profile.CurveTolerance;
+        if (!(h > 0)) return 0;
+        double perimeter = profile.Loops.Sum(l => l.Perimeter);
+        return h * s.MaxGradient * s.MaxGradient * perimeter / s.J;
     }
 
     /// <summary>Largest arc angle per boundary edge: coarse curved edges suffice at modest accuracy.</summary>

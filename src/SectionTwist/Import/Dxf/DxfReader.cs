@@ -86,9 +86,8 @@ internal static class DxfReader
         if (inspect || unit is null || sel.Chosen is null) return (report, null);
         string name = file + (o.Layer is null ? "" : $" layer {o.Layer}") + (sel.Selection is null or "all parts" ? "" : $" {sel.Selection}");
         // validate in drawing units so that messages quote drawing coordinates, then scale to metres
-        var drawn = new Profile(sel.Chosen, unit, name);
-        var scale = Similarity2.Scaling(unit.Metres);
-        return (report, new Profile(drawn.Regions.Select(r => r.Transformed(scale)), unit, name));
+        var drawn = new Profile(sel.Chosen, unit, name) { CurveTolerance = sel.CurveTolerance };
+        return (report, drawn.Transformed(Similarity2.Scaling(unit.Metres)));
     }
 
     private static void CheckOptions(DxfReadOptions o, DxfRemedy fix)

@@ -26,6 +26,8 @@ internal sealed partial class DxfSelection(string file, DxfReadOptions o, DxfGeo
     public int Loops => _asm?.Loops.Count ?? 0;
     public double LargestGap => _asm?.LargestGap ?? 0;
     public int DuplicatesDropped => _asm?.DuplicatesDropped ?? 0;
+    /// <summary>Largest deviation allowed where curves were replaced by arcs (drawing units).</summary>
+    public double CurveTolerance => _asm?.CurveTolerance ?? 0;
     public int? SelectedPart { get; private set; }
     public string? Selection { get; private set; }
 

@@ -16,6 +16,8 @@ internal sealed partial class OutlineAssembler(double snapTol, double splineRel,
     public double LargestGap { get; private set; }
     public int DuplicatesDropped { get; private set; }
     public int DegenerateDropped { get; private set; }
+    /// <summary>Largest tolerance used where a curve was replaced by arcs (splines, bent ellipses), drawing units; 0 when none.</summary>
+    public double CurveTolerance { get; private set; }
     public List<Loop> Loops { get; } = [];
     /// <summary>Layers that each loop's pieces came from.</summary>
     public List<string[]> LoopLayers { get; } = [];
@@ -36,6 +38,7 @@ internal sealed partial class OutlineAssembler(double snapTol, double splineRel,
             if (c.Segment is not null) { _pieces.Add(new OutlinePiece(c.Segment, c.Source, c.Layer)); continue; }
             // splines become tangent-near arcs within a tolerance relative to their own size (negligible for J)
             double tol = splineRel * Math.Min(diag, Math.Max(c.Spline!.ControlBounds.Diagonal, 1e-300));
+            CurveTolerance = Math.Max(CurveTolerance, tol);
             foreach (var s in SplineArcs.Fit(c.Spline!, tol)) _pieces.Add(new OutlinePiece(s, c.Source, c.Layer));
         }
         var closed = _pieces.Where(p => p.IsClosedCurve).ToList();
@@ -137,7 +140,9 @@ internal sealed partial class OutlineAssembler(double snapTol, double splineRel,
                     if (Point2.Distance(s.Start, a) > 1e-10 * diag || Point2.Distance(s.End, b) > 1e-10 * diag)
                     {
                         // an elliptical arc whose ends must move: replace it by arcs within the spline tolerance, ends moved
-                        var fit = SplineArcs.Fit(s, splineRel * Math.Min(diag, s.Bounds.Diagonal));
+                        double tol = splineRel * Math.Min(diag, s.Bounds.Diagonal);
+                        CurveTolerance = Math.Max(CurveTolerance, tol);
+                        var fit = SplineArcs.Fit(s, tol);
                         fit[0] = MoveEnds(fit[0], a, fit.Count == 1 ? b : fit[0].End);
                         if (fit.Count > 1) fit[^1] = MoveEnds(fit[^1], fit[^1].Start, b);
                         var ids = new int[fit.Count + 1];
