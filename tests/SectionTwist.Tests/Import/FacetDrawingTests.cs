@@ -1,4 +1,5 @@
 using SectionTwist.Geometry;
+using SectionTwist.Import;
 using SectionTwist.Import.Dxf;
 using SectionTwist.Torsion;
 using static SectionTwist.Tests.Import.RegressionDrawings;
@@ -71,6 +72,19 @@ public class FacetDrawingTests
         Assert.Contains("--fit-arcs", warn.Message);
         Assert.DoesNotContain(result.Warnings, w => w.Code == "sharp-reentrant-corner");
         Assert.True(double.IsPositiveInfinity(result.EstimatedRelativeError.MaxShear), "the peak depends on the facets: unbounded estimate");
+    }
+
+    [Fact]
+    public void A_point_list_of_a_circle_is_named_as_facets_and_fitted_on_request()
+    {
+        string path = Path.Combine(Cli.CliRunner.TempDir(), "pin.csv");
+        File.WriteAllLines(path, Facets(0, 0, 12.5, 48).Select(p => FormattableString.Invariant($"{p.X:R}, {p.Y:R}")));
+        var notes = new List<string>();
+        var kept = ProfileSources.Load(path, new ProfileSourceOptions { Notes = notes.Add });
+        Tol.Rel(24 * 156.25 * Math.Sin(2 * Math.PI / 48) * Mm2, kept.Properties.Area, 1e-12, "regular 48-gon (n/2) r^2 sin(2 pi/n)");
+        Assert.Contains(notes, n => n.StartsWith("curve drawn as 48 facets", StringComparison.Ordinal) && n.Contains("--fit-arcs 1e-4", StringComparison.Ordinal));
+        var fitted = ProfileSources.Load(path, new ProfileSourceOptions { FitArcs = 1e-4 });
+        Tol.Rel(Math.PI * 156.25 * Mm2, fitted.Properties.Area, 1e-9, "disc d 25 (corners on the circle)");
     }
 
     /// <summary>Square 40 with a half-round notch of radius r in the top edge (centre (20, 40)), the notch as 12 facets.</summary>
