@@ -39,8 +39,8 @@ internal sealed class DemoCommand : ICommand
 
         var clock = Stopwatch.StartNew();
         // the verification cases run beside the section analyses (both are single-threaded for these sizes)
-        var verifying = Task.Run(() => VerificationSuite.Run());
-        var sections = new ShaftSectionCatalog(notes: context.Err.WriteLine);
+        var verifying = Task.Run(() => VerificationSuite.Run(context.Analysis(), context.Cancellation));
+        var sections = new ShaftSectionCatalog(context.Analysis(), context.Err.WriteLine, context.Cancellation);
         var doc = ShaftFile.Parse(ReadDemoFile(), "winch-shaft.yaml", resolver: sections.Resolver);
         var result = ShaftSolver.Solve(doc.Model);
         var verification = verifying.GetAwaiter().GetResult();

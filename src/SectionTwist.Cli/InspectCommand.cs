@@ -26,7 +26,7 @@ internal sealed class InspectCommand : ICommand
         var source = DrawingOptions.Read(args, new ProfileSourceOptions { Unit = unitText is null ? null : LengthUnit.Parse(unitText) });
         if (args.Positional.Count != 1) throw new UsageException("give one DXF drawing");
         args.EnsureAllUsed();
-        var r = DxfProfiles.Inspect(args.Positional[0], DxfSource.ToDxf(source));
+        var r = DxfProfiles.Inspect(args.Positional[0], DxfSource.ToDxf(source), ctx.Cancellation);
         Print(ctx.Out, r);
         if (r.Problem is null) return 0;
         ctx.Err.WriteLine($"sectiontwist inspect: error: {r.Problem}");

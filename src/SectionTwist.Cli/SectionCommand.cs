@@ -10,7 +10,7 @@ internal sealed class SectionCommand : ICommand
     public string Name => "section";
     public string Summary => "torsion constant J, peak shear per torque and area properties of a cross-section";
     public string Usage => $$"""
-        sectiontwist section SOURCE [--accuracy REL] [--unit U] [drawing options] [--json] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR]
+        sectiontwist section SOURCE [--accuracy REL] [--unit U] [drawing options] [--json] [--warping] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR]
           SOURCE      a template spec such as circle:d=40, keyed:d=40, rect:b=60,h=20, a drawing file (.dxf),
                       a point list (.csv, .pts) or anything a plugin reads
           --accuracy  requested relative accuracy of J (default 1e-4)
@@ -19,6 +19,8 @@ internal sealed class SectionCommand : ICommand
         {{DrawingOptions.Usage}}
         output options:
           --json      print one JSON object in SI base units (m, m^2, m^4, 1/m^3)
+          --warping   also solve the warping function: shear centre, warping constant Iw, largest sectorial
+                      coordinate, warping length for steel and whether restrained warping matters
           --plot      write a shear-stress contour picture (PNG or SVG)
           --torque    torque in N*m for the plot colour bar in MPa (default: stress per unit torque)
           --dxf       write the outline (layer PROFILE) and stress-function contours (layer PHI) to a DXF file for CAD
@@ -33,6 +35,7 @@ internal sealed class SectionCommand : ICommand
     public int Run(Args args, CliContext ctx)
     {
         bool json = args.Flag("json");
+        bool warping = args.Flag("warping");
         double accuracy = args.Double("accuracy") ?? 1e-4;
         if (!(accuracy > 0 && accuracy < 0.5)) throw new UsageException("--accuracy must lie between 0 and 0.5, e.g. 1e-4");
         var unitText = args.Option("unit");
@@ -42,6 +45,7 @@ internal sealed class SectionCommand : ICommand
             Unit = unitText is null ? null : LengthUnit.Parse(unitText),
             Accuracy = accuracy,
             Notes = json ? drawingNotes.Add : note => ctx.Err.WriteLine($"note: {note}"),
+            Cancellation = ctx.Cancellation,
         });
         string? plot = args.Option("plot");
         double? torque = args.Double("torque");
@@ -52,7 +56,7 @@ internal sealed class SectionCommand : ICommand
         args.EnsureAllUsed();
         LoadPlugins(plugins);
         var profile = ProfileSources.Load(args.Positional[0], srcOptions);
-        var result = SectionAnalyzer.Analyze(profile, new AnalysisOptions { Accuracy = accuracy });
+        var result = SectionAnalyzer.Analyze(profile, ctx.Analysis(accuracy) with { Warping = warping }, ctx.Cancellation);
         // in JSON the reader's notes (parts analysed together, entities left out, facets) travel with the warnings
         if (drawingNotes.Count > 0)
             result = result with { Warnings = drawingNotes.Select(n => new AnalysisWarning("drawing", n)).Concat(result.Warnings).ToList().AsReadOnly() };

@@ -24,7 +24,7 @@ internal sealed class VerifyCommand : ICommand
         bool json = args.Flag("json");
         args.EnsureAllUsed();
         if (!(accuracy > 0 && accuracy < 0.5)) throw new UsageException("--accuracy must lie between 0 and 0.5, e.g. 1e-4");
-        var outcomes = VerificationSuite.Run(new AnalysisOptions { Accuracy = accuracy });
+        var outcomes = VerificationSuite.Run(ctx.Analysis(accuracy), ctx.Cancellation);
         int failed = outcomes.Count(o => !o.Passed);
         if (json) ctx.Out.WriteLine(WriteJson(outcomes, accuracy));
         else WriteTable(ctx.Out, outcomes, failed);

@@ -39,6 +39,9 @@ public sealed record ProfileSourceOptions
     /// <summary>Receives non-fatal notes (skipped entities, gaps closed).</summary>
     public Action<string>? Notes { get; init; }
 
+    /// <summary>Stops reading a large input; sources observe it in their long loops.</summary>
+    public CancellationToken Cancellation { get; init; }
+
     /// <summary>Word remedies as shaft-file keys instead of command-line options.</summary>
     internal bool ShaftFileKeys { get; init; }
 }

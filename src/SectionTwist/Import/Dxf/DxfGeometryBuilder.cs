@@ -10,11 +10,12 @@ namespace SectionTwist.Import.Dxf;
 /// the boundary paths of HATCH entities become the outline curves instead (section views hatch the cut material).
 /// Curves on layers outside the choice go to <see cref="OtherCurves"/> (a broken entity there is ignored, not fatal).
 /// </summary>
-internal sealed partial class DxfGeometryBuilder(DxfDocument doc, Func<string, bool>? layerChosen, bool hatches = false)
+internal sealed partial class DxfGeometryBuilder(DxfDocument doc, Func<string, bool>? layerChosen, bool hatches = false, CancellationToken ct = default)
 {
     /// <summary>Most outline curves one drawing may produce (guards against huge arrays and runaway nesting).</summary>
-    public const int MaxCurves = 500_000;
-    private const int MaxDepth = 32;
+    public const int MaxCurves = Limits.InputLimits.MaxDxfPieces;
+    private const int MaxDepth = Limits.InputLimits.MaxDxfBlockDepth;
+    private int _emitted;
 
     private static readonly HashSet<string> Annotation = new(StringComparer.Ordinal)
     {
@@ -59,6 +60,7 @@ internal sealed partial class DxfGeometryBuilder(DxfDocument doc, Func<string, b
 
     private void Emit(DxfEntity e, Affine2 m, string? insertLayer, string where)
     {
+        if ((++_emitted & 4095) == 0) ct.ThrowIfCancellationRequested();
         if (e.PaperSpace) return;
         string layer = insertLayer is not null && e.Layer == "0" ? insertLayer : e.Layer;
         if (e.Type == "INSERT") { ExpandInsert(e, m, layer, where); return; }

@@ -10,11 +10,12 @@ namespace SectionTwist.Import.Dxf;
 /// </summary>
 internal static class DxfReader
 {
-    public static (DxfImportReport Report, Profile? Profile) Read(ReadOnlySpan<byte> data, string file, DxfReadOptions o, bool inspect)
+    public static (DxfImportReport Report, Profile? Profile) Read(ReadOnlySpan<byte> data, string file, DxfReadOptions o, bool inspect, CancellationToken ct = default)
     {
         var fix = new DxfRemedy(o.ShaftFileKeys);
         CheckOptions(o, fix);
-        var pairs = DxfTokenizer.Tokenize(data, file, out string format, out bool bom);
+        var pairs = DxfTokenizer.Tokenize(data, file, out string format, out bool bom, ct);
+        ct.ThrowIfCancellationRequested();
         if (pairs.Count == 0)
             throw new SectionTwistException("dxf-empty", $"{file}: the file is empty; export the drawing again as DXF");
         string? acadVer = FindHeader(pairs, "$ACADVER"), codePage = FindHeader(pairs, "$DWGCODEPAGE");
@@ -22,6 +23,7 @@ internal static class DxfReader
         for (int i = 0; i < pairs.Count; i++)
             if (DxfPair.IsStringCode(pairs[i].Code)) pairs[i] = pairs[i] with { Value = DxfText.Decode(pairs[i].Value, enc) };
         var doc = DxfParser.Parse(pairs, file, format);
+        DxfBudget.Check(doc, ct);
         if (doc.Entities.Count == 0)
             throw new SectionTwistException("dxf-no-entities",
                 $"{file}: the drawing holds no entities in its ENTITIES section; export the drawing with its geometry (model space)");
@@ -29,7 +31,7 @@ internal static class DxfReader
         var known = doc.Layers.Concat(doc.Entities.Select(e => e.Layer)).Concat(doc.Blocks.Values.SelectMany(b => b.Entities).Select(e => e.Layer))
             .Distinct(StringComparer.OrdinalIgnoreCase).ToList();
         var filter = LayerFilter.Create(o.Layer, known);
-        var builder = new DxfGeometryBuilder(doc, filter is null ? null : filter.Matches, o.UseHatches);
+        var builder = new DxfGeometryBuilder(doc, filter is null ? null : filter.Matches, o.UseHatches, ct);
         builder.Run();
         var warnings = new List<string>(doc.Warnings);
         warnings.AddRange(builder.Warnings);
@@ -45,7 +47,7 @@ internal static class DxfReader
             if (ins is { } bad && (bad < 0 || bad > DxfUnits.MaxCode)) warnings.Add($"unknown $INSUNITS code {bad}; treated as unitless");
         }
 
-        var sel = new DxfSelection(file, o, builder, filter, layers.Concat(known).Distinct(StringComparer.OrdinalIgnoreCase).ToList());
+        var sel = new DxfSelection(file, o, builder, filter, layers.Concat(known).Distinct(StringComparer.OrdinalIgnoreCase).ToList(), unit ?? LengthUnit.Millimetre, ct);
         string? problem = null;
         try { sel.Run(); }
         catch (SectionTwistException e) when (inspect) { problem = e.Message; }

@@ -11,7 +11,7 @@ internal sealed partial class DxfSelection
         if (filter is null || builder.OtherCurves.Count == 0) return;
         var near = builder.OtherCurves.Where(c => box.Contains(c.Bounds, _snap)).ToList();
         if (near.Count == 0) return;
-        var asm = new OutlineAssembler(_snap, o.SplineTolerance, Extent);
+        var asm = new OutlineAssembler(file, _snap, o.SplineTolerance, Extent, ct);
         asm.Run(near);
         var r = _regions!;
         for (int i = 0; i < asm.Loops.Count; i++)

@@ -8,7 +8,8 @@ namespace SectionTwist.Import.Dxf;
 /// entities and junctions judged against the choice, other layers checked for loops left behind, facets found or
 /// fitted. Fields fill as the stages run, so <c>inspect</c> can report what was found before a problem stopped it.
 /// </summary>
-internal sealed partial class DxfSelection(string file, DxfReadOptions o, DxfGeometryBuilder builder, LayerFilter? filter, IReadOnlyCollection<string> layers)
+internal sealed partial class DxfSelection(string file, DxfReadOptions o, DxfGeometryBuilder builder, LayerFilter? filter, IReadOnlyCollection<string> layers,
+    Units.LengthUnit unit, CancellationToken ct)
 {
     private readonly DxfRemedy _fix = new(o.ShaftFileKeys);
     private OutlineAssembler? _asm;
@@ -81,6 +82,11 @@ internal sealed partial class DxfSelection(string file, DxfReadOptions o, DxfGeo
         }
         if (_asm.Loops.Count == 0) throw NothingCloses();
         var faces = Choose();
+        int loops = faces.Sum(f => 1 + f.Holes.Length);
+        if (loops > Limits.InputLimits.MaxLoops)
+            throw new SectionTwistException("dxf-too-many-loops",
+                $"{file}: the chosen section has {loops} closed loops, more than the {Limits.InputLimits.MaxLoops} SectionTwist analyses together (contour or hatch lines?); " +
+                $"choose the outline's layers with {_fix.Layer("NAME")} or one part with {_fix.Part(1)}");
         var box = Box2.Empty;
         foreach (var f in faces) box = box.Union(f.Bounds);
         JudgeLeftovers(faces, box);
@@ -91,7 +97,7 @@ internal sealed partial class DxfSelection(string file, DxfReadOptions o, DxfGeo
     private OutlineAssembler Assemble(List<SourcedCurve> curves, double scale)
     {
         _snap = o.SnapTolerance * scale;
-        var asm = new OutlineAssembler(_snap, o.SplineTolerance, scale);
+        var asm = new OutlineAssembler(file, _snap, o.SplineTolerance, scale, ct);
         asm.Run(curves);
         return asm;
     }
@@ -137,6 +143,7 @@ internal sealed partial class DxfSelection(string file, DxfReadOptions o, DxfGeo
                 $"{file}: {island.Entity} lies inside a hole of another part (a part inside a hole, or a frame around the drawing); choose one: {ListParts(4)}");
         }
         var all = r.Parts.Where(f => f.Depth == 0).ToList();
+        StrayHoleCheck.Check(file, all.Select(r.ToRegion).ToList(), _asm.Loops, _asm.LoopLayers, unit);
         if (all.Count > 1)
             Warnings.Add($"{all.Count} separate parts analysed together (their J add up): {ListParts(5)}; pick one with {_fix.Part(1)} or a point with {_fix.At(all[0].Inside)}");
         return all;

@@ -10,7 +10,7 @@ namespace SectionTwist.Import.Dxf;
 /// the rest into loops by walking node adjacency. Groups where an odd number of ends (three or more) meet are set
 /// aside as junctions. Nothing here refuses a drawing: the reader decides what the loose pieces and junctions mean.
 /// </summary>
-internal sealed partial class OutlineAssembler(double snapTol, double splineRel, double diag)
+internal sealed partial class OutlineAssembler(string file, double snapTol, double splineRel, double diag, CancellationToken ct = default)
 {
     /// <summary>Largest distance an end point was moved by snapping (drawing units).</summary>
     public double LargestGap { get; private set; }
@@ -36,18 +36,26 @@ internal sealed partial class OutlineAssembler(double snapTol, double splineRel,
         foreach (var c in curves)
         {
             if (c.Segment is not null) { _pieces.Add(new OutlinePiece(c.Segment, c.Source, c.Layer)); continue; }
+            ct.ThrowIfCancellationRequested();
             // splines become tangent-near arcs within a tolerance relative to their own size (negligible for J)
             double tol = splineRel * Math.Min(diag, Math.Max(c.Spline!.ControlBounds.Diagonal, 1e-300));
             CurveTolerance = Math.Max(CurveTolerance, tol);
             foreach (var s in SplineArcs.Fit(c.Spline!, tol)) _pieces.Add(new OutlinePiece(s, c.Source, c.Layer));
+            if (_pieces.Count > Limits.InputLimits.MaxDxfPieces)
+                throw new SectionTwistException("dxf-too-large", $"{file}: the splines become more than {Limits.InputLimits.MaxDxfPieces} pieces; export only the section outline or simplify the splines");
         }
         var closed = _pieces.Where(p => p.IsClosedCurve).ToList();
         _pieces.RemoveAll(p => p.IsClosedCurve);
         Snap();
+        ct.ThrowIfCancellationRequested();
         Rebuild();
+        ct.ThrowIfCancellationRequested();
         DropDuplicates();
+        ct.ThrowIfCancellationRequested();
         AddClosedCurves(closed);
         Chain();
+        ct.ThrowIfCancellationRequested();
+        // the limit on loops analysed together (Limits.InputLimits.MaxLoops) applies to the chosen section: DxfSelection
     }
 
     /// <summary>Full circles and ellipses are loops by themselves; a copy lying on an earlier one is dropped (sweep over boxes sorted by their left edge).</summary>
@@ -69,6 +77,7 @@ internal sealed partial class OutlineAssembler(double snapTol, double splineRel,
         }
         for (int i = 0; i < closed.Count; i++)
         {
+            if ((i & 255) == 0) ct.ThrowIfCancellationRequested();
             if (dropped[i]) { DuplicatesDropped++; continue; }
             Loops.Add(new Loop([closed[i].Segment]));
             LoopLayers.Add([closed[i].Layer]);
@@ -86,8 +95,14 @@ internal sealed partial class OutlineAssembler(double snapTol, double splineRel,
         int Find(int x) { while (parent[x] != x) { parent[x] = parent[parent[x]]; x = parent[x]; } return x; }
         double cell = snapTol > 0 ? snapTol : Math.Max(diag, 1) * 1e-15;
         var grid = new Dictionary<(long, long), List<int>>();
+        // exact copies (stacked duplicate entities) join their first occurrence directly: the grid sees each point once,
+        // so a crowd of coincident ends costs O(n), not O(n^2)
+        var exact = new Dictionary<Point2, int>();
         for (int i = 0; i < n; i++)
         {
+            if ((i & 4095) == 0) ct.ThrowIfCancellationRequested();
+            if (exact.TryGetValue(pts[i], out int first)) { parent[Find(i)] = Find(first); continue; }
+            exact[pts[i]] = i;
             long cx = (long)Math.Floor(pts[i].X / cell), cy = (long)Math.Floor(pts[i].Y / cell);
             for (long dx = -1; dx <= 1; dx++)
                 for (long dy = -1; dy <= 1; dy++)
