@@ -16,8 +16,8 @@ internal sealed class InspectCommand : ICommand
         {{DrawingOptions.Usage}}
           Parts are numbered by area, largest first; each line gives a point inside it. Pass the number to
           'section --part N', the point to 'section --at X,Y', or a box around one view to 'section --window'.
-          Exit code 0 when 'section' would accept the drawing with the same options, 2 when it would refuse it
-          (the problem is printed last).
+          Exit code 0 when 'section' would accept the drawing with the same options (given its unit: a missing
+          unit shows on the units line), 2 when it would refuse it (the problem is printed last).
         """;
 
     public int Run(Args args, CliContext ctx)
