@@ -82,6 +82,7 @@ internal sealed partial class DxfSelection(string file, DxfReadOptions o, DxfGeo
         }
         if (_asm.Loops.Count == 0) throw NothingCloses();
         var faces = Choose();
+        if (o.Window is { } win) Selection = $"{Selection} inside the window {Show(win)}";
         int loops = faces.Sum(f => 1 + f.Holes.Length);
         if (loops > Limits.InputLimits.MaxLoops)
             throw new SectionTwistException("dxf-too-many-loops",
@@ -110,14 +111,14 @@ internal sealed partial class DxfSelection(string file, DxfReadOptions o, DxfGeo
         {
             var f = r.At(p) ?? throw NotAround(p);
             int idx = r.Parts.FindIndex(x => x.Loop == f.Loop);
-            SelectedPart = idx >= 0 ? idx + 1 : null;
-            Selection = $"at {Pt(p)}";
             if (r.IsHole(f.Loop))
             {
                 var around = r.Around(f.Loop);
                 throw new SectionTwistException("dxf-no-part",
                     $"{file}: {Pt(p)} lies in the hole {f.Entity}{(around is null ? "" : $" of the part {around.Entity}; give a point in its material, e.g. {_fix.At(around.Inside)}")}");
             }
+            SelectedPart = idx >= 0 ? idx + 1 : null;
+            Selection = $"at {Pt(p)}";
             return [f];
         }
         if (o.Part is { } n)
@@ -129,7 +130,6 @@ internal sealed partial class DxfSelection(string file, DxfReadOptions o, DxfGeo
             Selection = $"part {n}";
             return [r.Parts[n - 1]];
         }
-        Selection = "all parts";
         if (_asm!.Junctions.Count > 0) throw JunctionError(_asm.Junctions[0], true);
         var open = _asm.Loose.Where(g => !g.Straight).ToList();
         if (open.Count > 0 && !o.SkipOpen) throw OpenError(open, true);
@@ -144,6 +144,7 @@ internal sealed partial class DxfSelection(string file, DxfReadOptions o, DxfGeo
         }
         var all = r.Parts.Where(f => f.Depth == 0).ToList();
         StrayHoleCheck.Check(file, all.Select(r.ToRegion).ToList(), _asm.Loops, _asm.LoopLayers, unit);
+        Selection = "all parts";
         if (all.Count > 1)
             Warnings.Add($"{all.Count} separate parts analysed together (their J add up): {ListParts(5)}; pick one with {_fix.Part(1)} or a point with {_fix.At(all[0].Inside)}");
         return all;
