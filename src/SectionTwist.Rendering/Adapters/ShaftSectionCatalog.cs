@@ -45,6 +45,7 @@ public sealed class ShaftSectionCatalog
         return ShaftSections.Stiffness(r, source.TemplateSpec ?? Path.GetFileName(source.DxfPath), outer) with
         {
             Bending = SectionTwist.Bending.BendingSection.FromSection(r, templateOuter),
+            PolarMoment = r.PolarMoment,
         };
     }
 

@@ -31,6 +31,7 @@ public static class ShaftSections
         return Stiffness(r, source.TemplateSpec ?? Path.GetFileName(source.DxfPath), outer) with
         {
             Bending = SectionTwist.Bending.BendingSection.FromSection(r, outer),
+            PolarMoment = r.PolarMoment,
         };
     }
 
