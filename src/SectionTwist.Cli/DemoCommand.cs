@@ -2,6 +2,7 @@ using System.Diagnostics;
 using SectionTwist.Rendering.Adapters;
 using SectionTwist.Rendering.Report;
 using SectionTwist.Shaft;
+using SectionTwist.Units;
 using SectionTwist.Verification;
 
 namespace SectionTwist.Cli;
@@ -23,16 +24,18 @@ internal sealed class DemoCommand : ICommand
     public string Summary => "solve the bundled winch drive shaft and write its report and pictures";
 
     public string Usage =>
-        "sectiontwist demo [--out DIR]\n" +
+        "sectiontwist demo [--out DIR] [--units SI-mm|SI-m|US]\n" +
         "  Solves the bundled demo: the drive shaft of a small winch (an invented scenario) with a keyed input, a hollow middle\n" +
         "  and a splined output, driven through a flexible coupling. The keyed and splined sections are analysed, the shaft is\n" +
         "  solved, the verification cases are run, and DIR receives report.html, shaft.png, shaft.svg and section-NAME.png.\n" +
         $"  --out DIR   output folder (default ./{DefaultFolder}; created when missing)\n" +
+        "  --units SYS units of the summary, report and pictures: SI-mm (the demo file's own), SI-m or US\n" +
         "  The shaft file itself: sample-profiles/winch-shaft.yaml ('sectiontwist shaft' reads it too).";
 
     public int Run(Args args, CliContext context)
     {
         string folder = args.Option("out") ?? DefaultFolder;
+        var units = args.Option("units") is { } us ? UnitSystem.Parse(us) : null;
         args.EnsureAllUsed();
         if (args.Positional.Count > 0) throw new UsageException($"unexpected '{args.Positional[0]}'; the demo takes only --out DIR");
         OutputPaths.PrepareFolder(folder, "--out");
@@ -40,12 +43,23 @@ internal sealed class DemoCommand : ICommand
         var clock = Stopwatch.StartNew();
         // the verification cases run beside the section analyses (both are single-threaded for these sizes)
         var verifying = Task.Run(() => VerificationSuite.Run());
-        var sections = new ShaftSectionCatalog(notes: context.Err.WriteLine);
-        var doc = ShaftFile.Parse(ReadDemoFile(), "winch-shaft.yaml", resolver: sections.Resolver);
-        var result = ShaftSolver.Solve(doc.Model);
-        var verification = verifying.GetAwaiter().GetResult();
-        var content = ShaftReport.Build(doc, result, sections, verification, CliReport.Options());
-        var files = ShaftReport.WriteBundle(content, folder);
+        ShaftDocument doc;
+        ShaftResult result;
+        IReadOnlyList<VerificationOutcome> verification;
+        IReadOnlyList<string> files;
+        ShaftSectionCatalog sections;
+        using (var progress = new ProgressLine(context, "demo"))
+        {
+            sections = new ShaftSectionCatalog(notes: context.Err.WriteLine) { Progress = (name, p) => progress.Report(0.8 * p.Fraction, $"section '{name}': {p.Stage}") };
+            doc = ShaftFile.Parse(ReadDemoFile(), "winch-shaft.yaml", resolver: sections.Resolver);
+            if (units is not null) doc = doc with { Units = units };
+            result = ShaftSolver.Solve(doc.Model);
+            while (!verifying.Wait(200)) progress.Report(0.85, "verification cases");
+            verification = verifying.GetAwaiter().GetResult();
+            progress.Report(0.9, "pictures and report");
+            var content = ShaftReport.Build(doc, result, sections, verification, CliReport.Options());
+            files = ShaftReport.WriteBundle(content, folder);
+        }
 
         var w = context.Out;
         w.WriteLine($"{doc.Model.Title ?? "demo shaft"} (bundled sample-profiles/winch-shaft.yaml)");
@@ -54,7 +68,7 @@ internal sealed class DemoCommand : ICommand
         w.WriteLine(failed == 0
             ? $"  Verification: all {verification.Count} cases passed on this build."
             : $"  Verification: {failed} of {verification.Count} cases FAILED on this build (see the report).");
-        w.WriteLine($"wrote {files.Count} files to {Path.GetFullPath(folder)} in {clock.Elapsed.TotalSeconds:F1} s");
+        w.WriteLine($"wrote {files.Count} files to {Path.GetFullPath(folder)} in {NumberText.Fixed(clock.Elapsed.TotalSeconds, 1)} s");
         w.WriteLine($"report: {Path.GetFullPath(files[0])}");
         w.WriteLine(ShaftCommand.Caution);
         return 0;

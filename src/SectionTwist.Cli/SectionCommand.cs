@@ -10,15 +10,16 @@ internal sealed class SectionCommand : ICommand
     public string Name => "section";
     public string Summary => "torsion constant J, peak shear per torque and area properties of a cross-section";
     public string Usage => """
-        sectiontwist section SOURCE [--accuracy REL] [--unit U] [--layer NAME] [--part N] [--json] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR]
+        sectiontwist section SOURCE [--accuracy REL] [--unit U] [--units SYSTEM] [--layer NAME] [--part N] [--json] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR]
           SOURCE      a template spec such as circle:d=40, keyed:d=40, rect:b=60,h=20, a drawing file (.dxf),
                       a point list (.csv, .pts) or anything a plugin reads
           --accuracy  requested relative accuracy of J (default 1e-4)
           --unit      length unit of the input (mm, cm, m, in, ft); specs default to mm
+          --units     units of the table and the plot: SI-mm, SI-m or US (default: the input's own, e.g. US for inches)
           --layer     use only this drawing layer;  --part N  use only the N-th separate part (largest first)
-          --json      print one JSON object in SI base units (m, m^2, m^4, 1/m^3)
+          --json      print one JSON object in SI base units (m, m^2, m^4, 1/m^3); --units does not change it
           --plot      write a shear-stress contour picture (PNG or SVG)
-          --torque    torque in N*m for the plot colour bar in MPa (default: stress per unit torque)
+          --torque    torque for the plot colour bar, in N*m, or with a unit: 250Nm, 2kN*m, 1800lbf*in (default: stress per unit torque)
           --dxf       write the outline (layer PROFILE) and stress-function contours (layer PHI) to a DXF file for CAD
           --dxf-mesh  also write the mesh edges (layer MESH)
           --plugins   load profile-source plugins (*.dll) from DIR; the SECTIONTWIST_PLUGINS environment
@@ -43,20 +44,38 @@ internal sealed class SectionCommand : ICommand
             Notes = json ? null : note => ctx.Err.WriteLine($"note: {note}"),
         };
         string? plot = args.Option("plot");
-        double? torque = args.Double("torque");
+        double? torque = TorqueOption(args.Option("torque"));
+        var units = args.Option("units") is { } us ? UnitSystem.Parse(us) : null;
         string? dxf = args.Option("dxf");
         bool dxfMesh = args.Flag("dxf-mesh");
         string? plugins = args.Option("plugins");
         if (args.Positional.Count != 1) throw new UsageException(args.Positional.Count == 0 ? "give one SOURCE (a template spec or a .dxf file)" : $"give one SOURCE, not {args.Positional.Count}");
         args.EnsureAllUsed();
         LoadPlugins(plugins);
-        var profile = ProfileSources.Load(args.Positional[0], srcOptions);
-        var result = SectionAnalyzer.Analyze(profile, new AnalysisOptions { Accuracy = accuracy });
-        if (plot is not null) SectionPlotHook.Write(result, plot, torque);
+        if (plot is not null) OutputPaths.CheckFile(plot, "--plot");
+        if (dxf is not null) OutputPaths.CheckFile(dxf, "--dxf");
+        string source = args.Positional[0];
+        var profile = ProfileSources.Load(source, srcOptions);
+        SectionResult result;
+        using (var progress = new ProgressLine(ctx, $"section {source}"))
+            result = SectionAnalyzer.Analyze(profile, new AnalysisOptions { Accuracy = accuracy }, default, progress.Analysis("analysis"));
+        if (plot is not null) SectionPlotHook.Write(result, plot, torque, SectionPlotHook.Title(source, srcOptions.Part), units);
         if (dxf is not null) SectionDxfExport.Write(result, dxf, dxfMesh);
-        if (json) ctx.Out.WriteLine(SectionJson.Write(result, args.Positional[0]));
-        else SectionText.Write(ctx.Out, result, args.Positional[0]);
+        if (json) ctx.Out.WriteLine(SectionJson.Write(result, source));
+        else SectionText.Write(ctx.Out, result, source, units);
         return 0;
+    }
+
+    /// <summary>The <c>--torque</c> value in N*m: a plain number is N*m; a number with a torque unit (250Nm, 1800lbf*in) is converted.</summary>
+    internal static double? TorqueOption(string? text)
+    {
+        if (text is null) return null;
+        double? t = Shaft.QuantityText.TrySplit(text, out double v, out string unit)
+            ? unit.Length == 0 ? v : Shaft.QuantityText.UnitFactor(unit, Shaft.QuantityKind.Torque) * v
+            : null;
+        if (t is not { } x || !double.IsFinite(x) || x == 0)
+            throw new UsageException($"--torque: '{text}' is not a non-zero torque; write N*m (250) or a number with a unit: {Shaft.QuantityText.Examples(Shaft.QuantityKind.Torque)}");
+        return x;
     }
 
     private static void LoadPlugins(string? folder)

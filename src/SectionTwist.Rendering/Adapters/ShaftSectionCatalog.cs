@@ -18,12 +18,15 @@ public sealed class ShaftSectionCatalog
 
     /// <summary>Creates an empty catalog.</summary>
     /// <param name="options">Section analysis options; null for the defaults.</param>
-    /// <param name="notes">Receives one line per section analysed and per analysis warning; may be null.</param>
+    /// <param name="notes">Receives one line per section analysed (the warnings travel with the results); may be null.</param>
     public ShaftSectionCatalog(AnalysisOptions? options = null, Action<string>? notes = null)
     {
         _options = options;
         _notes = notes;
     }
+
+    /// <summary>Receives the progress of each section analysis with the section's name (for a progress display); may be null.</summary>
+    public Action<string, AnalysisProgress>? Progress { get; init; }
 
     /// <summary>The sections analysed so far, in the order the shaft file's segments first used them.</summary>
     public IReadOnlyList<AnalysedSection> Sections => _sections;
@@ -35,11 +38,12 @@ public sealed class ShaftSectionCatalog
     public SectionStiffness Resolve(SectionSource source)
     {
         ArgumentNullException.ThrowIfNull(source);
-        var (r, templateOuter) = ShaftSections.Analyze(source, _options, _notes);
+        var progress = Progress is { } report ? new ProgressSink(p => report(source.Name, p)) : null;
+        var (r, templateOuter) = ShaftSections.Analyze(source, _options, _notes, progress);
         // a template knows its outer size; a drawing's is the larger side of its bounds
         double outer = templateOuter ?? Math.Max(r.Profile.Bounds.Width, r.Profile.Bounds.Height);
         _sections.Add(new AnalysedSection(source, r, outer, LargestHole(r.Profile)));
-        return new SectionStiffness(r.TorsionConstant, r.MaxShearPerTorque, source.TemplateSpec ?? Path.GetFileName(source.DxfPath), outer);
+        return ShaftSections.Stiffness(source, r, outer);
     }
 
     /// <summary>
@@ -49,6 +53,12 @@ public sealed class ShaftSectionCatalog
     public AnalysedSection? Find(SectionStiffness? section) =>
         section is null ? null : _sections.FirstOrDefault(a => a.Result.TorsionConstant == section.TorsionConstant
                                                                 && a.Result.MaxShearPerTorque == section.ShearPerTorque);
+
+    /// <summary>Reports on the calling thread, in order.</summary>
+    private sealed class ProgressSink(Action<AnalysisProgress> report) : IProgress<AnalysisProgress>
+    {
+        public void Report(AnalysisProgress value) => report(value);
+    }
 
     /// <summary>Largest extent of the largest hole of a single-region profile (a bore), m; 0 for none.</summary>
     private static double LargestHole(Profile p) =>

@@ -12,6 +12,16 @@ namespace SectionTwist.Shaft;
 public sealed record SectionStiffness(double TorsionConstant, double ShearPerTorque, string? Description = null, double? OuterDiameter = null)
 {
     /// <summary>
+    /// True when the section's theoretical peak shear is unbounded (a sharp re-entrant corner: a keyseat floor or spline root
+    /// without radius). <see cref="ShearPerTorque"/> is then only the value on the analysis mesh, which grows without bound
+    /// under refinement: segments with this section get no factor of safety and the check <c>unbounded</c>.
+    /// </summary>
+    public bool PeakShearUnbounded { get; init; }
+
+    /// <summary>Warnings of the section analysis, each naming the section (empty for exact and given sections).</summary>
+    public IReadOnlyList<Torsion.AnalysisWarning> Warnings { get; init; } = [];
+
+    /// <summary>
     /// Exact values for a solid round of diameter <paramref name="diameter"/> (m): J = pi d^4 / 32, tau = 16 T / (pi d^3)
     /// (Timoshenko and Goodier, Theory of Elasticity, ch. 10).
     /// </summary>

@@ -13,7 +13,7 @@ public static class ShaftFile
     {
         ArgumentNullException.ThrowIfNull(path);
         if (!File.Exists(path))
-            throw new SectionTwistException("file-not-found", $"{path}: no such shaft file; check the path");
+            throw new SectionTwistException("file-not-found", FileHints.Missing(path, "shaft file") + "; check the path and the file name");
         string text = File.ReadAllText(path);
         string dir = Path.GetDirectoryName(Path.GetFullPath(path)) ?? ".";
         return new ShaftFileReader(Path.GetFileName(path), dir, resolver).Read(path, text);

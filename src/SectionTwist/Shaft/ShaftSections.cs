@@ -15,7 +15,7 @@ public static class ShaftSections
 {
     /// <summary>Creates a resolver for <see cref="ShaftFile.Load"/>.</summary>
     /// <param name="options">Section analysis options; null for the defaults.</param>
-    /// <param name="notes">Receives one line per analysed section and per analysis warning (e.g. a sharp re-entrant corner); may be null.</param>
+    /// <param name="notes">Receives one line per analysed section (the analysis warnings travel with the result, <see cref="SectionStiffness.Warnings"/>); may be null.</param>
     public static Func<SectionSource, SectionStiffness> CreateResolver(AnalysisOptions? options = null, Action<string>? notes = null) =>
         source => Resolve(source, options, notes);
 
@@ -23,14 +23,26 @@ public static class ShaftSections
     public static SectionStiffness Resolve(SectionSource source, AnalysisOptions? options = null, Action<string>? notes = null)
     {
         var (r, outer) = Analyze(source, options, notes);
-        return new SectionStiffness(r.TorsionConstant, r.MaxShearPerTorque, source.TemplateSpec ?? Path.GetFileName(source.DxfPath), outer);
+        return Stiffness(source, r, outer);
     }
+
+    /// <summary>
+    /// The shaft's view of a solved section: J, peak shear per unit torque, description, outer size, whether the peak is
+    /// unbounded (a sharp re-entrant corner) and the analysis warnings, each prefixed with the section's name.
+    /// </summary>
+    internal static SectionStiffness Stiffness(SectionSource source, SectionResult r, double? outer) =>
+        new(r.TorsionConstant, r.MaxShearPerTorque, source.TemplateSpec ?? Path.GetFileName(source.DxfPath), outer)
+        {
+            PeakShearUnbounded = double.IsPositiveInfinity(r.EstimatedRelativeError.MaxShear) || r.Warnings.Any(w => w.Code == "sharp-reentrant-corner"),
+            Warnings = r.Warnings.Select(w => new AnalysisWarning(w.Code, $"section '{source.Name}': {w.Message}")).ToList().AsReadOnly(),
+        };
 
     /// <summary>
     /// Builds and analyses one section and returns the full result with the template's outer size (null for a DXF outline),
     /// for callers that keep the solved field (the report's pictures).
     /// </summary>
-    internal static (SectionResult Result, double? OuterSize) Analyze(SectionSource source, AnalysisOptions? options, Action<string>? notes)
+    internal static (SectionResult Result, double? OuterSize) Analyze(SectionSource source, AnalysisOptions? options, Action<string>? notes,
+        IProgress<AnalysisProgress>? progress = null)
     {
         ArgumentNullException.ThrowIfNull(source);
         Geometry.Profile profile;
@@ -53,10 +65,10 @@ public static class ShaftSections
         }
         else throw new SectionTwistException("bad-section", $"{source.Location}: section '{source.Name}' names neither a template nor a DXF file");
 
-        var r = SectionAnalyzer.Analyze(profile, options);
-        notes?.Invoke($"section '{source.Name}' ({source.TemplateSpec ?? Path.GetFileName(source.DxfPath)}): J = {r.TorsionConstant:G5} m^4, " +
-                      $"peak shear per unit torque {r.MaxShearPerTorque:G5} 1/m^3 ({r.Mesh.Elements} elements)");
-        foreach (var w in r.Warnings) notes?.Invoke($"section '{source.Name}': warning: {w.Message}");
+        var r = SectionAnalyzer.Analyze(profile, options, default, progress);
+        // the values and the warnings go into the results (tables, JSON, CSV, report); the note only says what was done
+        notes?.Invoke($"section '{source.Name}' ({source.TemplateSpec ?? Path.GetFileName(source.DxfPath)}): analysed, {r.Mesh.Elements} elements" +
+                      (r.Warnings.Count > 0 ? $", {r.Warnings.Count} warning(s) (listed with the results)" : ""));
         return (r, outer);
     }
 }
