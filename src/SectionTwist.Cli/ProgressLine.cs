@@ -18,14 +18,14 @@ internal sealed class ProgressLine : IDisposable
     private TimeSpan _lastDraw = TimeSpan.Zero;
     private int _width;
 
+    private readonly TimeSpan _delay;
+
     public ProgressLine(CliContext context, string what)
     {
         _err = context.IsTerminal ? context.Err : null;
         _what = what;
+        _delay = context.ProgressDelay;
     }
-
-    /// <summary>Delay before the first draw: quick commands print nothing.</summary>
-    internal static TimeSpan Delay { get; set; } = TimeSpan.FromSeconds(1);
 
     /// <summary>Reports <paramref name="fraction"/> (0..1) of the whole job done, with an optional stage text.</summary>
     public void Report(double fraction, string? stage = null)
@@ -34,7 +34,8 @@ internal sealed class ProgressLine : IDisposable
         lock (_gate)
         {
             var now = _clock.Elapsed;
-            if (now < Delay || now - _lastDraw < TimeSpan.FromMilliseconds(200)) return;
+            // the final state is always drawn; others after the delay and at most five times a second
+            if (fraction < 1 && (now < _delay || now - _lastDraw < TimeSpan.FromMilliseconds(200))) return;
             _lastDraw = now;
             string text = Text(_what, stage, fraction, now);
             _err.Write("\r" + text.PadRight(_width));

@@ -142,7 +142,8 @@ public class SpecParserTests
         return true;
     }
 
-    // A circle built from a formatted diameter in any unit has exactly the area of that diameter.
+    // A circle built from a formatted diameter in any unit has exactly the area of that diameter; a diameter outside
+    // 1 um .. 1 km (e.g. 14000 ft or 0.01 um) is refused with one line naming the key and the range (issue 11).
     [Property(MaxTest = 100)]
     public bool Formatted_length_builds_the_same_profile(PositiveInt mantissa, byte unit)
     {
@@ -151,6 +152,11 @@ public class SpecParserTests
         double d = mantissa.Get % 100000 / 7.0 + 0.01;
         string text = TemplateSpec.Of("circle", [("d", new SpecValue(d, u).ToString())]).ToString();
         double metres = lu.ToMetres(d);
+        if (metres < 1e-6 || metres > 1e3)
+        {
+            var e = Assert.Throws<SectionTwistException>(() => ProfileTemplates.Create(text));
+            return e.Message.Contains("d: ", StringComparison.Ordinal) && e.Message.Contains("1 µm to 1 km", StringComparison.Ordinal);
+        }
         return Tol.RelErr(Math.PI * metres * metres / 4, Area(text)) < 1e-12 && ProfileTemplates.Create(text).Unit == lu;
     }
 }

@@ -53,8 +53,9 @@ public class TemplateCliTests
     {
         var (code, output, err) = Run(true, "sweep", "circle:d=20", "--vary", "d=10mm:30mm:3", "--accuracy", "1e-3", "--json");
         Assert.True(code == 0, err);
-        Assert.Contains("sweep: 3/3 steps done", err, StringComparison.Ordinal); // progress on a terminal, on stderr only
-        Assert.DoesNotContain("steps done", output, StringComparison.Ordinal);
+        Assert.Contains("sweep over 3 steps (3 of 3 done): 100 %", err, StringComparison.Ordinal); // progress on a terminal, on stderr only
+        Assert.DoesNotContain("steps", output.Split('\n')[0], StringComparison.Ordinal);
+        Assert.DoesNotContain("3 of 3 done", output, StringComparison.Ordinal);
         using var doc = JsonDocument.Parse(output);
         var steps = doc.RootElement.GetProperty("steps").EnumerateArray().ToList();
         Assert.Equal(3, steps.Count);
