@@ -36,7 +36,7 @@ internal sealed class InspectCommand : ICommand
 
     internal static void Print(TextWriter w, DxfImportReport r)
     {
-        string G(double v) => v.ToString("G6", CultureInfo.InvariantCulture);
+        string G(double v) => NumberText.Format(v, 6);
         string u = r.Unit?.Symbol ?? "units";
         w.WriteLine($"drawing {r.Source}  ({r.Format} DXF, version {r.Version}{(r.CodePage is null ? "" : ", code page " + r.CodePage)})");
         string unitLine = r.Unit is null
@@ -48,7 +48,9 @@ internal sealed class InspectCommand : ICommand
         if (r.PaperSpaceSkipped > 0) w.WriteLine($"  paper space    {r.PaperSpaceSkipped} entities ignored");
         if (r.SkippedTypes.Count > 0) w.WriteLine($"  skipped types  {string.Join(", ", r.SkippedTypes)}");
         w.WriteLine($"  loops          {r.Loops}");
-        w.WriteLine($"  gaps closed    largest {G(r.LargestGapClosed)} {u} (snap tolerance {G(r.SnapTolerance)} {u})");
+        w.WriteLine(DxfSource.IsRoundOff(r)
+            ? $"  gaps closed    none (end points meet to round-off; snap tolerance {G(r.SnapTolerance)} {u})"
+            : $"  gaps closed    largest {G(r.LargestGapClosed)} {u} (snap tolerance {G(r.SnapTolerance)} {u})");
         if (r.DuplicatesDropped > 0) w.WriteLine($"  duplicates     {r.DuplicatesDropped} dropped");
         if (r.Parts.Count > 0)
         {

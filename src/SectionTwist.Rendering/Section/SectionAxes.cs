@@ -37,8 +37,9 @@ internal static class SectionAxes
     }
 
     /// <summary>
-    /// A bar of a round length (about a fifth of the plot width) in a corner of the plot that the outline does not pass
-    /// through (lower right first), so its backing never hides part of the outline; below the plot when every corner is taken.
+    /// A bar of a round length (about a fifth of the plot width, or a half or a fifth of that) in a corner of the plot that the
+    /// outline does not pass through (lower right first), so its backing never hides part of the outline; above the plot,
+    /// right-aligned, when every corner is taken.
     /// </summary>
     public static void DrawScaleBar(SKCanvas c, SectionLayout L, LengthUnit unit, IReadOnlyList<IReadOnlyList<Point2>> outline)
     {
@@ -47,23 +48,26 @@ internal static class SectionAxes
         double target = 0.2 * r.Width / L.PixelsPerMetre / u;
         double len = NiceScale.NiceNumber(target, true);
         if (len * u * L.PixelsPerMetre > 0.35 * r.Width) len /= 2;
-        float px = (float)(len * u * L.PixelsPerMetre);
         var pixels = outline.Select(loop => loop.Select(L.ToPixel).ToArray()).ToArray();
-        // (x1, y) of the bar's right end; the backing spans x1 - px - 6 .. x1 + 6, y - 22 .. y + 6
-        var corners = new[]
-        {
-            (r.Right - 14, r.Bottom - 14), (r.Left + 14 + px, r.Bottom - 14), (r.Right - 14, r.Top + 30), (r.Left + 14 + px, r.Top + 30),
-        };
-        float x1 = corners[0].Item1, y = corners[0].Item2;
+        float px = 0, x1 = r.Right, y = r.Top - 10;
         bool inside = false;
-        foreach (var (cx, cy) in corners)
+        // a full bar, then half and a fifth of it, in each corner in turn (lower right first)
+        double full = len;
+        foreach (double f in new[] { 1.0, 0.5, 0.2 })
         {
-            var box = new SKRect(cx - px - 8, cy - 24, cx + 8, cy + 8);
-            if (pixels.Any(loop => Crosses(loop, box)) || Inside(pixels, new SKPoint(box.MidX, box.MidY))) continue;
-            (x1, y, inside) = (cx, cy, true);
-            break;
+            double l = f == 1 ? full : NiceScale.NiceNumber(full * f, true);
+            float w = (float)(l * u * L.PixelsPerMetre);
+            foreach (var (cx, cy) in new[] { (r.Right - 14, r.Bottom - 14), (r.Left + 14 + w, r.Bottom - 14), (r.Right - 14, r.Top + 30), (r.Left + 14 + w, r.Top + 30) })
+            {
+                // the backing spans x1 - w - 6 .. x1 + 6, y - 22 .. y + 6; keep 2 px more clear of the outline's stroke
+                var box = new SKRect(cx - w - 8, cy - 24, cx + 8, cy + 8);
+                if (pixels.Any(loop => Crosses(loop, box)) || Inside(pixels, new SKPoint(box.MidX, box.MidY))) continue;
+                (px, x1, y, inside, len) = (w, cx, cy, true, l);
+                break;
+            }
+            if (inside) break;
         }
-        if (!inside) { x1 = r.Right; y = L.Height - 6; } // under the plot, right of the axis title
+        if (!inside) px = (float)(len * u * L.PixelsPerMetre); // above the plot, right-aligned: clear of the outline and the title
         float x0 = x1 - px;
         if (inside)
             using (var bg = Ink.Fill(new SKColor(255, 255, 255, 200)))

@@ -285,8 +285,9 @@ public static class SectionPicture
         using (var frame = Ink.Stroke(Ink.Text, 1f)) c.DrawRect(r, frame);
         int every = bands > 12 ? 2 : 1;
         using var tick = Ink.Stroke(Ink.Text, 1f);
-        for (int k = 0; k <= bands; k += every)
+        for (int k = 0; k <= bands; k++)
         {
+            if (k % every != 0 && k != bands) continue; // the top tick is always labelled
             float y = r.Bottom - k * h;
             c.DrawLine(r.Right, y, r.Right + 4, y, tick);
             Ink.Label(c, NiceScale.Format(k * width, width), r.Right + 7, y + 4, 11, Ink.Text);

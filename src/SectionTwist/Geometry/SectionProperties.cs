@@ -23,7 +23,7 @@ public sealed record SectionProperties(double Area, Point2 Centroid, double Ixx,
     /// Angle from the x axis to the principal axis about which the second moment is <see cref="I1"/>, radians, in
     /// (-pi/2, pi/2]; 0 when <see cref="HasPrincipalAxes"/> is false (every centroidal axis is then principal).
     /// </summary>
-    public double PrincipalAngle => HasPrincipalAxes ? 0.5 * Math.Atan2(-2 * Ixy, Ixx - Iyy) : 0;
+    public double PrincipalAngle => HasPrincipalAxes ? 0.5 * Math.Atan2(0.0 - 2 * Ixy, Ixx - Iyy) : 0; // 0.0 - x: no -0, so pi/2 not -pi/2
 
     /// <summary>
     /// False when I1 = I2 to the accuracy of the computation (a circle, a square, a regular polygon, ...): then no axis is

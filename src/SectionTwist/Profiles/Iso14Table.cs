@@ -2,7 +2,7 @@ namespace SectionTwist.Profiles;
 
 /// <summary>
 /// Straight-sided splines, ISO 14: N x d x D with tooth width B, mm, light and medium series. Rows marked in
-/// shared/REFERENCES.md are confirmed there; the others are from memory of the standard (marked <c>Memory</c>).
+/// docs/references.md are confirmed there; the others are from memory of the standard (marked <c>Memory</c>).
 /// </summary>
 internal static class Iso14Table
 {

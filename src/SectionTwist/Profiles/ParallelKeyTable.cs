@@ -1,7 +1,7 @@
 namespace SectionTwist.Profiles;
 
 /// <summary>
-/// Parallel keys and shaft keyseats by shaft diameter, DIN 6885-1 / ISO 773 (as listed in shared/REFERENCES.md):
+/// Parallel keys and shaft keyseats by shaft diameter, DIN 6885-1 / ISO 773 (as listed in docs/references.md):
 /// for shaft diameters over <see cref="Row.Over"/> up to <see cref="Row.UpTo"/> mm, key width b, key height h and
 /// shaft keyseat depth t1, all mm.
 /// </summary>

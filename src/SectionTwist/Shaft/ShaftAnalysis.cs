@@ -113,10 +113,10 @@ internal sealed class ShaftAnalysis(ShaftModel model)
             .Concat(layout.Elements.Where(e => e.Distributed != 0)
                 .Select(e => (What: $"distributed torque on {layout.Stations[e.A].Name}-{layout.Stations[e.B].Name}", T: e.Distributed * e.Length)))
             .ToArray();
-        string list = string.Join(", ", contributions.Select(c => $"{c.What} {ShaftLayout.Num(c.T)} N*m"));
+        string list = string.Join(", ", contributions.Select(c => $"{c.What} {ShaftLayout.Num(c.T)} N·m"));
         throw new SectionTwistException("loose-shaft",
-            $"loose shaft: there is no fixed support and the applied torques do not balance: net torque {ShaftLayout.Num(net)} N*m about the axis ({list}); " +
-            $"add a fixed support where the torque is reacted (for example the drum, brake or motor station), or add the missing balancing torque of {ShaftLayout.Num(-net)} N*m");
+            $"loose shaft: there is no fixed support and the applied torques do not balance: net torque {ShaftLayout.Num(net)} N·m about the axis ({list}); " +
+            $"add a fixed support where the torque is reacted (for example the drum, brake or motor station), or add the missing balancing torque of {ShaftLayout.Num(-net)} N·m");
     }
 
     private static double[] SolveReduced(ShaftLayout layout, double[] k, double[] f, int n, int[] constrained)

@@ -42,8 +42,8 @@ public static class NumberText
     }
 
     /// <summary>
-    /// Always the exponent form, <paramref name="digits"/> significant digits: <c>2.8E-10</c>, <c>1.2E+04</c>, <c>1E+00</c>
-    /// (trailing zeros of the mantissa dropped). For error estimates and tolerances.
+    /// Always the exponent form, <paramref name="digits"/> significant digits: <c>2.8E-10</c>, <c>1.2E+04</c>, <c>9.0E-04</c>,
+    /// <c>1E-06</c> for one digit. For error estimates and tolerances.
     /// </summary>
     public static string Exponent(double value, int digits = 2)
     {
@@ -54,7 +54,6 @@ public static class NumberText
         string s = value.ToString("E" + (digits - 1).ToString(Inv), Inv); // e.g. 2.80E-010
         int e = s.IndexOf('E', StringComparison.Ordinal);
         string mantissa = s[..e];
-        if (mantissa.Contains('.', StringComparison.Ordinal)) mantissa = mantissa.TrimEnd('0').TrimEnd('.');
         int exp = int.Parse(s[(e + 1)..], NumberStyles.AllowLeadingSign, Inv);
         return $"{mantissa}E{(exp < 0 ? '-' : '+')}{Math.Abs(exp).ToString("00", Inv)}";
     }

@@ -64,7 +64,7 @@ public class TemplateTorsionTests
         Tol.Rel(2 * c * Math.Pow(r, 4), J(spec), 0.02, Roark);
     }
 
-    /// <summary>EN 10210-2 / EN 10219-2 torsion constant formula for a rectangular hollow section (shared/REFERENCES.md).</summary>
+    /// <summary>EN 10210-2 / EN 10219-2 torsion constant formula for a rectangular hollow section (docs/references.md).</summary>
     private static double En10210It(double b, double h, double t, double ro, double ri)
     {
         double rc = (ro + ri) / 2;
@@ -74,7 +74,7 @@ public class TemplateTorsionTests
         return t * t * t * p / 3 + 2 * k * ah;
     }
 
-    // EN 10210-2 tabulated It (cm^4): 40x2.6: 14.0; 60x4: 72.5; 80x5: 217 (REFERENCES.md). The formula reproduces
+    // EN 10210-2 tabulated It (cm^4): 40x2.6: 14.0; 60x4: 72.5; 80x5: 217 (docs/references.md). The formula reproduces
     // them (rounding of the table: 1 %); the exact Saint-Venant J of the rounded section is 2-3 % above the formula,
     // so the FE value is compared with the formula within 3 % (the standard's formula is itself approximate).
     [Theory]
@@ -92,7 +92,7 @@ public class TemplateTorsionTests
         Assert.True(j >= formula * 0.995, $"exact J {j:G5} should not fall below the thin-wall formula {formula:G5}");
     }
 
-    /// <summary>Rectangle a x b (a >= b): beta from the series of Timoshenko and Goodier, ch. 10 (REFERENCES.md).</summary>
+    /// <summary>Rectangle a x b (a >= b): beta from the series of Timoshenko and Goodier, ch. 10 (docs/references.md).</summary>
     private static double RectangleJ(double a, double b)
     {
         double sum = 0;

@@ -38,7 +38,7 @@ public sealed class ShaftCommandTests : IDisposable
         var (code, _, err) = Run("shaft", Write(ShaftFileTests.Good.Replace("supports: {fixed: [A]}", "supports: free", StringComparison.Ordinal)));
         Assert.Equal(2, code);
         Assert.Contains("design.yaml: loose shaft", err, StringComparison.Ordinal);
-        Assert.Contains("net torque 100 N*m", err, StringComparison.Ordinal);
+        Assert.Contains("net torque 100 N·m", err, StringComparison.Ordinal);
     }
 
     [Fact]

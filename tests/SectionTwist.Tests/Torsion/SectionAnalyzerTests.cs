@@ -84,7 +84,7 @@ public class SectionAnalyzerTests
     [Fact]
     public void Rectangle_series_reproduces_published_table()
     {
-        // Roark 7th ed. Table 10.1 / REFERENCES.md: beta and alpha to 4 decimals; beta(1) = 0.140577, alpha(1) = 0.208165.
+        // Roark 7th ed. Table 10.1 / docs/references.md: beta and alpha to 4 decimals; beta(1) = 0.140577, alpha(1) = 0.208165.
         (double Ratio, double Beta, double Alpha)[] table = [(1, 0.1406, 0.2082), (1.5, 0.1958, 0.2310), (2, 0.2287, 0.2459), (3, 0.2633, 0.2672), (4, 0.2808, 0.2817), (10, 0.3123, 0.3123)];
         foreach (var (ratio, beta, alpha) in table)
         {
