@@ -22,6 +22,24 @@ public sealed record SectionStiffness(double TorsionConstant, double ShearPerTor
     public IReadOnlyList<Torsion.AnalysisWarning> Warnings { get; init; } = [];
 
     /// <summary>
+    /// The values of an analysed section: J and peak shear per unit torque, whether the peak is unbounded (a sharp
+    /// re-entrant corner: infinite estimated error of the peak) and the analysis warnings, prefixed with
+    /// <paramref name="description"/> when one is given.
+    /// </summary>
+    /// <param name="result">The section analysis.</param>
+    /// <param name="description">Text for tables, e.g. <c>keyed d=40 mm</c>; also names the section in its warnings.</param>
+    /// <param name="outerDiameter">Outer diameter for drawings, m, or null.</param>
+    public static SectionStiffness FromAnalysis(Torsion.SectionResult result, string? description = null, double? outerDiameter = null)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        return new(result.TorsionConstant, result.MaxShearPerTorque, description, outerDiameter)
+        {
+            PeakShearUnbounded = double.IsPositiveInfinity(result.EstimatedRelativeError.MaxShear) || result.Warnings.Any(w => w.Code == "sharp-reentrant-corner"),
+            Warnings = result.Warnings.Select(w => description is null ? w : new Torsion.AnalysisWarning(w.Code, $"section '{description}': {w.Message}")).ToList().AsReadOnly(),
+        };
+    }
+
+    /// <summary>
     /// Exact values for a solid round of diameter <paramref name="diameter"/> (m): J = pi d^4 / 32, tau = 16 T / (pi d^3)
     /// (Timoshenko and Goodier, Theory of Elasticity, ch. 10).
     /// </summary>

@@ -31,11 +31,7 @@ public static class ShaftSections
     /// unbounded (a sharp re-entrant corner) and the analysis warnings, each prefixed with the section's name.
     /// </summary>
     internal static SectionStiffness Stiffness(SectionSource source, SectionResult r, double? outer) =>
-        new(r.TorsionConstant, r.MaxShearPerTorque, source.TemplateSpec ?? Path.GetFileName(source.DxfPath), outer)
-        {
-            PeakShearUnbounded = double.IsPositiveInfinity(r.EstimatedRelativeError.MaxShear) || r.Warnings.Any(w => w.Code == "sharp-reentrant-corner"),
-            Warnings = r.Warnings.Select(w => new AnalysisWarning(w.Code, $"section '{source.Name}': {w.Message}")).ToList().AsReadOnly(),
-        };
+        SectionStiffness.FromAnalysis(r, source.Name, outer) with { Description = source.TemplateSpec ?? Path.GetFileName(source.DxfPath) };
 
     /// <summary>
     /// Builds and analyses one section and returns the full result with the template's outer size (null for a DXF outline),

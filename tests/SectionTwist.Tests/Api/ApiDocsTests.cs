@@ -3,6 +3,7 @@ using SectionTwist.Geometry;
 using SectionTwist.Import.Dxf;
 using SectionTwist.Profiles;
 using SectionTwist.Torsion;
+using SectionTwist.Units;
 using SectionTwist.Verification;
 
 namespace SectionTwist.Tests.Api;
@@ -144,6 +145,25 @@ public partial class ApiDocsTests
         Tol.Rel(t, Math.Abs(res.Reactions[0].Torque), 1e-9);
         // tau in the journal = 16 T / (pi d^3) (exact)
         Tol.Rel(16 * t / (Math.PI * Math.Pow(0.030, 3)), res.Segments[0].MaxShear, 1e-9);
+    }
+
+    [Fact]
+    public void Shaft_summary_in_US_units_converts_the_torque_and_flags_the_sharp_keyseat()
+    {
+        // T = P / omega = 2200 W / (90 rpm) = 233.4 N*m; 1 lbf*in = 4.4482216152605 N x 0.0254 m exactly (the international
+        // pound-force and inch), so T = 2066 lbf*in. The keyed body (keyed:d=40, no floor radius) has a sharp re-entrant
+        // corner: its peak shear is unbounded (Timoshenko and Goodier, sec. 113; docs/references.md), so the summary says so.
+        var res = ApiExamples.TwoStepShaft();
+        string s = ApiExamples.ShaftSummary(res, UnitSystem.US);
+        double lbfIn = 2200 / (90 * 2 * Math.PI / 60) / (4.4482216152605 * 0.0254);
+        Assert.Contains($"T = {NumberText.Format(Math.Sign(res.Segments[0].InternalTorque) * lbfIn, 5)} lbf·in", s, StringComparison.Ordinal);
+        Assert.Contains("psi", s, StringComparison.Ordinal);
+        Assert.Contains("deg/ft", s, StringComparison.Ordinal);
+        Assert.Contains("peak shear unbounded", s, StringComparison.Ordinal);
+        Assert.Contains("check unbounded", s, StringComparison.Ordinal);
+        Assert.Contains("warning [sharp-reentrant-corner]: section 'keyed d=40 mm'", s, StringComparison.Ordinal);
+        Assert.Contains("warning [unbounded-peak-shear]", s, StringComparison.Ordinal);
+        Assert.Null(res.Segments[1].SafetyFactor);
     }
 
     [Fact]
