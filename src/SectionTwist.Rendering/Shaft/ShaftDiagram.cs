@@ -115,22 +115,55 @@ public static class ShaftDiagram
             float x = L.ToPixelX(0.5 * (s.From + s.To));
             if (Math.Abs(t1 - t0) <= 1e-9 * Math.Max(Math.Abs(t0), Math.Abs(t1)))
             {
-                // constant torque: beside the horizontal line, on the side away from the shaded area
-                float y = p.ToPixelY(tm) + (tm >= 0 ? -6 : 15);
-                y = Math.Clamp(y, p.Rect.Top + 12, p.Rect.Bottom - 4);
-                Ink.Label(c, ShaftSchematic.Signed(tm), x, y, 11, TorqueColour, SKTextAlign.Center);
+                Ink.Label(c, ShaftSchematic.Signed(tm), x, FlatLabelY(p.ToPixelY(tm), tm >= 0, p.Rect), 11, TorqueColour, SKTextAlign.Center);
             }
             else
             {
-                // a sloped line would strike through a label at its middle: put the value (at mid-length) inside the shaded
-                // area, halfway between the line and zero, on a white box
-                float y = 0.5f * (p.ToPixelY(tm) + p.ToPixelY(0)) + 4;
-                y = Math.Clamp(y, p.Rect.Top + 14, p.Rect.Bottom - 4);
-                float xl = L.ToPixelX(Math.Abs(t0) > Math.Abs(t1) ? s.From + 0.3 * (s.To - s.From) : s.From + 0.7 * (s.To - s.From));
-                Ink.BoxedLabel(c, ShaftSchematic.Signed(tm), xl, y, 11, TorqueColour, SKTextAlign.Center);
+                // a sloped line would strike through a label at its middle: the value (at mid-length) goes on a white box
+                // beside the line, halfway between its middle and zero
+                string text = ShaftSchematic.Signed(tm);
+                var box = SlopedLabelBox(new SKPoint(L.ToPixelX(s.From), p.ToPixelY(t0)), new SKPoint(L.ToPixelX(s.To), p.ToPixelY(t1)),
+                    p.ToPixelY(0), Ink.Width(text, 11), 11);
+                Ink.BoxedLabel(c, text, box.MidX, box.Top + 11, 11, TorqueColour, SKTextAlign.Center);
             }
         }
     }
+
+    /// <summary>
+    /// Where the label of a sloped line from <paramref name="a"/> to <paramref name="b"/> goes: centred halfway between the
+    /// line's middle and the zero line, horizontally clear of the line over the label's whole height, inside the shaded
+    /// area (the side of the end further from zero) when it fits between the segment's ends, else on the other side.
+    /// Returns the label's box as <see cref="Ink.BoxedLabel"/> draws it (4 px padding).
+    /// </summary>
+    internal static SKRect SlopedLabelBox(SKPoint a, SKPoint b, float yZero, float textWidth, float size)
+    {
+        float y = 0.5f * (0.5f * (a.Y + b.Y) + yZero);
+        float top = y - 0.5f * (1.35f * size) - 3, bottom = y + 0.5f * (1.35f * size) + 3; // the box's height and 3 px air
+        float XAt(float yy) => Math.Abs(b.Y - a.Y) < 1e-6f ? 0.5f * (a.X + b.X) : a.X + Math.Clamp((yy - a.Y) / (b.Y - a.Y), 0, 1) * (b.X - a.X);
+        float lo = Math.Min(XAt(top), XAt(bottom)), hi = Math.Max(XAt(top), XAt(bottom));
+        float half = 0.5f * textWidth + 4, gap = 4;
+        bool areaLeft = Math.Abs(a.Y - yZero) > Math.Abs(b.Y - yZero);
+        float left = lo - gap - half, right = hi + gap + half;
+        float inside = areaLeft ? left : right, outside = areaLeft ? right : left;
+        bool fits = inside - half >= Math.Min(a.X, b.X) && inside + half <= Math.Max(a.X, b.X);
+        float cx = fits ? inside : outside;
+        float h = 1.35f * size;
+        return new SKRect(cx - half, y - 0.5f * h, cx + half, y + 0.5f * h);
+    }
+
+    /// <summary>
+    /// The baseline of the label of a horizontal torque line at <paramref name="y"/>: on the side away from the shaded area
+    /// (above a positive torque, below a negative one) when the panel has room there, else on the other side; never on the line.
+    /// </summary>
+    internal static float FlatLabelY(float y, bool positive, SKRect panel)
+    {
+        float above = y - 6, below = y + 15; // 11 px text: its box is [baseline - 9, baseline + 3]
+        bool aboveFits = above - 9 >= panel.Top + 2, belowFits = below + 3 <= panel.Bottom - 2;
+        return positive ? (aboveFits || !belowFits ? above : below) : (belowFits || !aboveFits ? below : above);
+    }
+
+    /// <summary>The baseline of a station's rotation label: above the point, or below it near the panel's top edge (clear of the panel title).</summary>
+    internal static float RotationLabelY(float y, SKRect panel) => y - 7 < panel.Top + 12 ? y + 15 : y - 7;
 
     private static void DrawRotation(SKCanvas c, ShaftDiagramData d, ShaftDiagramLayout L, ShaftPanel p)
     {
@@ -142,9 +175,7 @@ public static class ShaftDiagram
         {
             float x = L.ToPixelX(q.X), y = p.ToPixelY(q.Y);
             c.DrawCircle(x, y, 3.5f, dot);
-            // above the point, or below it near the panel's top edge (clear of the panel title over the frame)
-            float ly = y - 7 < p.Rect.Top + 12 ? y + 15 : y - 7;
-            Ink.Label(c, NumberText.Format(q.Y, 3) + "°", x + 5, ly, 10, RotationColour);
+            Ink.Label(c, NumberText.Format(q.Y, 3) + "°", x + 5, RotationLabelY(y, p.Rect), 10, RotationColour);
         }
     }
 

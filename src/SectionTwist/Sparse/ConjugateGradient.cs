@@ -45,7 +45,7 @@ internal static class ConjugateGradient
             double trueRes = Math.Sqrt(Dot(r, r));
             if (trueRes <= target) break;
             if (it >= maxIterations)
-                throw new InvalidOperationException($"conjugate gradients did not reach {tolerance:E1} in {maxIterations} iterations (residual {trueRes / nb:E2})");
+                throw new InvalidOperationException($"conjugate gradients did not reach {Units.NumberText.Exponent(tolerance)} in {maxIterations} iterations (residual {Units.NumberText.Exponent(trueRes / nb, 3)})");
         }
         xx.AsSpan().CopyTo(x);
         return it;
