@@ -116,6 +116,28 @@ public sealed class JsonSchemaTests : IDisposable
     }
 
     [Fact]
+    public void Shaft_json_with_an_unbounded_peak_and_warnings_matches_its_schema()
+    {
+        // A sharp keyseat (keyed:d=50, no floor radius) in a loaded segment: maxShear and safetyFactor null, warnings present.
+        string yaml = """
+            units: {length: mm, torque: N*m}
+            stations:
+              - {name: A, at: 0}
+              - {name: B, at: 100}
+            segments:
+              - {from: A, to: B, section: {template: "keyed:d=50"}, material: steel-1045-cd}
+            loads:
+              - {at: B, torque: 300}
+            supports: {fixed: [A]}
+            """;
+        string path = Path.Combine(_dir, "sharp.yaml");
+        File.WriteAllText(path, yaml);
+        var n = ValidOutput("shaft", "shaft", path, "--json");
+        Assert.Null(n["segments"]![0]!["maxShear"]);
+        Assert.NotEmpty(n["warnings"]!.AsArray());
+    }
+
+    [Fact]
     public void A_schema_rejects_output_that_breaks_it()
     {
         // The validator itself must reject: a missing required field and an unknown extra field.
