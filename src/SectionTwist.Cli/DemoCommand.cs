@@ -42,7 +42,7 @@ internal sealed class DemoCommand : ICommand
 
         var clock = Stopwatch.StartNew();
         // the verification cases run beside the section analyses (both are single-threaded for these sizes)
-        var verifying = Task.Run(() => VerificationSuite.Run());
+        var verifying = Task.Run(() => VerificationSuite.Run(context.Analysis(), context.Cancellation));
         ShaftDocument doc;
         ShaftResult result;
         IReadOnlyList<VerificationOutcome> verification;
@@ -50,7 +50,10 @@ internal sealed class DemoCommand : ICommand
         ShaftSectionCatalog sections;
         using (var progress = new ProgressLine(context, "demo"))
         {
-            sections = new ShaftSectionCatalog(notes: context.Err.WriteLine) { Progress = (name, p) => progress.Report(0.8 * p.Fraction, $"section '{name}': {p.Stage}") };
+            sections = new ShaftSectionCatalog(context.Analysis(), context.Err.WriteLine, context.Cancellation)
+            {
+                Progress = (name, p) => progress.Report(0.8 * p.Fraction, $"section '{name}': {p.Stage}"),
+            };
             doc = ShaftFile.Parse(ReadDemoFile(), "winch-shaft.yaml", resolver: sections.Resolver);
             if (units is not null) doc = doc with { Units = units };
             result = ShaftSolver.Solve(doc.Model);

@@ -29,7 +29,7 @@ internal sealed class InspectCommand : ICommand
         };
         if (args.Positional.Count != 1) throw new UsageException("give one DXF drawing");
         args.EnsureAllUsed();
-        var r = DxfProfiles.Inspect(args.Positional[0], options);
+        var r = DxfProfiles.Inspect(args.Positional[0], options, ctx.Cancellation);
         Print(ctx.Out, r);
         return r.Problem is null ? 0 : 1;
     }

@@ -10,7 +10,7 @@ internal sealed class SectionCommand : ICommand
     public string Name => "section";
     public string Summary => "torsion constant J, peak shear per torque and area properties of a cross-section";
     public string Usage => """
-        sectiontwist section SOURCE [--accuracy REL] [--unit U] [--units SYSTEM] [--layer NAME] [--part N] [--json] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR]
+        sectiontwist section SOURCE [--accuracy REL] [--unit U] [--units SYSTEM] [--layer NAME] [--part N] [--json] [--warping] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR]
           SOURCE      a template spec such as circle:d=40, keyed:d=40, rect:b=60,h=20, a drawing file (.dxf),
                       a point list (.csv, .pts) or anything a plugin reads
           --accuracy  requested relative accuracy of J (default 1e-4)
@@ -18,6 +18,8 @@ internal sealed class SectionCommand : ICommand
           --units     units of the table and the plot: SI-mm, SI-m or US (default: the input's own, e.g. US for inches)
           --layer     use only this drawing layer;  --part N  use only the N-th separate part (largest first)
           --json      print one JSON object in SI base units (m, m^2, m^4, 1/m^3); --units does not change it
+          --warping   also solve the warping function: shear centre, warping constant Iw, largest sectorial
+                      coordinate, warping length for steel and whether restrained warping matters
           --plot      write a shear-stress contour picture (PNG or SVG)
           --torque    torque for the plot colour bar, in N*m, or with a unit: 250Nm, 2kN*m, 1800lbf*in (default: stress per unit torque)
           --dxf       write the outline (layer PROFILE) and stress-function contours (layer PHI) to a DXF file for CAD
@@ -32,6 +34,7 @@ internal sealed class SectionCommand : ICommand
     public int Run(Args args, CliContext ctx)
     {
         bool json = args.Flag("json");
+        bool warping = args.Flag("warping");
         double accuracy = args.Double("accuracy") ?? 1e-4;
         if (!(accuracy > 0 && accuracy < 0.5)) throw new UsageException("--accuracy must lie between 0 and 0.5, e.g. 1e-4");
         var unitText = args.Option("unit");
@@ -42,6 +45,7 @@ internal sealed class SectionCommand : ICommand
             Part = args.Int("part"),
             Accuracy = accuracy,
             Notes = json ? null : note => ctx.Err.WriteLine($"note: {note}"),
+            Cancellation = ctx.Cancellation,
         };
         string? plot = args.Option("plot");
         double? torque = TorqueOption(args.Option("torque"));
@@ -58,7 +62,7 @@ internal sealed class SectionCommand : ICommand
         var profile = ProfileSources.Load(source, srcOptions);
         SectionResult result;
         using (var progress = new ProgressLine(ctx, $"section {source}"))
-            result = SectionAnalyzer.Analyze(profile, new AnalysisOptions { Accuracy = accuracy }, default, progress.Analysis("analysis"));
+            result = SectionAnalyzer.Analyze(profile, ctx.Analysis(accuracy) with { Warping = warping }, ctx.Cancellation, progress.Analysis("analysis"));
         if (plot is not null) SectionPlotHook.Write(result, plot, torque, SectionPlotHook.Title(source, srcOptions.Part), units);
         if (dxf is not null) SectionDxfExport.Write(result, dxf, dxfMesh);
         if (json) ctx.Out.WriteLine(SectionJson.Write(result, source));

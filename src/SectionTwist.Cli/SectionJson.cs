@@ -47,6 +47,24 @@ internal static class SectionJson
         w.WriteStartArray("regionTorsionConstants");
         foreach (var j in r.RegionTorsionConstants) w.WriteNumberValue(j);
         w.WriteEndArray();
+        if (r.Warping is { } wr)
+        {
+            Pt(w, "shearCentre", wr.ShearCentre);
+            Num(w, "warpingConstant", wr.WarpingConstant);
+            Num(w, "maxSectorialCoordinate", wr.MaxSectorialCoordinate);
+            w.WriteStartObject("warping");
+            Pt(w, "maxSectorialCoordinateLocation", wr.MaxSectorialCoordinateLocation);
+            Num(w, "torsionConstantUpperBound", wr.TorsionConstantUpperBound);
+            Num(w, "warpingRatio", wr.WarpingRatio);
+            w.WriteString("classification", wr.Classification == Warping.WarpingClass.WarpingSensitive ? "warping-sensitive" : "warping-negligible");
+            Num(w, "steelWarpingLength", wr.SteelWarpingLength);
+            w.WriteStartObject("estimatedError");
+            Num(w, "shearCentre", wr.EstimatedError.ShearCentre);
+            Num(w, "warpingConstant", wr.EstimatedError.WarpingConstant);
+            Num(w, "maxSectorialCoordinate", wr.EstimatedError.MaxSectorialCoordinate);
+            w.WriteEndObject();
+            w.WriteEndObject();
+        }
         w.WriteStartObject("mesh");
         w.WriteNumber("nodes", r.Mesh.Nodes);
         w.WriteNumber("elements", r.Mesh.Elements);

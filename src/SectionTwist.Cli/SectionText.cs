@@ -34,7 +34,26 @@ internal static class SectionText
         if (r.RegionTorsionConstants.Count > 1)
             for (int i = 0; i < r.RegionTorsionConstants.Count; i++)
                 w.WriteLine($"  J of part {i + 1,-3}             {I(r.RegionTorsionConstants[i]),14} {u.SecondMoment.Symbol}");
+        if (r.Warping is { } wr) WriteWarping(w, u, wr);
         w.WriteLine($"  mesh                      {r.Mesh.Nodes} nodes, {r.Mesh.Elements} quadratic triangles, min angle {NumberText.Fixed(r.Mesh.MinAngleDeg, 1)} deg");
         foreach (var warn in r.Warnings) w.WriteLine($"  warning [{warn.Code}]: {warn.Message}");
+        }
+
+    private static void WriteWarping(TextWriter w, UnitSystem u, Warping.WarpingResult wr)
+    {
+        string L(double m) => u.Length.Format(m, 6);
+        string E(double v, DisplayUnit unit) => double.IsNaN(v) ? "n/a" : $"{NumberText.Exponent(unit.FromSi(v), 2)} {unit.Symbol}";
+        var e = wr.EstimatedError;
+        w.WriteLine($"  shear centre (x, y)       ({L(wr.ShearCentre.X)}, {L(wr.ShearCentre.Y)}) {u.Length.Symbol}   est. error {E(e.ShearCentre, u.Length)}");
+        w.WriteLine($"  warping constant Iw       {u.WarpingConstant.Format(wr.WarpingConstant, 6),14} {u.WarpingConstant.Symbol}   est. error {E(e.WarpingConstant, u.WarpingConstant)} (about the shear centre)");
+        w.WriteLine($"  max |sectorial coord.|    {u.Area.Format(wr.MaxSectorialCoordinate, 6),14} {u.Area.Symbol} at ({L(wr.MaxSectorialCoordinateLocation.X)}, {L(wr.MaxSectorialCoordinateLocation.Y)}) {u.Length.Symbol}   est. error {E(e.MaxSectorialCoordinate, u.Area)}");
+        w.WriteLine($"  J from warping function   {u.SecondMoment.Format(wr.TorsionConstantUpperBound, 6),14} {u.SecondMoment.Symbol} (upper bound; the J above is the lower-bound solve, extrapolated)");
+        w.WriteLine($"  warping length a (steel)  {u.Length.Format(wr.SteelWarpingLength, 6),14} {u.Length.Symbol}   a = sqrt(E Iw / (G J)), E/G = 2.6");
+        string verdict = wr.Classification == Warping.WarpingClass.WarpingSensitive
+            ? "open thin-walled: restrained warping at supports and loads changes twist and adds normal stress; T L / (G J) alone can be far off"
+            : "solid or closed: warping torsion negligible, Saint-Venant torsion applies";
+        w.WriteLine($"  warping ratio Iw/(J rp^2) {NumberText.Format(wr.WarpingRatio, 6),14}   {verdict}");
+        if (wr.Classification == Warping.WarpingClass.WarpingSensitive)
+            w.WriteLine("  caution: lateral-torsional buckling, local buckling and connection design are not checked; follow the local steel design code");
     }
 }

@@ -32,7 +32,7 @@ internal sealed class ShaftCommand : ICommand
         "  reactions, the governing segment and the warnings.\n" +
         "  --units SYS   units of the tables, CSV files and report: SI-mm, SI-m or US (default: the file's own 'units' block)\n" +
         "  --json        print the result as JSON in SI base units (m, N*m, Pa, rad) instead of tables; --units does not change it\n" +
-        "  --csv DIR     also write DIR/stations.csv, DIR/segments.csv and DIR/warnings.csv\n" +
+        "  --csv DIR     also write DIR/stations.csv, DIR/segments.csv and DIR/warnings.csv, and DIR/bending.csv with a 'bending' block\n" +
         "  --report OUT  also write one self-contained HTML report (inputs, tables, pictures, verification, method)\n" +
         "  Exceeded limits and unbounded peaks (sharp corners) are flagged in the 'check' column, not errors; the exit code is\n" +
         "  0 when the shaft solved, 2 for bad input.";
@@ -50,12 +50,15 @@ internal sealed class ShaftCommand : ICommand
         if (csv is not null) OutputPaths.PrepareFolder(csv, "--csv");
 
         // the report's verification cases run beside the section analyses
-        var verifying = report is null ? null : Task.Run(() => VerificationSuite.Run());
+        var verifying = report is null ? null : Task.Run(() => VerificationSuite.Run(context.Analysis(), context.Cancellation));
         ShaftDocument doc;
         ShaftSectionCatalog sections;
         using (var progress = new ProgressLine(context, $"shaft {Path.GetFileName(path)}"))
         {
-            sections = new ShaftSectionCatalog(notes: context.Err.WriteLine) { Progress = (name, p) => progress.Report(p.Fraction, $"section '{name}': {p.Stage}") };
+            sections = new ShaftSectionCatalog(context.Analysis(), context.Err.WriteLine, context.Cancellation)
+            {
+                Progress = (name, p) => progress.Report(p.Fraction, $"section '{name}': {p.Stage}"),
+            };
             doc = ShaftFile.Load(path, SectionResolver ?? sections.Resolver);
         }
         if (units is not null) doc = doc with { Units = units };
@@ -63,7 +66,8 @@ internal sealed class ShaftCommand : ICommand
         try { result = ShaftSolver.Solve(doc.Model); }
         catch (SectionTwistException e) { throw new SectionTwistException(e.Code, $"{Path.GetFileName(path)}: {e.Message}", e); }
 
-        if (csv is not null) ShaftResultCsv.WriteAll(result, csv, doc.Units);
+        context.Cancellation.ThrowIfCancellationRequested();
+        var csvFiles = csv is null ? [] : ShaftResultCsv.WriteAll(result, csv, doc.Units);
         if (report is not null)
         {
             IReadOnlyList<Verification.VerificationOutcome> outcomes;
@@ -77,7 +81,7 @@ internal sealed class ShaftCommand : ICommand
         }
         if (json) context.Out.WriteLine(ShaftResultJson.Write(result, path));
         else PrintTables(context.Out, doc, result, path);
-        if (csv is not null) context.Err.WriteLine($"wrote {string.Join(", ", ShaftResultCsv.FileNames.Select(f => Path.Combine(csv, f)))}");
+        if (csv is not null) context.Err.WriteLine($"wrote {string.Join(", ", csvFiles)}");
         return 0;
     }
 
@@ -146,12 +150,18 @@ internal sealed class ShaftCommand : ICommand
             foreach (var x in r.Warnings) w.WriteLine($"  warning [{x.Code}]: {x.Message}");
         }
         w.WriteLine();
+        if (r.Bending is { } bending)
+        {
+            BendingTables.Print(w, u, bending, doc.Model.Bending!.Rotating);
+            w.WriteLine();
+        }
+        ShaftWarpingText.Write(w, doc, r);
         w.WriteLine(Caution);
     }
 
     private static double Deg(double rad) => rad * 180 / Math.PI;
 
-    private static void Table(TextWriter w, List<string[]> rows)
+    internal static void Table(TextWriter w, List<string[]> rows)
     {
         int cols = rows[0].Length;
         var width = new int[cols];

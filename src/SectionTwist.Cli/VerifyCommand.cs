@@ -26,7 +26,7 @@ internal sealed class VerifyCommand : ICommand
         if (!(accuracy > 0 && accuracy < 0.5)) throw new UsageException("--accuracy must lie between 0 and 0.5, e.g. 1e-4");
         IReadOnlyList<VerificationOutcome> outcomes;
         using (var progress = new ProgressLine(ctx, "verify"))
-            outcomes = VerificationSuite.RunReporting(new AnalysisOptions { Accuracy = accuracy }, new Sink(f => progress.Report(f, "cases")));
+            outcomes = VerificationSuite.RunReporting(ctx.Analysis(accuracy), new Sink(f => progress.Report(f, "cases")), ctx.Cancellation);
         int failed = outcomes.Count(o => !o.Passed);
         if (json) ctx.Out.WriteLine(WriteJson(outcomes, accuracy));
         else WriteTable(ctx.Out, outcomes, failed);

@@ -14,15 +14,18 @@ public sealed class ShaftSectionCatalog
 {
     private readonly AnalysisOptions? _options;
     private readonly Action<string>? _notes;
+    private readonly CancellationToken _ct;
     private readonly List<AnalysedSection> _sections = [];
 
     /// <summary>Creates an empty catalog.</summary>
     /// <param name="options">Section analysis options; null for the defaults.</param>
     /// <param name="notes">Receives one line per section analysed (the warnings travel with the results); may be null.</param>
-    public ShaftSectionCatalog(AnalysisOptions? options = null, Action<string>? notes = null)
+    /// <param name="cancellationToken">Stops the reading and analysis of the sections.</param>
+    public ShaftSectionCatalog(AnalysisOptions? options = null, Action<string>? notes = null, CancellationToken cancellationToken = default)
     {
         _options = options;
         _notes = notes;
+        _ct = cancellationToken;
     }
 
     /// <summary>Receives the progress of each section analysis with the section's name (for a progress display); may be null.</summary>
@@ -39,11 +42,14 @@ public sealed class ShaftSectionCatalog
     {
         ArgumentNullException.ThrowIfNull(source);
         var progress = Progress is { } report ? new ProgressSink(p => report(source.Name, p)) : null;
-        var (r, templateOuter) = ShaftSections.Analyze(source, _options, _notes, progress);
+        var (r, templateOuter) = ShaftSections.Analyze(source, _options, _notes, _ct, progress);
         // a template knows its outer size; a drawing's is the larger side of its bounds
         double outer = templateOuter ?? Math.Max(r.Profile.Bounds.Width, r.Profile.Bounds.Height);
         _sections.Add(new AnalysedSection(source, r, outer, LargestHole(r.Profile)));
-        return ShaftSections.Stiffness(source, r, outer);
+        return ShaftSections.Stiffness(source, r, outer) with
+        {
+            Bending = SectionTwist.Bending.BendingSection.FromSection(r, templateOuter),
+        };
     }
 
     /// <summary>

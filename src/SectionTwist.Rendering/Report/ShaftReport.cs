@@ -41,6 +41,12 @@ public static class ShaftReport
         var pictures = new List<ReportFigure>();
         // the result carries the section-analysis warnings (naming each section) and the unbounded peaks
         var warnings = result.Warnings.Select(w => w.Message).ToList();
+        if (result.Bending is { } bending)
+        {
+            var unit = LengthUnit.TryParse(doc.Units.Length.Symbol, out var lu) ? lu : LengthUnit.Millimetre;
+            chapters.Add(BendingChapter.Build(doc, result, unit));
+            warnings.AddRange(bending.Warnings);
+        }
         foreach (var s in DistinctUsed(sections))
         {
             double torque = MaxTorqueOn(result, s);
@@ -55,6 +61,8 @@ public static class ShaftReport
             // the section's own warnings are in the list above already (from the result); the chapter repeats them beside its picture
             chapters.Add(ReportAdapters.SectionChapter($"Section '{s.Name}' ({s.Source.TemplateSpec ?? Path.GetFileName(s.Source.DxfPath)})", s.Result, figure, doc.Units));
         }
+        if (WarpingChapter.Build(doc, result) is { } warping) chapters.Insert(1, warping);
+        warnings.AddRange(result.WarpingWarnings);
         foreach (var seg in result.Segments.Where(x => x.ExceedsShearLimit || x.ExceedsTwistRateLimit))
             warnings.Add($"segment '{seg.Label}': {seg.Check}");
 
@@ -70,6 +78,7 @@ public static class ShaftReport
             Verification = ReportAdapters.Verification(verification),
             Warnings = warnings,
             Method = [.. ReportText.DefaultMethod, SectionsMethod],
+            Caution = result.Bending is null ? ReportText.DefaultCaution : BendingChapter.Caution,
         };
         return new ShaftReportContent(model, data, png, pictures);
     }

@@ -21,6 +21,12 @@ public sealed record SectionPlotData(SectionField Field, Point2 PeakLocation, do
     /// </summary>
     public bool PeakShearUnbounded { get; init; }
 
+    /// <summary>Centroid to mark, m (null: not marked).</summary>
+    public Point2? Centroid { get; init; }
+
+    /// <summary>Shear centre to mark, m (null: not marked; known when the warping function was solved).</summary>
+    public Point2? ShearCentre { get; init; }
+
     /// <summary>The picture data of a solved section.</summary>
     public static SectionPlotData From(SectionResult result, string? title = null)
     {
@@ -29,6 +35,8 @@ public sealed record SectionPlotData(SectionField Field, Point2 PeakLocation, do
             title ?? (result.Profile.Name is { Length: > 0 } name && name != "profile" ? $"{Path.GetFileName(name)}: shear stress magnitude" : "Shear stress magnitude"))
         {
             PeakShearUnbounded = double.IsPositiveInfinity(result.EstimatedRelativeError.MaxShear),
+            Centroid = result.Properties.Centroid,
+            ShearCentre = result.Warping?.ShearCentre,
         };
     }
 }

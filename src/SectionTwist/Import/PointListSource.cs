@@ -25,13 +25,20 @@ public sealed class PointListSource : IProfileSource
     /// <inheritdoc />
     public Profile Load(string source, ProfileSourceOptions options)
     {
-        using var reader = new StreamReader(source);
-        return Parse(reader, Path.GetFileName(source), options.Unit);
+        ArgumentNullException.ThrowIfNull(options);
+        string text = Limits.InputFile.ReadAllText(source, Limits.InputLimits.MaxPointListBytes, "point list", options.Cancellation);
+        return Parse(new StringReader(text), Path.GetFileName(source), options.Unit, options.Cancellation);
     }
 
     /// <summary>Parses point-list text; <paramref name="name"/> is used in messages.</summary>
-    public static Profile Parse(TextReader reader, string name, LengthUnit? unitOverride = null)
+    /// <param name="reader">The text.</param>
+    /// <param name="name">Name used in messages.</param>
+    /// <param name="unitOverride">Unit that overrides the file's own 'unit' line.</param>
+    /// <param name="cancellationToken">Stops reading a long list.</param>
+    public static Profile Parse(TextReader reader, string name, LengthUnit? unitOverride = null, CancellationToken cancellationToken = default)
     {
+        ArgumentNullException.ThrowIfNull(reader);
+        int points = 0;
         var unit = LengthUnit.Millimetre;
         var loops = new List<Loop>();
         LoopBuilder? current = null;
@@ -47,6 +54,9 @@ public sealed class PointListSource : IProfileSource
         while ((line = reader.ReadLine()) is not null)
         {
             lineNo++;
+            if ((lineNo & 4095) == 0) cancellationToken.ThrowIfCancellationRequested();
+            if (line.Length > 10_000)
+                throw new SectionTwistException("bad-point-list", $"{name}:{lineNo}: a line of {line.Length} characters; a point list holds one short 'x, y' per line");
             int hash = line.IndexOf('#', StringComparison.Ordinal);
             if (hash >= 0) line = line[..hash];
             line = line.Trim();
@@ -71,16 +81,20 @@ public sealed class PointListSource : IProfileSource
                 continue;
             }
             if (parts.Length != 2) throw new SectionTwistException("bad-point-list", $"{name}:{lineNo}: expected 'x, y' but found {parts.Length} values");
+            if (++points > Limits.InputLimits.MaxPoints)
+                throw new SectionTwistException("bad-point-list", $"{name}:{lineNo}: more than {Limits.InputLimits.MaxPoints} points; thin the outline out");
             var p = new Point2(Num(parts[0], lineNo) * m, Num(parts[1], lineNo) * m);
             if (current is null) { current = new LoopBuilder(p); loopStartLine = lineNo; }
             else if (p != current.Current) current.LineTo(p);
         }
         Finish();
         if (loops.Count == 0) throw new SectionTwistException("bad-point-list", $"{name}: no points found; write one 'x, y' per line");
+        if (loops.Count > Limits.InputLimits.MaxLoops)
+            throw new SectionTwistException("bad-point-list", $"{name}: {loops.Count} loops, more than the {Limits.InputLimits.MaxLoops} SectionTwist analyses together; keep only the section's outline and holes");
         return Profile.FromLoops(loops, unitOverride ?? unit, name);
 
         double Num(string s, int ln) =>
             double.TryParse(s, NumberStyles.Float, CultureInfo.InvariantCulture, out double v) && double.IsFinite(v)
-                ? v : throw new SectionTwistException("bad-point-list", $"{name}:{ln}: '{s}' is not a number");
+                ? v : throw new SectionTwistException("bad-point-list", $"{name}:{ln}: '{(s.Length > 40 ? s[..40] + "..." : s)}' is not a number");
     }
 }

@@ -22,4 +22,7 @@ public sealed record ProfileSourceOptions
 
     /// <summary>Receives non-fatal notes (skipped entities, gaps closed).</summary>
     public Action<string>? Notes { get; init; }
+
+    /// <summary>Stops reading a large input; sources observe it in their long loops.</summary>
+    public CancellationToken Cancellation { get; init; }
 }

@@ -11,6 +11,15 @@ namespace SectionTwist.Shaft;
 /// <param name="OuterDiameter">Optional outer diameter, m, for drawings.</param>
 public sealed record SectionStiffness(double TorsionConstant, double ShearPerTorque, string? Description = null, double? OuterDiameter = null)
 {
+    /// <summary>Warping constant Iw about the shear centre, m^6, when the warping function was solved; else null.</summary>
+    public double? WarpingConstant { get; init; }
+
+    /// <summary>Largest |sectorial coordinate| of the section, m^2, when the warping function was solved; else null.</summary>
+    public double? MaxSectorialCoordinate { get; init; }
+
+    /// <summary>True for an open thin-walled section whose members are sensitive to restrained warping (see <c>WarpingResult.Classification</c>).</summary>
+    public bool WarpingSensitive { get; init; }
+
     /// <summary>
     /// True when the section's theoretical peak shear is unbounded (a sharp re-entrant corner: a keyseat floor or spline root
     /// without radius). <see cref="ShearPerTorque"/> is then only the value on the analysis mesh, which grows without bound
@@ -23,8 +32,8 @@ public sealed record SectionStiffness(double TorsionConstant, double ShearPerTor
 
     /// <summary>
     /// The values of an analysed section: J and peak shear per unit torque, whether the peak is unbounded (a sharp
-    /// re-entrant corner: infinite estimated error of the peak) and the analysis warnings, prefixed with
-    /// <paramref name="description"/> when one is given.
+    /// re-entrant corner: infinite estimated error of the peak), the analysis warnings, prefixed with
+    /// <paramref name="description"/> when one is given, and the warping values when the analysis solved them.
     /// </summary>
     /// <param name="result">The section analysis.</param>
     /// <param name="description">Text for tables, e.g. <c>keyed d=40 mm</c>; also names the section in its warnings.</param>
@@ -36,6 +45,9 @@ public sealed record SectionStiffness(double TorsionConstant, double ShearPerTor
         {
             PeakShearUnbounded = double.IsPositiveInfinity(result.EstimatedRelativeError.MaxShear) || result.Warnings.Any(w => w.Code == "sharp-reentrant-corner"),
             Warnings = result.Warnings.Select(w => description is null ? w : new Torsion.AnalysisWarning(w.Code, $"section '{description}': {w.Message}")).ToList().AsReadOnly(),
+            WarpingConstant = result.Warping?.WarpingConstant,
+            MaxSectorialCoordinate = result.Warping?.MaxSectorialCoordinate,
+            WarpingSensitive = result.Warping?.Classification == Warping.WarpingClass.WarpingSensitive,
         };
     }
 
@@ -48,7 +60,7 @@ public sealed record SectionStiffness(double TorsionConstant, double ShearPerTor
         if (!(diameter > 0) || !double.IsFinite(diameter))
             throw new SectionTwistException("bad-section", $"round section: diameter {diameter} m must be positive");
         return new(Math.PI * Math.Pow(diameter, 4) / 32, 16 / (Math.PI * diameter * diameter * diameter),
-            $"round d={diameter * 1e3:G6} mm", diameter);
+            $"round d={diameter * 1e3:G6} mm", diameter) { Bending = SectionTwist.Bending.BendingSection.Round(diameter) };
     }
 
     /// <summary>
@@ -66,8 +78,14 @@ public sealed record SectionStiffness(double TorsionConstant, double ShearPerTor
                 $"tube section: inner diameter {innerDiameter} m must be at least 0 and smaller than the outer diameter {outerDiameter} m");
         double d4 = Math.Pow(outerDiameter, 4) - Math.Pow(innerDiameter, 4);
         return new(Math.PI * d4 / 32, 16 * outerDiameter / (Math.PI * d4),
-            $"tube D={outerDiameter * 1e3:G6} mm d={innerDiameter * 1e3:G6} mm", outerDiameter);
+            $"tube D={outerDiameter * 1e3:G6} mm d={innerDiameter * 1e3:G6} mm", outerDiameter) { Bending = SectionTwist.Bending.BendingSection.Tube(outerDiameter, innerDiameter) };
     }
+
+    /// <summary>
+    /// Area properties and boundary shear samples for the bending and combined-stress checks; null when the section is known
+    /// only by its torsion values (then a shaft with transverse loads cannot be checked).
+    /// </summary>
+    public SectionTwist.Bending.BendingSection? Bending { get; init; }
 
     /// <summary>Checks the values; throws a <see cref="SectionTwistException"/> naming <paramref name="where"/> otherwise.</summary>
     internal void Validate(string where)

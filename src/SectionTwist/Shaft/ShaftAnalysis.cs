@@ -13,7 +13,9 @@ internal sealed class ShaftAnalysis(ShaftModel model)
 
     public ShaftResult Compute()
     {
+        ShaftModelGuard.CheckInput(model);
         var layout = new ShaftLayout(model);
+        ShaftModelGuard.CheckStiffnessSpread(layout);
         int n = layout.Stations.Count;
         var k = new double[n * n];
         var f = new double[n];
@@ -36,6 +38,8 @@ internal sealed class ShaftAnalysis(ShaftModel model)
         if (free) CheckBalance(layout, f);
         var constrained = free ? [layout.Reference] : layout.Fixed;
         var phi = SolveReduced(layout, k, f, n, constrained);
+        var isFixed = new bool[n];
+        foreach (int c in constrained) isFixed[c] = true;
 
         double phiRef = phi[layout.Reference];
         // rotations and reactions that are zero in exact arithmetic print as zero, not as round-off (1e-16 of the largest)
@@ -59,6 +63,7 @@ internal sealed class ShaftAnalysis(ShaftModel model)
             reactions.Add(new SupportReaction(layout.Stations[i].Name, Units.NumberText.Clean(r, scale, TorqueRoundOff)));
         }
 
+        ShaftModelGuard.CheckSolution(k, f, phi, n, isFixed, free ? null : reactions);
         var segmentWarnings = new List<AnalysisWarning>();
         var segments = BuildSegments(layout, phi, scale, phiScale, segmentWarnings);
         var springs = layout.Springs.Select(s => new SpringResult(s.Spring.Label, layout.Stations[s.A].Name, layout.Stations[s.B].Name,
@@ -68,7 +73,7 @@ internal sealed class ShaftAnalysis(ShaftModel model)
         var governing = segments.FirstOrDefault(s => s.PeakShearUnbounded)
             ?? segments.Where(s => s.ShearLimit is not null && s.MaxShear > 0).OrderByDescending(s => s.MaxShear / s.ShearLimit!.Value).FirstOrDefault();
         var governingTwist = segments.Where(s => s.MaxTwistRate > 0).OrderByDescending(s => s.MaxTwistRate).FirstOrDefault();
-        return new ShaftResult
+        var result = new ShaftResult
         {
             Model = model,
             // Read-only views: a host cannot change a result through a cast back to the array or list.
@@ -81,6 +86,8 @@ internal sealed class ShaftAnalysis(ShaftModel model)
             GoverningTwistSegment = governingTwist,
             Warnings = Warnings(layout, segmentWarnings).AsReadOnly(),
         };
+        ShaftModelGuard.CheckFinite(result);
+        return result;
     }
 
     /// <summary>Relative size (of the total applied torque) below which an internal torque, reaction or spring torque is round-off.</summary>

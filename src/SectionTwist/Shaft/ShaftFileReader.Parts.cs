@@ -49,7 +49,7 @@ internal sealed partial class ShaftFileReader
         foreach (var (k, v) in map.Children)
         {
             string name = ((YamlScalarNode)k).Value ?? "";
-            var m = new YamlMap(_file, v, $"material '{name}'", "name", "library", "G", "E", "poisson", "allowableShear", "shearYield", "yield", "ultimate", "source");
+            var m = new YamlMap(_file, v, $"material '{name}'", "name", "library", "G", "E", "poisson", "density", "allowableShear", "shearYield", "yield", "ultimate", "source");
             Material? lib = null;
             if (m.Get("library") is { } ln)
             {
@@ -61,34 +61,53 @@ internal sealed partial class ShaftFileReader
                 }
                 lib = found;
             }
+            double? e = m.Has("E") ? PositiveStress(m, "E") : lib?.YoungsModulus;
             double g;
             if (m.Has("G"))
             {
-                if (m.Has("E") || m.Has("poisson")) throw _file.Error(m.KeyNode("E"), "E", $"material '{name}': give either G or E with poisson, not both");
+                if (m.Has("poisson")) throw _file.Error(m.KeyNode("poisson"), "poisson", $"material '{name}': give G, or E with poisson, not G and poisson");
                 g = m.Quantity("G", QuantityKind.Modulus)!.Value;
             }
-            else if (m.Has("E") || m.Has("poisson"))
+            else if (m.Has("poisson"))
             {
-                if (!m.Has("E") || !m.Has("poisson"))
-                    throw _file.Error(v, m.Has("E") ? "poisson" : "E", $"material '{name}': G = E / (2 (1 + poisson)) needs both 'E' and 'poisson'");
+                if (!m.Has("E")) throw _file.Error(v, "E", $"material '{name}': G = E / (2 (1 + poisson)) needs both 'E' and 'poisson'");
                 double nu = m.Quantity("poisson", QuantityKind.Number)!.Value;
                 if (!(nu > -1 && nu < 0.5)) throw _file.Error(m.Get("poisson")!, "poisson", "Poisson's ratio must lie between -1 and 0.5 (steel about 0.3)");
-                g = Material.ShearModulusFrom(PositiveStress(m, "E"), nu);
+                g = Material.ShearModulusFrom(e!.Value, nu);
             }
+            else if (m.Has("E") && lib is null)
+                throw _file.Error(v, "poisson", $"material '{name}': G = E / (2 (1 + poisson)) needs both 'E' and 'poisson' (or give G)");
             else g = lib?.ShearModulus ?? throw _file.Error(v, "G", $"material '{name}' needs a shear modulus: 'G', or 'E' and 'poisson', or 'library'");
-            if (!(g > 0)) throw _file.Error(m.Get("G")!, "G", "the shear modulus must be positive");
+            if (!(g > 0)) throw _file.Error(m.Get("G") ?? v, "G", "the shear modulus must be positive");
+            if (ShaftValueRange.Check(QuantityKind.Modulus, g) is { } odd) throw _file.Error(m.Get("G") ?? m.Get("E") ?? v, "G", $"material '{name}': the shear modulus {odd}");
 
-            double? allow = lib?.AllowableShear, ssy = lib?.ShearYield;
+            double? allow = lib?.AllowableShear, ssy = lib?.ShearYield, sy = lib?.YieldStrength, su = lib?.UltimateStrength;
+            bool strengthsGiven = m.Has("yield") || m.Has("ultimate") || m.Has("allowableShear") || m.Has("shearYield");
             if (m.Has("yield") || m.Has("ultimate"))
             {
-                var derived = ShaftMaterials.FromStrengths(name, g, m.Has("yield") ? PositiveStress(m, "yield") : null, m.Has("ultimate") ? PositiveStress(m, "ultimate") : null, "");
+                sy = m.Has("yield") ? PositiveStress(m, "yield") : null;
+                su = m.Has("ultimate") ? PositiveStress(m, "ultimate") : null;
+                var derived = ShaftMaterials.FromStrengths(name, g, sy, su, "");
                 allow = derived.AllowableShear; ssy = derived.ShearYield;
             }
             if (m.Has("allowableShear")) allow = PositiveStress(m, "allowableShear");
             if (m.Has("shearYield")) ssy = PositiveStress(m, "shearYield");
-            string source = m.String("source") ?? (lib is not null && !m.Has("G") && !m.Has("E") && !m.Has("yield") && !m.Has("ultimate") && !m.Has("allowableShear") && !m.Has("shearYield")
+            double? density = lib?.Density;
+            if (m.Has("density"))
+            {
+                density = m.Quantity("density", QuantityKind.Density)!.Value;
+                if (!(density > 0) || !double.IsFinite(density.Value)) throw _file.Error(m.Get("density")!, "density", "the density must be positive, e.g. '7850 kg/m^3'");
+            }
+            string source = m.String("source") ?? (lib is not null && !m.Has("G") && !m.Has("E") && !m.Has("density") && !strengthsGiven
                 ? lib.Source : $"given in {_file.FileName}{(lib is null ? "" : $", based on library '{m.String("library")}'")}");
-            result[name] = new Material(m.String("name") ?? name, g, allow, ssy, source);
+            result[name] = new Material(m.String("name") ?? name, g, allow, ssy, source)
+            {
+                YoungsModulus = e,
+                Density = density,
+                YieldStrength = sy,
+                UltimateStrength = su,
+                StrengthBasis = strengthsGiven || lib is null ? MaterialBasis.User : lib.StrengthBasis,
+            };
         }
         return result;
     }

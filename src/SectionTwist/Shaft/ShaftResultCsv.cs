@@ -7,7 +7,8 @@ namespace SectionTwist.Shaft;
 /// <summary>
 /// CSV tables of a shaft result in a <see cref="UnitSystem"/> (the unit is part of each column name, in ASCII, e.g.
 /// <c>torque_at_from_N*m</c> becomes <c>torque_at_from_Nm</c>), written with <see cref="AtomicFile"/>: stations.csv,
-/// segments.csv (with the <c>check</c> column) and warnings.csv. Numbers keep full precision.
+/// segments.csv (with the <c>check</c> column), warnings.csv, and bending.csv (SI) when the model has bending. Numbers keep
+/// full precision.
 /// </summary>
 internal static class ShaftResultCsv
 {
@@ -37,18 +38,28 @@ internal static class ShaftResultCsv
     {
         var sb = new StringBuilder("code,message\n");
         foreach (var w in r.Warnings) sb.Append(CultureInfo.InvariantCulture, $"{Text(w.Code)},{Text(w.Message)}\n");
+        foreach (var w in r.WarpingWarnings) sb.Append(CultureInfo.InvariantCulture, $"warping,{Text(w)}\n");
         return sb.ToString();
     }
 
-    /// <summary>The names of the files <see cref="WriteAll"/> writes.</summary>
-    public static readonly string[] FileNames = ["stations.csv", "segments.csv", "warnings.csv"];
-
-    /// <summary>Writes stations.csv, segments.csv and warnings.csv into <paramref name="directory"/>.</summary>
-    public static void WriteAll(ShaftResult r, string directory, UnitSystem units)
+    /// <summary>
+    /// Writes stations.csv, segments.csv and warnings.csv (and bending.csv when the model has bending) into
+    /// <paramref name="directory"/>; returns the files written.
+    /// </summary>
+    public static IReadOnlyList<string> WriteAll(ShaftResult r, string directory, UnitSystem units)
     {
-        AtomicFile.WriteText(Path.Combine(directory, FileNames[0]), Stations(r, units));
-        AtomicFile.WriteText(Path.Combine(directory, FileNames[1]), Segments(r, units));
-        AtomicFile.WriteText(Path.Combine(directory, FileNames[2]), Warnings(r));
+        var files = new List<string>();
+        void Put(string name, string text)
+        {
+            string path = Path.Combine(directory, name);
+            AtomicFile.WriteText(path, text);
+            files.Add(path);
+        }
+        Put("stations.csv", Stations(r, units));
+        Put("segments.csv", Segments(r, units));
+        Put("warnings.csv", Warnings(r));
+        if (r.Bending is { } b) Put("bending.csv", Bending.BendingCsv.Samples(b));
+        return files;
     }
 
     /// <summary>A column name with its unit in ASCII: <c>max_shear_MPa</c>, <c>max_twist_rate_deg_per_m</c>, <c>torque_at_to_Nm</c>, <c>applied_torque_lbf_in</c>.</summary>
@@ -67,7 +78,7 @@ internal static class ShaftResultCsv
         return b.ToString();
     }
 
-    private static string N(double? v) => v is { } x ? double.IsFinite(x) ? x.ToString("R", CultureInfo.InvariantCulture) : double.IsPositiveInfinity(x) ? "inf" : "" : "";
+    internal static string N(double? v) => v is { } x ? double.IsFinite(x) ? x.ToString("R", CultureInfo.InvariantCulture) : double.IsPositiveInfinity(x) ? "inf" : "" : "";
 
-    private static string Text(string s) => s.AsSpan().IndexOfAny(",\"\n") >= 0 ? "\"" + s.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"" : s;
+    internal static string Text(string s) => s.AsSpan().IndexOfAny(",\"\n") >= 0 ? "\"" + s.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"" : s;
 }

@@ -16,19 +16,28 @@ public static class ShaftSections
     /// <summary>Creates a resolver for <see cref="ShaftFile.Load"/>.</summary>
     /// <param name="options">Section analysis options; null for the defaults.</param>
     /// <param name="notes">Receives one line per analysed section (the analysis warnings travel with the result, <see cref="SectionStiffness.Warnings"/>); may be null.</param>
-    public static Func<SectionSource, SectionStiffness> CreateResolver(AnalysisOptions? options = null, Action<string>? notes = null) =>
-        source => Resolve(source, options, notes);
+    /// <param name="cancellationToken">Stops the reading and analysis of the sections.</param>
+    public static Func<SectionSource, SectionStiffness> CreateResolver(AnalysisOptions? options = null, Action<string>? notes = null, CancellationToken cancellationToken = default) =>
+        source => Resolve(source, options, notes, cancellationToken);
 
     /// <summary>Builds and analyses one section.</summary>
-    public static SectionStiffness Resolve(SectionSource source, AnalysisOptions? options = null, Action<string>? notes = null)
+    /// <param name="source">The section.</param>
+    /// <param name="options">Section analysis options; null for the defaults.</param>
+    /// <param name="notes">Receives one line per analysed section and per analysis warning; may be null.</param>
+    /// <param name="cancellationToken">Stops the reading and analysis.</param>
+    public static SectionStiffness Resolve(SectionSource source, AnalysisOptions? options = null, Action<string>? notes = null, CancellationToken cancellationToken = default)
     {
-        var (r, outer) = Analyze(source, options, notes);
-        return Stiffness(source, r, outer);
+        var (r, outer) = Analyze(source, options, notes, cancellationToken);
+        return Stiffness(source, r, outer) with
+        {
+            Bending = SectionTwist.Bending.BendingSection.FromSection(r, outer),
+        };
     }
 
     /// <summary>
     /// The shaft's view of a solved section: J, peak shear per unit torque, description, outer size, whether the peak is
-    /// unbounded (a sharp re-entrant corner) and the analysis warnings, each prefixed with the section's name.
+    /// unbounded (a sharp re-entrant corner), the analysis warnings (each prefixed with the section's name) and the warping
+    /// values when they were solved.
     /// </summary>
     internal static SectionStiffness Stiffness(SectionSource source, SectionResult r, double? outer) =>
         SectionStiffness.FromAnalysis(r, source.Name, outer) with { Description = source.TemplateSpec ?? Path.GetFileName(source.DxfPath) };
@@ -38,7 +47,7 @@ public static class ShaftSections
     /// for callers that keep the solved field (the report's pictures).
     /// </summary>
     internal static (SectionResult Result, double? OuterSize) Analyze(SectionSource source, AnalysisOptions? options, Action<string>? notes,
-        IProgress<AnalysisProgress>? progress = null)
+        CancellationToken ct = default, IProgress<AnalysisProgress>? progress = null)
     {
         ArgumentNullException.ThrowIfNull(source);
         Geometry.Profile profile;
@@ -57,14 +66,18 @@ public static class ShaftSections
                     throw new SectionTwistException("bad-section", $"part '{p}' must be a whole number from 1 (the n-th closed outline of the drawing)");
                 part = n;
             }
-            profile = ProfileSources.Load(path, new ProfileSourceOptions { Layer = source.Layer, Part = part, Notes = notes });
+            profile = ProfileSources.Load(path, new ProfileSourceOptions { Layer = source.Layer, Part = part, Notes = notes, Cancellation = ct });
         }
         else throw new SectionTwistException("bad-section", $"{source.Location}: section '{source.Name}' names neither a template nor a DXF file");
 
-        var r = SectionAnalyzer.Analyze(profile, options, default, progress);
+        // open-looking sections also get their warping function (restrained-warping check of the shaft)
+        var r = SectionAnalyzer.Analyze(profile, (options ?? AnalysisOptions.Default) with { WarpingIfOpen = true }, ct, progress);
         // the values and the warnings go into the results (tables, JSON, CSV, report); the note only says what was done
         notes?.Invoke($"section '{source.Name}' ({source.TemplateSpec ?? Path.GetFileName(source.DxfPath)}): analysed, {r.Mesh.Elements} elements" +
                       (r.Warnings.Count > 0 ? $", {r.Warnings.Count} warning(s) (listed with the results)" : ""));
+        if (r.Warping is { Classification: Warping.WarpingClass.WarpingSensitive } wr)
+            notes?.Invoke($"section '{source.Name}': open thin-walled, warping constant Iw = {Units.NumberText.Format(wr.WarpingConstant, 5)} m⁶, " +
+                          $"warping length for steel {Units.NumberText.Format(wr.SteelWarpingLength, 4)} m");
         return (r, outer);
     }
 }

@@ -43,6 +43,7 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
         var holeArea = profile.Regions.SelectMany(r => r.Loops).Select(l => Math.Abs(l.SignedArea)).ToArray();
         double size = Math.Sqrt(props.Area);
         double h = Math.Min(0.6 * size * Math.Pow(acc, 0.25), profile.Bounds.Diagonal / 8);
+        var budget = AnalysisBudget.For(profile, options, acc, h);
         TorsionSolution? coarse = null, fine = null;
         Mesh? coarseMesh = null;
         Func<Point2, double>? sizeField = null;
@@ -52,19 +53,29 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
         {
             ct.ThrowIfCancellationRequested();
             double f0 = (double)pass / MaxPasses, span = 1.0 / MaxPasses;
-            coarseMesh = Mesher.Generate(profile, new MeshOptions { MaxEdgeLength = h, MaxTriangles = options.MaxElements, SizeField = sizeField, MaxArcAngleDegrees = ArcAngle(acc) }, ct);
+            Mesh mesh;
+            try { mesh = Mesher.Generate(profile, new MeshOptions { MaxEdgeLength = h, MaxTriangles = budget.MaxElements, SizeField = sizeField, MaxArcAngleDegrees = ArcAngle(acc) }, ct); }
+            catch (SectionTwistException e) when (e.Code == "mesh-too-large")
+            {
+                if (pass == 0) throw budget.Refusal();
+                warnings.Add(new AnalysisWarning("accuracy-not-reached", $"{budget.Describe()} stopped refinement; results carry the error estimate of the last pass"));
+                break;
+            }
+            coarseMesh = mesh;
             Report("solve", f0 + 0.2 * span);
             coarse = TorsionSolver.Solve(coarseMesh, holeArea, ct);
             if (!options.EstimateError) { fine = coarse; break; }
-            if (4L * coarseMesh.ElementCount > options.MaxElements)
+            if (4L * coarseMesh.ElementCount > budget.MaxElements)
             {
                 warnings.Add(new AnalysisWarning("accuracy-not-reached",
-                    $"the element limit ({options.MaxElements}) stopped refinement; the error estimate is from the last two meshes"));
+                    $"{budget.Describe()} stopped refinement; the error estimate is from the last two meshes"));
                 fine = coarse;
                 break;
             }
             Report("refine", f0 + 0.4 * span);
+            ct.ThrowIfCancellationRequested();
             var fineMesh = MeshRefinement.Uniform(coarseMesh);
+            ct.ThrowIfCancellationRequested();
             fine = TorsionSolver.Solve(fineMesh, holeArea, ct);
             estJ = Math.Abs(fine.J - coarse.J) / (Math.Pow(2, p) - 1) / fine.J;
             double tc = coarse.MaxGradient / coarse.J, tf = fine.MaxGradient / fine.J;
@@ -81,8 +92,10 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
             }
             // Next pass: a size field from the Zienkiewicz-Zhu indicators of the coarse solution, aimed so that the next
             // coarse mesh has a J error of about 2^p times the target (the refined solve then meets the target).
+            ct.ThrowIfCancellationRequested();
             var coarseField = FieldRecovery.Build(coarse);
             var eta2 = AdaptiveSizing.Indicators(coarse, coarseField);
+            ct.ThrowIfCancellationRequested();
             // Richardson gives the coarse error E_r = |Jf - Jc| 2^p / (2^p - 1); the indicators give E_zz. Ask the
             // indicators for the reduction that Richardson says is needed (this calibrates them at singular corners).
             double coarseErr = Math.Abs(fine.J - coarse.J) * Math.Pow(2, p) / (Math.Pow(2, p) - 1) / fine.J;
@@ -106,6 +119,16 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
             for (int r = 0; r < regionJ.Length; r++) regionJ[r] = useF.RegionJ[r] + (useF.RegionJ[r] - useC.RegionJ[r]) * k;
         }
         if (singular) estT = double.PositiveInfinity;
+        Warping.WarpingResult? warping = null;
+        if (options.Warping || (options.WarpingIfOpen && j < 0.5 * props.PolarMoment))
+        {
+            Report("warping", 0.97);
+            warping = Warping.WarpingProperties.Compute(useC.Mesh, useF.Mesh, props, j, ct);
+            if (warping is null)
+                warnings.Add(new AnalysisWarning("warping-not-computed",
+                    $"the profile has {profile.Regions.Count} separate parts: they warp independently and have no common shear centre; analyse each part alone for its warping properties"));
+            else estJ = Bracket(j, useF.J, warping.TorsionConstantUpperBound, estJ);
+        }
         var field = FieldRecovery.Build(useF);
         Report("done", 1);
         return new SectionResult
@@ -120,7 +143,22 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
             Warnings = warnings.AsReadOnly(),
             Field = field,
             RegionTorsionConstants = Array.AsReadOnly(regionJ),
+            Warping = warping,
         };
+    }
+
+    /// <summary>
+    /// On the same mesh the stress-function J is a lower bound (complementary energy) and the warping-function J an upper
+    /// bound (potential energy) of the exact J of the mesh's domain, so for a polygonal profile (the mesh domain is the
+    /// exact one) the extrapolated J lies within max(J - lower, upper - J) of the truth. The estimate becomes the smaller
+    /// of that guaranteed bracket and the Richardson estimate; curved outlines keep the Richardson estimate.
+    /// </summary>
+    private double Bracket(double j, double lower, double upper, double estimate)
+    {
+        bool polygonal = profile.Loops.All(l => l.Segments.All(s => s is LineSegment));
+        if (!polygonal || !(lower <= j && j <= upper)) return estimate;
+        double bound = Math.Max(j - lower, upper - j) / j;
+        return double.IsNaN(estimate) ? bound : Math.Min(estimate, bound);
     }
 
     /// <summary>Largest arc angle per boundary edge: coarse curved edges suffice at modest accuracy.</summary>

@@ -60,13 +60,13 @@ public sealed record DisplayUnit(string Symbol, double SiPerUnit)
         return b.ToString();
     }
 
-    private static char? Superscript(char digit) => digit switch { '2' => '²', '3' => '³', '4' => '⁴', _ => null };
+    private static char? Superscript(char digit) => digit switch { '2' => '²', '3' => '³', '4' => '⁴', '6' => '⁶', _ => null };
 
     private static string ToAscii(string symbol)
     {
         var b = new StringBuilder(symbol.Length + 4);
         foreach (char c in symbol)
-            b.Append(c switch { '·' => "*", '²' => "^2", '³' => "^3", '⁴' => "^4", 'τ' => "tau", '°' => "deg", _ => c.ToString() });
+            b.Append(c switch { '·' => "*", '²' => "^2", '³' => "^3", '⁴' => "^4", '⁶' => "^6", 'τ' => "tau", '°' => "deg", _ => c.ToString() });
         return b.ToString();
     }
 }

@@ -14,6 +14,8 @@ public enum Measure
     SecondMoment,
     /// <summary>Section moduli, e.g. the torsional modulus T/τmax (m³).</summary>
     SectionModulus,
+    /// <summary>Warping constants Iw (m⁶).</summary>
+    WarpingConstant,
     /// <summary>Torques and moments (N·m).</summary>
     Torque,
     /// <summary>Stresses: shear stress, allowables, yield strengths (Pa).</summary>

@@ -55,6 +55,8 @@ public sealed class UnitSystem
     public DisplayUnit SecondMoment => this[Measure.SecondMoment];
     /// <summary>Section moduli.</summary>
     public DisplayUnit SectionModulus => this[Measure.SectionModulus];
+    /// <summary>Warping constants.</summary>
+    public DisplayUnit WarpingConstant => this[Measure.WarpingConstant];
     /// <summary>Torques.</summary>
     public DisplayUnit Torque => this[Measure.Torque];
     /// <summary>Stresses.</summary>
@@ -94,7 +96,7 @@ public sealed class UnitSystem
     }
 
     /// <summary>
-    /// This system with lengths in <paramref name="unit"/>: length, area, second moment and section modulus follow the new
+    /// This system with lengths in <paramref name="unit"/>: length, area, second moment, section modulus and warping constant follow the new
     /// unit, and so do the torque per length (torque unit per length unit).
     /// </summary>
     public UnitSystem WithLength(LengthUnit unit)
@@ -178,5 +180,6 @@ public sealed class UnitSystem
         u[(int)Measure.Area] = new($"{s}²", m * m);
         u[(int)Measure.SecondMoment] = new($"{s}⁴", m * m * m * m);
         u[(int)Measure.SectionModulus] = new($"{s}³", m * m * m);
+        u[(int)Measure.WarpingConstant] = new($"{s}⁶", m * m * m * m * m * m);
     }
 }

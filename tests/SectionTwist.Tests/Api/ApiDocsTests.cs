@@ -2,6 +2,7 @@ using System.Text.RegularExpressions;
 using SectionTwist.Geometry;
 using SectionTwist.Import.Dxf;
 using SectionTwist.Profiles;
+using SectionTwist.Shaft;
 using SectionTwist.Torsion;
 using SectionTwist.Units;
 using SectionTwist.Verification;
@@ -174,5 +175,17 @@ public partial class ApiDocsTests
         var (beta, _) = VerificationSuite.RectangleSeries(0.060, 0.010);
         Tol.Rel(beta * 0.060 * Math.Pow(0.010, 3), r.TorsionConstant, 2e-4);
         Assert.Equal("bar:60x10", r.Profile.Name);
+    }
+
+    // Cantilever restrained at the wall: phi(L) = T/(GJ) (L - a tanh(L/a)) (Vlasov, Thin-Walled Elastic Beams, 2nd ed.,
+    // ch. 5; AISC Design Guide 9, from memory), with J and Iw of the same analysed channel.
+    [Fact]
+    public void Warping_member_example_matches_the_cantilever_closed_form()
+    {
+        var r = ApiExamples.EndPlatedChannel();
+        var steel = ShaftMaterials.All["steel-s355"];
+        var sec = SectionAnalyzer.Analyze(ProfileTemplates.Create("channel:h=100,b=50,tw=6,tf=8.5,r=8.5"), new AnalysisOptions { Warping = true });
+        double gj = steel.ShearModulus * sec.TorsionConstant, a = Math.Sqrt(steel.YoungsModulus!.Value * sec.Warping!.WarpingConstant / gj);
+        Tol.Rel(150 / gj * (1.2 - a * Math.Tanh(1.2 / a)), r.Stations[1].Rotation, 1e-9, "Vlasov ch. 5");
     }
 }

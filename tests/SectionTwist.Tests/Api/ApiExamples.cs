@@ -6,6 +6,8 @@ using SectionTwist.Profiles;
 using SectionTwist.Shaft;
 using SectionTwist.Torsion;
 using SectionTwist.Units;
+using SectionTwist.Warping;
+using SectionTwist.WarpingTorsion;
 
 namespace SectionTwist.Tests.Api;
 
@@ -178,5 +180,25 @@ public static class ApiExamples
         ProfileSources.Register(new BarSource());          // or: ProfileSources.LoadPlugins("plugins")
         Profile bar = ProfileSources.Load("bar:60x10");
         return SectionAnalyzer.Analyze(bar);
+    }
+
+    // --- docs/api.md: "Open sections: warping and restrained-warping members" ---
+    public static WarpingMemberResult EndPlatedChannel()
+    {
+        // The warping function is solved on request; it gives the shear centre, Iw and the largest |omega|.
+        var options = new AnalysisOptions { Warping = true };
+        SectionResult channel = SectionAnalyzer.Analyze(ProfileTemplates.Create("channel:h=100,b=50,tw=6,tf=8.5,r=8.5"), options);
+        WarpingResult w = channel.Warping!;          // w.ShearCentre (m), w.WarpingConstant (m^6), w.Classification
+        var member = new WarpingMember
+        {
+            Stations = [new Station("wall", 0.0), new Station("tip", 1.2)],
+            Segments = [new WarpingSegment("wall", "tip", WarpingSection.From(channel), ShaftMaterials.All["steel-s355"])],
+            Loads = [new PointTorque("tip", 150)],   // N*m, applied through the shear centre
+            FixedStations = ["wall"],
+            Warping = new Dictionary<string, WarpingEnd> { ["wall"] = WarpingEnd.Restrained },
+        };
+        WarpingMemberResult result = WarpingMemberSolver.Solve(member);
+        // result.Stations[1].Rotation in rad; result.Segments[0].MaxWarpingNormalStress in Pa.
+        return result;
     }
 }

@@ -8,11 +8,12 @@ namespace SectionTwist.Import.Dxf;
 /// Entities on layer 0 inside a block take the layer of the INSERT. Paper-space entities, text, dimensions, hatches and
 /// similar annotation are counted and ignored; unknown types are listed once as skipped.
 /// </summary>
-internal sealed partial class DxfGeometryBuilder(DxfDocument doc, string? layerFilter)
+internal sealed partial class DxfGeometryBuilder(DxfDocument doc, string? layerFilter, CancellationToken ct = default)
 {
     /// <summary>Most outline curves one drawing may produce (guards against huge arrays and runaway nesting).</summary>
-    public const int MaxCurves = 500_000;
-    private const int MaxDepth = 32;
+    public const int MaxCurves = Limits.InputLimits.MaxDxfPieces;
+    private const int MaxDepth = Limits.InputLimits.MaxDxfBlockDepth;
+    private int _emitted;
 
     private static readonly HashSet<string> Annotation = new(StringComparer.Ordinal)
     {
@@ -51,6 +52,7 @@ internal sealed partial class DxfGeometryBuilder(DxfDocument doc, string? layerF
 
     private void Emit(DxfEntity e, Affine2 m, string? insertLayer, string where)
     {
+        if ((++_emitted & 4095) == 0) ct.ThrowIfCancellationRequested();
         if (e.PaperSpace) return;
         string layer = insertLayer is not null && e.Layer == "0" ? insertLayer : e.Layer;
         if (e.Type == "INSERT") { ExpandInsert(e, m, layer, where); return; }

@@ -57,6 +57,6 @@ public sealed record DxfImportReport
     public int DuplicatesDropped { get; init; }
     /// <summary>Non-fatal notes (skipped types, ignored degenerate entities, missing blocks).</summary>
     public required IReadOnlyList<string> Warnings { get; init; }
-    /// <summary>The error that stopped loop building (only from <see cref="DxfProfiles.Inspect(string, DxfReadOptions?)"/>), else null.</summary>
+    /// <summary>The error that stopped loop building (only from <see cref="DxfProfiles.Inspect(string, DxfReadOptions?, CancellationToken)"/>), else null.</summary>
     public string? Problem { get; init; }
 }

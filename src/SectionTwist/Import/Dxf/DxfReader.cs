@@ -7,7 +7,7 @@ namespace SectionTwist.Import.Dxf;
 /// <summary>The read pipeline: bytes -> pairs -> document -> curves -> loops -> parts -> profile in metres.</summary>
 internal static class DxfReader
 {
-    public static (DxfImportReport Report, Profile? Profile) Read(ReadOnlySpan<byte> data, string file, DxfReadOptions o, bool inspect)
+    public static (DxfImportReport Report, Profile? Profile) Read(ReadOnlySpan<byte> data, string file, DxfReadOptions o, bool inspect, CancellationToken ct = default)
     {
         if (!(o.SnapTolerance >= 0 && o.SnapTolerance < 0.1))
             throw new SectionTwistException("bad-option", $"snap tolerance {o.SnapTolerance} must lie in [0, 0.1) (a fraction of the part size, e.g. 1e-6)");
@@ -15,12 +15,14 @@ internal static class DxfReader
             throw new SectionTwistException("bad-option", $"spline tolerance {o.SplineTolerance} must lie in (0, 0.1) (a fraction of the part size, e.g. 1e-5)");
         if (o.Part is < 1) throw new SectionTwistException("bad-option", $"--part {o.Part}: parts are numbered from 1 (largest first)");
 
-        var pairs = DxfTokenizer.Tokenize(data, file, out string format, out bool bom);
+        var pairs = DxfTokenizer.Tokenize(data, file, out string format, out bool bom, ct);
+        ct.ThrowIfCancellationRequested();
         string? acadVer = FindHeader(pairs, "$ACADVER"), codePage = FindHeader(pairs, "$DWGCODEPAGE");
         var enc = DxfText.EncodingFor(acadVer, codePage, bom);
         for (int i = 0; i < pairs.Count; i++)
             if (DxfPair.IsStringCode(pairs[i].Code)) pairs[i] = pairs[i] with { Value = DxfText.Decode(pairs[i].Value, enc) };
         var doc = DxfParser.Parse(pairs, file, format);
+        DxfBudget.Check(doc, ct);
 
         int? ins = doc.HeaderInt("$INSUNITS");
         LengthUnit? unit = o.Unit;
@@ -36,7 +38,7 @@ internal static class DxfReader
             throw new SectionTwistException("dxf-unitless",
                 $"{file}: the drawing has no length unit ($INSUNITS {(ins is null ? "is missing" : $"= {ins}")}); pass --unit mm (or in, cm, m, ft) to say what one drawing unit is");
 
-        var builder = new DxfGeometryBuilder(doc, o.Layer);
+        var builder = new DxfGeometryBuilder(doc, o.Layer, ct);
         builder.Run();
         warnings.AddRange(builder.Warnings);
         var layers = doc.Layers.Concat(builder.LayerCounts.Keys).Distinct(StringComparer.OrdinalIgnoreCase).ToList();
@@ -53,7 +55,7 @@ internal static class DxfReader
             if (builder.Curves.Count == 0 || !(diag > 0))
                 throw new SectionTwistException("dxf-no-outline",
                     $"{file}: no outline entities{(o.Layer is null ? "" : $" on layer '{o.Layer}'")} in model space; layers: {string.Join(", ", layers.DefaultIfEmpty("(none)"))}");
-            asm = new OutlineAssembler(file, o.SnapTolerance * diag, o.SplineTolerance * diag, diag);
+            asm = new OutlineAssembler(file, o.SnapTolerance * diag, o.SplineTolerance * diag, diag, ct);
             asm.Run(builder.Curves);
             if (asm.Loops.Count == 0) throw new SectionTwistException("dxf-no-outline", $"{file}: no closed outline found");
             // nest in drawing units so validation messages quote drawing coordinates
@@ -67,6 +69,7 @@ internal static class DxfReader
                     if (loopSet.Any(l => SameLoop(l, asm.Loops[li]))) foreach (var s in asm.LoopLayers[li]) lay.Add(s);
                 parts.Add(new DxfPartInfo(k + 1, regions[k].Area, regions[k].Holes.Count, regions[k].Outer.Bounds, lay.ToArray()));
             }
+            if (o.Part is null) StrayHoleCheck.Check(file, regions, asm.Loops, asm.LoopLayers, unit ?? LengthUnit.Millimetre);
             if (o.Part is { } pn && pn > regions.Count)
                 throw new SectionTwistException("dxf-no-part",
                     $"{file}: --part {pn} does not exist: the drawing holds {regions.Count} part(s) with areas {string.Join(", ", parts.Select(p => p.Area.ToString("G4", CultureInfo.InvariantCulture)))} (largest first)");

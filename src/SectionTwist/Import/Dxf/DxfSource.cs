@@ -2,7 +2,7 @@ using SectionTwist.Geometry;
 
 namespace SectionTwist.Import.Dxf;
 
-/// <summary>The <c>.dxf</c> profile source: <see cref="DxfProfiles.Read(string, DxfReadOptions?)"/> behind <see cref="IProfileSource"/>.</summary>
+/// <summary>The <c>.dxf</c> profile source: <see cref="DxfProfiles.Read(string, DxfReadOptions?, CancellationToken)"/> behind <see cref="IProfileSource"/>.</summary>
 internal sealed class DxfSource : IProfileSource
 {
     public string Name => "dxf";
@@ -13,7 +13,7 @@ internal sealed class DxfSource : IProfileSource
 
     public Profile Load(string source, ProfileSourceOptions options)
     {
-        var read = DxfProfiles.Read(source, ToDxf(options));
+        var read = DxfProfiles.Read(source, ToDxf(options), options.Cancellation);
         Report(read.Report, options.Notes);
         return read.Profile;
     }

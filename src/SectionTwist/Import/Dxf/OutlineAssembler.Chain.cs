@@ -33,6 +33,7 @@ internal sealed partial class OutlineAssembler
             var order = Enumerable.Range(0, alive.Count).OrderBy(i => boxes[i].MinX).ToArray();
             for (int oi = 0; oi < order.Length; oi++)
             {
+                if ((oi & 255) == 0) ct.ThrowIfCancellationRequested();
                 int i = order[oi];
                 if (alive[i].Dead) continue;
                 for (int oj = oi + 1; oj < order.Length && boxes[order[oj]].MinX <= boxes[i].MaxX + tol; oj++)

@@ -8,7 +8,7 @@ namespace SectionTwist.Import.Dxf;
 /// line ends onto the cluster point (arcs are re-fitted through their mid point), drops degenerate, duplicate and
 /// overlapping pieces, and chains the rest into loops by walking node adjacency.
 /// </summary>
-internal sealed partial class OutlineAssembler(string file, double snapTol, double splineTol, double diag)
+internal sealed partial class OutlineAssembler(string file, double snapTol, double splineTol, double diag, CancellationToken ct = default)
 {
     /// <summary>Largest distance an end point was moved by snapping (drawing units).</summary>
     public double LargestGap { get; private set; }
@@ -26,24 +26,35 @@ internal sealed partial class OutlineAssembler(string file, double snapTol, doub
         foreach (var c in curves)
         {
             if (c.Segment is not null) { _pieces.Add(new OutlinePiece(c.Segment, c.Source, c.Layer)); continue; }
+            ct.ThrowIfCancellationRequested();
             var pts = c.Spline!.Flatten(splineTol, 200_000);
             var dedup = new List<Point2> { pts[0] };
             for (int i = 1; i < pts.Count; i++) if (pts[i] != dedup[^1]) dedup.Add(pts[i]);
             for (int i = 0; i + 1 < dedup.Count; i++) _pieces.Add(new OutlinePiece(new LineSegment(dedup[i], dedup[i + 1]), c.Source, c.Layer));
+            if (_pieces.Count > Limits.InputLimits.MaxDxfPieces)
+                throw new SectionTwistException("dxf-too-large", $"{file}: the splines flatten to more than {Limits.InputLimits.MaxDxfPieces} pieces; export only the section outline or simplify the splines");
         }
         var closed = _pieces.Where(p => p.IsClosedCurve).ToList();
         _pieces.RemoveAll(p => p.IsClosedCurve);
         Snap();
+        ct.ThrowIfCancellationRequested();
         Rebuild();
+        ct.ThrowIfCancellationRequested();
         DropDuplicates();
+        ct.ThrowIfCancellationRequested();
         AddClosedCurves(closed);
         Chain();
+        ct.ThrowIfCancellationRequested();
+        if (Loops.Count > Limits.InputLimits.MaxLoops)
+            throw new SectionTwistException("dxf-too-many-loops",
+                $"{file}: {Loops.Count} closed loops, more than the {Limits.InputLimits.MaxLoops} SectionTwist analyses together (contour or hatch lines?); pick the outline's layer with --layer NAME"); 
     }
 
     private void AddClosedCurves(List<OutlinePiece> closed)
     {
         for (int i = 0; i < closed.Count; i++)
         {
+            if ((i & 255) == 0) ct.ThrowIfCancellationRequested();
             bool dup = false;
             for (int j = 0; j < i && !dup; j++) dup = Covers(closed[j].Segment, closed[i].Segment);
             if (dup) { DuplicatesDropped++; continue; }
@@ -62,8 +73,14 @@ internal sealed partial class OutlineAssembler(string file, double snapTol, doub
         int Find(int x) { while (parent[x] != x) { parent[x] = parent[parent[x]]; x = parent[x]; } return x; }
         double cell = snapTol > 0 ? snapTol : Math.Max(diag, 1) * 1e-15;
         var grid = new Dictionary<(long, long), List<int>>();
+        // exact copies (stacked duplicate entities) join their first occurrence directly: the grid sees each point once,
+        // so a crowd of coincident ends costs O(n), not O(n^2)
+        var exact = new Dictionary<Point2, int>();
         for (int i = 0; i < n; i++)
         {
+            if ((i & 4095) == 0) ct.ThrowIfCancellationRequested();
+            if (exact.TryGetValue(pts[i], out int first)) { parent[Find(i)] = Find(first); continue; }
+            exact[pts[i]] = i;
             long cx = (long)Math.Floor(pts[i].X / cell), cy = (long)Math.Floor(pts[i].Y / cell);
             for (long dx = -1; dx <= 1; dx++)
                 for (long dy = -1; dy <= 1; dy++)
