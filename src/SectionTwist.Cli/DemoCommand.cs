@@ -1,4 +1,5 @@
 using System.Diagnostics;
+using SectionTwist.Dynamics;
 using SectionTwist.Rendering.Adapters;
 using SectionTwist.Rendering.Report;
 using SectionTwist.Shaft;
@@ -27,7 +28,8 @@ internal sealed class DemoCommand : ICommand
         "sectiontwist demo [--out DIR] [--units SI-mm|SI-m|US]\n" +
         "  Solves the bundled demo: the drive shaft of a small winch (an invented scenario) with a keyed input, a hollow middle\n" +
         "  and a splined output, driven through a flexible coupling. The keyed and splined sections are analysed, the shaft is\n" +
-        "  solved, the verification cases are run, and DIR receives report.html, shaft.png, shaft.svg and section-NAME.png.\n" +
+        "  solved, the verification cases are run, and DIR receives report.html, shaft.png, shaft.svg and section-NAME.png;\n" +
+        "  the drivetrain (motor shaft, gear stage, inertias) gets its torsional modes and resonance check in modes.html.\n" +
         $"  --out DIR   output folder (default ./{DefaultFolder}; created when missing)\n" +
         "  --units SYS units of the summary, report and pictures: SI-mm (the demo file's own), SI-m or US\n" +
         "  The shaft file itself: sample-profiles/winch-shaft.yaml ('sectiontwist shaft' reads it too).";
@@ -46,8 +48,9 @@ internal sealed class DemoCommand : ICommand
         ShaftDocument doc;
         ShaftResult result;
         IReadOnlyList<VerificationOutcome> verification;
-        IReadOnlyList<string> files;
+        List<string> files;
         ShaftSectionCatalog sections;
+        string? modesLine = null;
         using (var progress = new ProgressLine(context, "demo"))
         {
             sections = new ShaftSectionCatalog(context.Analysis(), context.Err.WriteLine, context.Cancellation)
@@ -61,12 +64,27 @@ internal sealed class DemoCommand : ICommand
             verification = verifying.GetAwaiter().GetResult();
             progress.Report(0.9, "pictures and report");
             var content = ShaftReport.Build(doc, result, sections, verification, CliReport.Options());
-            files = ShaftReport.WriteBundle(content, folder);
+            files = ShaftReport.WriteBundle(content, folder).ToList();
+            if (doc.Dynamics is { } dyn)
+            {
+                progress.Report(0.95, "torsional modes");
+                var modes = ModalAnalysis.Solve(dyn.Drivetrain, dyn.Options);
+                var check = dyn.Excitation is { } ex ? ResonanceCheck.Evaluate(modes, ex) : null;
+                var forced = dyn.Forcing is { } f ? ForcedResponse.Compute(modes, f, dyn.DampingRatio) : null;
+                string modesFile = Path.Combine(folder, "modes.html");
+                ModesReport.Write(doc, modes, check, forced, modesFile, CliReport.Options());
+                files.Add(modesFile);
+                var first = modes.ElasticModes.FirstOrDefault();
+                modesLine = $"  Drivetrain: lowest torsional natural frequency {(first is null ? "-" : NumberText.Format(first.Frequency, 4))} Hz" +
+                            (check?.Closest is { } c ? $"; closest crossing: mode {c.Mode} with {c.Excitation} ({(c.Status == CrossingStatus.Resonance ? "in the operating range" : $"margin {NumberText.Fixed(c.Margin * 100, 0)} %")}, {ModalResultJson.Status(c.Status)})" : "") +
+                            " (modes.html)";
+            }
         }
 
         var w = context.Out;
         w.WriteLine($"{doc.Model.Title ?? "demo shaft"} (bundled sample-profiles/winch-shaft.yaml)");
         foreach (string line in ShaftReport.Summary(doc, result)) w.WriteLine("  " + line);
+        if (modesLine is not null) w.WriteLine(modesLine);
         int failed = verification.Count(v => !v.Passed);
         w.WriteLine(failed == 0
             ? $"  Verification: all {verification.Count} cases passed on this build."

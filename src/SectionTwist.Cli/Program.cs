@@ -12,7 +12,7 @@ internal static class Program
     /// </summary>
     internal static IReadOnlyList<ICommand> Commands { get; } = new ICommand[]
     {
-        new BenchCommand(), new DemoCommand(), new InspectCommand(), new SectionCommand(), new ShaftCommand(),
+        new BenchCommand(), new DemoCommand(), new InspectCommand(), new ModesCommand(), new SectionCommand(), new ShaftCommand(),
         new SweepCommand(), new TemplatesCommand(), new VerifyCommand(),
     }.OrderBy(c => c.Name, StringComparer.Ordinal).ToArray();
 

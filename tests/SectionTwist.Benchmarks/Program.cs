@@ -11,6 +11,11 @@ public static class Program
 {
     public static void Main(string[] args)
     {
+        if (args.Length > 0 && args[0] == "modes")
+        {
+            ModalBenchmarks.Quick();
+            return;
+        }
         if (args.Length > 0 && args[0] == "quick")
         {
             QuickRun.Run(args.Length > 1 ? int.Parse(args[1], CultureInfo.InvariantCulture) : 158, args.Length > 2 && args[2] == "stock");

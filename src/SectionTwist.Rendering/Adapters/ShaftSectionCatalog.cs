@@ -49,6 +49,7 @@ public sealed class ShaftSectionCatalog
         return ShaftSections.Stiffness(source, r, outer) with
         {
             Bending = SectionTwist.Bending.BendingSection.FromSection(r, templateOuter),
+            PolarMoment = r.PolarMoment,
         };
     }
 

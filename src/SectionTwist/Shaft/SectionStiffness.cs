@@ -48,8 +48,15 @@ public sealed record SectionStiffness(double TorsionConstant, double ShearPerTor
             WarpingConstant = result.Warping?.WarpingConstant,
             MaxSectorialCoordinate = result.Warping?.MaxSectorialCoordinate,
             WarpingSensitive = result.Warping?.Classification == Warping.WarpingClass.WarpingSensitive,
+            PolarMoment = result.PolarMoment,
         };
     }
+
+    /// <summary>
+    /// Polar second moment of area about the centroid, Ix + Iy, m^4 (not J: it sets the rotational inertia rho Ip per unit
+    /// length); null when not known (a handbook section without <c>polarMoment</c>).
+    /// </summary>
+    public double? PolarMoment { get; init; }
 
     /// <summary>
     /// Exact values for a solid round of diameter <paramref name="diameter"/> (m): J = pi d^4 / 32, tau = 16 T / (pi d^3)
@@ -60,7 +67,7 @@ public sealed record SectionStiffness(double TorsionConstant, double ShearPerTor
         if (!(diameter > 0) || !double.IsFinite(diameter))
             throw new SectionTwistException("bad-section", $"round section: diameter {diameter} m must be positive");
         return new(Math.PI * Math.Pow(diameter, 4) / 32, 16 / (Math.PI * diameter * diameter * diameter),
-            $"round d={diameter * 1e3:G6} mm", diameter) { Bending = SectionTwist.Bending.BendingSection.Round(diameter) };
+            $"round d={diameter * 1e3:G6} mm", diameter) { Bending = SectionTwist.Bending.BendingSection.Round(diameter), PolarMoment = Math.PI * Math.Pow(diameter, 4) / 32 };
     }
 
     /// <summary>
@@ -78,7 +85,7 @@ public sealed record SectionStiffness(double TorsionConstant, double ShearPerTor
                 $"tube section: inner diameter {innerDiameter} m must be at least 0 and smaller than the outer diameter {outerDiameter} m");
         double d4 = Math.Pow(outerDiameter, 4) - Math.Pow(innerDiameter, 4);
         return new(Math.PI * d4 / 32, 16 * outerDiameter / (Math.PI * d4),
-            $"tube D={outerDiameter * 1e3:G6} mm d={innerDiameter * 1e3:G6} mm", outerDiameter) { Bending = SectionTwist.Bending.BendingSection.Tube(outerDiameter, innerDiameter) };
+            $"tube D={outerDiameter * 1e3:G6} mm d={innerDiameter * 1e3:G6} mm", outerDiameter) { Bending = SectionTwist.Bending.BendingSection.Tube(outerDiameter, innerDiameter), PolarMoment = Math.PI * d4 / 32 };
     }
 
     /// <summary>

@@ -10,4 +10,8 @@ namespace SectionTwist.Shaft;
 /// (<see cref="UnitSystem.For"/>) with the units its <c>units</c> block names for torque, stress, modulus, power and speed;
 /// replace it (<c>doc with { Units = UnitSystem.US }</c>, the command's <c>--units</c>) to show the results in another system.
 /// </param>
-public sealed record ShaftDocument(string Path, ShaftModel Model, UnitSystem Units);
+public sealed record ShaftDocument(string Path, ShaftModel Model, UnitSystem Units)
+{
+    /// <summary>The file's <c>dynamics</c> block (inertias, further shafts, stages, excitations), or null when it has none.</summary>
+    public Dynamics.DynamicsInput? Dynamics { get; init; }
+}

@@ -146,7 +146,7 @@ internal sealed partial class ShaftFileReader
     /// <summary>Checks a section definition now and returns a cached getter (template and DXF sections are analysed once, on first use).</summary>
     private Func<SectionStiffness> ReadSection(YamlNode node, string name)
     {
-        var m = new YamlMap(_file, node, $"section '{name}'", "round", "tube", "J", "shearFactor", "torsionalModulus", "description", "outerDiameter", "template", "dxf", "layer", "part");
+        var m = new YamlMap(_file, node, $"section '{name}'", "round", "tube", "J", "shearFactor", "torsionalModulus", "polarMoment", "description", "outerDiameter", "template", "dxf", "layer", "part");
         string[] kinds = [.. new[] { "round", "tube", "J", "template", "dxf" }.Where(m.Has)];
         if (kinds.Length != 1)
             throw _file.Error(node, kinds.Length == 0 ? "round" : kinds[1],
@@ -185,7 +185,9 @@ internal sealed partial class ShaftFileReader
                         factor = 1 / z;
                     }
                     if (!(factor > 0)) throw _file.Error(m.Get("shearFactor")!, "shearFactor", "must be positive");
-                    var s = new SectionStiffness(j, factor, description ?? name, od);
+                    double? ip = m.Quantity("polarMoment", QuantityKind.AreaMoment);
+                    if (ip is { } ipv && !(ipv > 0)) throw _file.Error(m.Get("polarMoment")!, "polarMoment", "the polar second moment of area must be positive");
+                    var s = new SectionStiffness(j, factor, description ?? name, od) { PolarMoment = ip };
                     return () => s;
                 }
             default:

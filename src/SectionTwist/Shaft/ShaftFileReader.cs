@@ -11,7 +11,7 @@ namespace SectionTwist.Shaft;
 /// </summary>
 internal sealed partial class ShaftFileReader
 {
-    private static readonly string[] TopKeys = ["title", "units", "materials", "sections", "stations", "segments", "loads", "supports", "springs", "reference", "twistLimit", "bending", "warping"];
+    private static readonly string[] TopKeys = ["title", "units", "materials", "sections", "stations", "segments", "loads", "supports", "springs", "reference", "twistLimit", "bending", "warping", "dynamics"];
     private readonly ShaftFileContext _file;
     private readonly string _baseDirectory;
     private readonly Func<SectionSource, SectionStiffness>? _resolver;
@@ -80,7 +80,7 @@ internal sealed partial class ShaftFileReader
             Bending = root.Get("bending") is { } bn ? ReadBending(bn) : null,
             Warping = root.Get("warping") is { } wn ? ReadWarping(wn) : null,
         };
-        return new ShaftDocument(path, model, units);
+        return new ShaftDocument(path, model, units) { Dynamics = root.Get("dynamics") is { } dn ? ReadDynamics(dn, model, materials, sections) : null };
     }
 
     /// <summary>Line and column (1-based) of the first tab in a line's leading white space, or null.</summary>

@@ -31,6 +31,7 @@ public static class ShaftSections
         return Stiffness(source, r, outer) with
         {
             Bending = SectionTwist.Bending.BendingSection.FromSection(r, outer),
+            PolarMoment = r.PolarMoment,
         };
     }
 

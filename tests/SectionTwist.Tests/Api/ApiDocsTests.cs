@@ -133,6 +133,19 @@ public partial class ApiDocsTests
     }
 
     [Fact]
+    public void Drivetrain_modes_in_code_match_the_two_rotor_formula()
+    {
+        var modes = ApiExamples.MotorAndDrumModes();
+        // omega^2 = k (I1 + I2) / (I1 I2), k = G J / L (Thomson, Theory of Vibration with Applications, two-rotor system);
+        // the shaft's own inertia (7850 * 1.9e-4 kg*m^2 over 0.6 m, about 0.001 kg*m^2) moves it by well under 1 %
+        double k = 79.3e9 * Math.PI * Math.Pow(0.040, 4) / 32 / 0.600;
+        double w = Math.Sqrt(k * (0.05 + 1.2) / (0.05 * 1.2));
+        Assert.True(modes.Modes[0].IsRigidBody);
+        Tol.Rel(w, modes.Modes[1].AngularFrequency, 0.01, "two-rotor formula");
+        Assert.True(modes.Modes[1].AngularFrequency < w, "the shaft's own inertia lowers the frequency");
+    }
+
+    [Fact]
     public void Shaft_in_code_twists_by_the_sum_of_T_L_over_G_J()
     {
         var res = ApiExamples.TwoStepShaft();

@@ -1,4 +1,5 @@
 using System.Globalization;
+using SectionTwist.Dynamics;
 using SectionTwist.Geometry;
 using SectionTwist.Import;
 using SectionTwist.Import.Dxf;
@@ -180,6 +181,25 @@ public static class ApiExamples
         ProfileSources.Register(new BarSource());          // or: ProfileSources.LoadPlugins("plugins")
         Profile bar = ProfileSources.Load("bar:60x10");
         return SectionAnalyzer.Analyze(bar);
+    }
+
+    // --- docs/api.md: "Torsional modes of a drivetrain in code" ---
+    public static ModalResult MotorAndDrumModes()
+    {
+        Material steel = ShaftMaterials.All["steel-1045-cd"];                // density 7850 kg/m^3
+        var shaft = new ShaftModel
+        {
+            Stations = [new Station("motor", 0.0), new Station("drum", 0.600)],
+            Segments = [new ShaftSegment("motor", "drum", SectionStiffness.Round(0.040), steel)],
+        };
+        var train = new DrivetrainModel
+        {
+            Shafts = [new ShaftBranch("drive shaft", shaft)],
+            Inertias = [new PointInertia("motor", 0.05), new PointInertia("drum", 1.2)],   // kg*m^2
+        };
+        ModalResult modes = ModalAnalysis.Solve(train, new ModalOptions { ModeCount = 2 });
+        // modes.Modes[0] is the rigid-body mode of the free train; modes.Modes[1].Frequency in Hz.
+        return modes;
     }
 
     // --- docs/api.md: "Open sections: warping and restrained-warping members" ---
