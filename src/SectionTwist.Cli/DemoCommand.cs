@@ -60,8 +60,8 @@ internal sealed class DemoCommand : ICommand
             doc = ShaftFile.Parse(ReadDemoFile(), "winch-shaft.yaml", resolver: sections.Resolver);
             if (units is not null) doc = doc with { Units = units };
             result = ShaftSolver.Solve(doc.Model);
-            while (!verifying.Wait(200)) progress.Report(0.85, "verification cases");
-            verification = verifying.GetAwaiter().GetResult();
+            using (progress.Pulse("verification cases"))
+                verification = verifying.GetAwaiter().GetResult();
             progress.Report(0.9, "pictures and report");
             var content = ShaftReport.Build(doc, result, sections, verification, CliReport.Options());
             files = ShaftReport.WriteBundle(content, folder).ToList();

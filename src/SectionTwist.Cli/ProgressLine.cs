@@ -35,7 +35,7 @@ internal sealed class ProgressLine : IDisposable
         {
             var now = _clock.Elapsed;
             // the final state is always drawn; others after the delay and at most five times a second
-            if (fraction < 1 && (now < _delay || now - _lastDraw < TimeSpan.FromMilliseconds(200))) return;
+            if (!(fraction >= 1) && (now < _delay || now - _lastDraw < TimeSpan.FromMilliseconds(200))) return;
             _lastDraw = now;
             string text = Text(_what, stage, fraction, now);
             _err.Write("\r" + text.PadRight(_width));
@@ -51,9 +51,26 @@ internal sealed class ProgressLine : IDisposable
     public IProgress<AnalysisProgress> Analysis(string stage, double from = 0, double to = 1) =>
         new Sink(p => Report(from + (to - from) * p.Fraction, $"{stage}: {p.Stage}"));
 
-    /// <summary>The line for a state of the job (tested without a terminal).</summary>
+    /// <summary>
+    /// Redraws the line twice a second with the time so far (no fraction) while work without its own progress reports runs
+    /// (a solver without a progress callback, waiting for a background task); dispose the result when it ends.
+    /// </summary>
+    public IDisposable Pulse(string stage) => new PulseTimer(new Timer(_ => Report(double.NaN, stage), null, TimeSpan.Zero, TimeSpan.FromMilliseconds(500)));
+
+    /// <summary>Stops the timer and waits for a callback in flight, so no redraw follows the caller's <see cref="Clear"/>.</summary>
+    private sealed class PulseTimer(Timer timer) : IDisposable
+    {
+        public void Dispose()
+        {
+            using var done = new ManualResetEvent(false);
+            if (timer.Dispose(done)) done.WaitOne();
+        }
+    }
+
+    /// <summary>The line for a state of the job (tested without a terminal); a NaN fraction shows only the time so far.</summary>
     internal static string Text(string what, string? stage, double fraction, TimeSpan elapsed)
     {
+        if (double.IsNaN(fraction)) return $"{what}{(stage is null ? "" : " (" + stage + ")")}: {Seconds(elapsed.TotalSeconds)} so far";
         fraction = Math.Clamp(fraction, 0, 1);
         string eta = fraction >= 0.02 && fraction < 1
             ? $", about {Seconds(elapsed.TotalSeconds * (1 - fraction) / fraction)} left"

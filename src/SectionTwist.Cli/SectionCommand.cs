@@ -10,7 +10,7 @@ internal sealed class SectionCommand : ICommand
     public string Name => "section";
     public string Summary => "torsion constant J, peak shear per torque and area properties of a cross-section";
     public string Usage => """
-        sectiontwist section SOURCE [--accuracy REL] [--unit U] [--units SYSTEM] [--layer NAME] [--part N] [--json] [--warping] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR]
+        sectiontwist section SOURCE [--accuracy REL] [--unit U] [--units SYSTEM] [--layer NAME] [--part N] [--json] [--warping] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR] [--plastic MATERIAL|STRESS [--plastic-plot FILE.png|svg]]
           SOURCE      a template spec such as circle:d=40, keyed:d=40, rect:b=60,h=20, a drawing file (.dxf),
                       a point list (.csv, .pts) or anything a plugin reads
           --accuracy  requested relative accuracy of J (default 1e-4)
@@ -24,6 +24,10 @@ internal sealed class SectionCommand : ICommand
           --torque    torque for the plot colour bar, in N*m, or with a unit: 250Nm, 2kN*m, 1800lbf*in (default: stress per unit torque)
           --dxf       write the outline (layer PROFILE) and stress-function contours (layer PHI) to a DXF file for CAD
           --dxf-mesh  also write the mesh edges (layer MESH)
+          --plastic   also the elastic-perfectly-plastic torsion: first-yield torque, fully plastic torque,
+                      shape factor and the torque-twist curve, for a material's shear yield (e.g. s355) or a
+                      shear yield stress (e.g. 140MPa)
+          --plastic-plot  write the plastic zone at each curve point (PNG or SVG)
           --plugins   load profile-source plugins (*.dll) from DIR; the SECTIONTWIST_PLUGINS environment
                       variable may list more folders (separated by the system path separator)
         """;
@@ -53,6 +57,9 @@ internal sealed class SectionCommand : ICommand
         string? dxf = args.Option("dxf");
         bool dxfMesh = args.Flag("dxf-mesh");
         string? plugins = args.Option("plugins");
+        var plasticYield = args.Option("plastic") is { } py ? PlasticCli.ParseYield(py) : ((double, string)?)null;
+        string? plasticPlot = args.Option("plastic-plot");
+        if (plasticPlot is not null && plasticYield is null) throw new UsageException("--plastic-plot needs --plastic MATERIAL|STRESS");
         if (args.Positional.Count != 1) throw new UsageException(args.Positional.Count == 0 ? "give one SOURCE (a template spec or a .dxf file)" : $"give one SOURCE, not {args.Positional.Count}");
         args.EnsureAllUsed();
         LoadPlugins(plugins);
@@ -65,8 +72,17 @@ internal sealed class SectionCommand : ICommand
             result = SectionAnalyzer.Analyze(profile, ctx.Analysis(accuracy) with { Warping = warping }, ctx.Cancellation, progress.Analysis("analysis"));
         if (plot is not null) SectionPlotHook.Write(result, plot, torque, SectionPlotHook.Title(source, srcOptions.Part), units);
         if (dxf is not null) SectionDxfExport.Write(result, dxf, dxfMesh);
-        if (json) ctx.Out.WriteLine(SectionJson.Write(result, source));
-        else SectionText.Write(ctx.Out, result, source, units);
+        Plastic.PlasticResult? plastic;
+        using (var progress = new ProgressLine(ctx, $"section {source}"))
+        using (progress.Pulse("plastic torsion"))
+            plastic = plasticYield is { } yv ? Plastic.PlasticAnalyzer.Analyze(result, yv.Item1, null, ctx.Cancellation) : null;
+        if (plastic is not null && plasticPlot is not null) PlasticPlotHook.Write(plastic, plasticPlot);
+        if (json) ctx.Out.WriteLine(SectionJson.Write(result, source, plastic is null ? null : w => PlasticCli.WriteJson(w, plastic, plasticYield!.Value.Item2)));
+        else
+        {
+            SectionText.Write(ctx.Out, result, source, units);
+            if (plastic is not null) PlasticCli.WriteText(ctx.Out, plastic, plasticYield!.Value.Item2);
+        }
         return 0;
     }
 

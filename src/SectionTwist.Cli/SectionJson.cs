@@ -8,13 +8,14 @@ namespace SectionTwist.Cli;
 /// <summary>The <c>--json</c> object for one section, in SI base units (m, m^2, m^4, 1/m^3); non-finite numbers are null.</summary>
 internal static class SectionJson
 {
-    public static string Write(SectionResult r, string source)
+    public static string Write(SectionResult r, string source, Action<Utf8JsonWriter>? extra = null)
     {
         using var ms = new MemoryStream();
         using (var w = new Utf8JsonWriter(ms, new JsonWriterOptions { Indented = true }))
         {
             w.WriteStartObject();
             Write(w, r, source);
+            extra?.Invoke(w);
             w.WriteEndObject();
         }
         return Encoding.UTF8.GetString(ms.ToArray());
@@ -70,8 +71,14 @@ internal static class SectionJson
         w.WriteNumber("elements", r.Mesh.Elements);
         Num(w, "minAngleDeg", r.Mesh.MinAngleDeg);
         w.WriteEndObject();
+        Warnings(w, r.Warnings);
+    }
+
+    /// <summary>Writes a <c>warnings</c> array of code and message objects.</summary>
+    internal static void Warnings(Utf8JsonWriter w, IEnumerable<AnalysisWarning> warnings)
+    {
         w.WriteStartArray("warnings");
-        foreach (var warn in r.Warnings)
+        foreach (var warn in warnings)
         {
             w.WriteStartObject();
             w.WriteString("code", warn.Code);

@@ -71,11 +71,9 @@ internal sealed class ShaftCommand : ICommand
         if (report is not null)
         {
             IReadOnlyList<Verification.VerificationOutcome> outcomes;
-            using (var progress = new ProgressLine(context, "report: verification cases"))
-            {
-                while (!verifying!.Wait(200)) progress.Report(0.5, "running");
-                outcomes = verifying.GetAwaiter().GetResult();
-            }
+            using (var progress = new ProgressLine(context, "report"))
+            using (progress.Pulse("verification cases"))
+                outcomes = verifying!.GetAwaiter().GetResult();
             ShaftReport.Write(ShaftReport.Build(doc, result, sections, outcomes, CliReport.Options()), report);
             context.Err.WriteLine($"wrote {report}");
         }

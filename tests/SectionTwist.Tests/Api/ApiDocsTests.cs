@@ -190,6 +190,19 @@ public partial class ApiDocsTests
         Assert.Equal("bar:60x10", r.Profile.Name);
     }
 
+    [Fact]
+    public void Plastic_summary_of_the_round_bar_has_shape_factor_4_3()
+    {
+        // d = 40 mm, tau_y = 100 MPa: T_y = pi r^3 tau_y / 2 = 1257 N*m (Timoshenko and Goodier sec. 101),
+        // T_p = 2 pi r^3 tau_y / 3 = 1676 N*m (Nadai sand heap), shape factor 4/3; at 10 x the first-yield twist
+        // T / T_y = 4/3 (1 - 1/4000) = 1.333 (Beer, Johnston and DeWolf sec. 3.9, from memory).
+        string s = ApiExamples.PlasticSummary(Round.Value, 100e6);
+        Assert.Contains("T_y=1257 N*m", s, StringComparison.Ordinal);
+        Assert.Contains("T_p=1676 N*m", s, StringComparison.Ordinal);
+        Assert.Contains("shape factor 1.333", s, StringComparison.Ordinal);
+        Assert.Contains("T=1.333 T_y", s, StringComparison.Ordinal);
+    }
+
     // Cantilever restrained at the wall: phi(L) = T/(GJ) (L - a tanh(L/a)) (Vlasov, Thin-Walled Elastic Beams, 2nd ed.,
     // ch. 5; AISC Design Guide 9, from memory), with J and Iw of the same analysed channel.
     [Fact]

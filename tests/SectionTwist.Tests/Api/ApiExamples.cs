@@ -3,6 +3,7 @@ using SectionTwist.Dynamics;
 using SectionTwist.Geometry;
 using SectionTwist.Import;
 using SectionTwist.Import.Dxf;
+using SectionTwist.Plastic;
 using SectionTwist.Profiles;
 using SectionTwist.Shaft;
 using SectionTwist.Torsion;
@@ -181,6 +182,18 @@ public static class ApiExamples
         ProfileSources.Register(new BarSource());          // or: ProfileSources.LoadPlugins("plugins")
         Profile bar = ProfileSources.Load("bar:60x10");
         return SectionAnalyzer.Analyze(bar);
+    }
+
+    // --- docs/api.md: "Yield and the fully plastic torque" ---
+    public static string PlasticSummary(SectionResult elastic, double shearYieldPascal)
+    {
+        // Elastic-perfectly-plastic: first yield, fully plastic torque (sand heap), torque-twist curve.
+        PlasticResult plastic = PlasticAnalyzer.Analyze(elastic, shearYieldPascal);
+        TorqueTwistPoint last = plastic.Curve[^1];
+        return string.Create(CultureInfo.InvariantCulture,
+            $"T_y={plastic.FirstYieldTorque:F0} N*m, T_p={plastic.FullyPlasticTorque:F0} N*m (+-{plastic.FullyPlasticTorqueError:P2}), " +
+            $"shape factor {plastic.ShapeFactor:F3}; at {last.TwistRatio} x first-yield twist T={last.TorqueRatio:F3} T_y, " +
+            $"{last.PlasticFraction:P0} yielded");
     }
 
     // --- docs/api.md: "Torsional modes of a drivetrain in code" ---

@@ -48,6 +48,14 @@ public sealed class JsonSchemaTests : IDisposable
     }
 
     [Fact]
+    public void Section_json_with_plastic_results_matches_its_schema()
+    {
+        var n = ValidOutput("section", "section", "circle:d=40", "--accuracy", "1e-3", "--plastic", "140MPa", "--json");
+        // circle: shape factor 4/3 (sand-heap analogy, Nadai; see PlasticClosedFormTests)
+        Tol.Rel(4.0 / 3, (double)n["plastic"]!["shapeFactor"]!, 1e-3, "circle shape factor 4/3");
+    }
+
+    [Fact]
     public void Section_json_with_warping_matches_its_schema()
     {
         var n = ValidOutput("section", "section", "channel:h=100,b=50,tw=6,tf=8.5,r=8.5", "--accuracy", "1e-3", "--warping", "--json");

@@ -10,6 +10,7 @@ public sealed class ProgressAndBenchTests
     [InlineData(0.25, 10, "analysis (solve): 25 %, 10 s so far, about 30 s left")]
     [InlineData(0.5, 120, "analysis (solve): 50 %, 2 min so far, about 2 min left")]
     [InlineData(0.01, 1, "analysis (solve): 1 %, 1 s so far")] // too early for an estimate
+    [InlineData(double.NaN, 7, "analysis (solve): 7 s so far")] // work without its own progress: the time only
     public void Progress_line_gives_the_time_left(double fraction, double seconds, string expected) =>
         Assert.Equal(expected, SectionTwist.Cli.ProgressLine.Text("analysis", "solve", fraction, TimeSpan.FromSeconds(seconds)));
 
