@@ -9,14 +9,16 @@ internal sealed class SectionCommand : ICommand
 {
     public string Name => "section";
     public string Summary => "torsion constant J, peak shear per torque and area properties of a cross-section";
-    public string Usage => """
-        sectiontwist section SOURCE [--accuracy REL] [--unit U] [--units SYSTEM] [--layer NAME] [--part N] [--json] [--warping] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR] [--plastic MATERIAL|STRESS [--plastic-plot FILE.png|svg]]
+    public string Usage => $$"""
+        sectiontwist section SOURCE [--accuracy REL] [--unit U] [--units SYSTEM] [drawing options] [--json] [--warping] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR] [--plastic MATERIAL|STRESS [--plastic-plot FILE.png|svg]]
           SOURCE      a template spec such as circle:d=40, keyed:d=40, rect:b=60,h=20, a drawing file (.dxf),
                       a point list (.csv, .pts) or anything a plugin reads
           --accuracy  requested relative accuracy of J (default 1e-4)
           --unit      length unit of the input (mm, cm, m, in, ft); specs default to mm
           --units     units of the table and the plot: SI-mm, SI-m or US (default: the input's own, e.g. US for inches)
-          --layer     use only this drawing layer;  --part N  use only the N-th separate part (largest first)
+        drawing options (see 'sectiontwist inspect' to list layers and parts):
+        {{DrawingOptions.Usage}}
+        output options:
           --json      print one JSON object in SI base units (m, m^2, m^4, 1/m^3); --units does not change it
           --warping   also solve the warping function: shear centre, warping constant Iw, largest sectorial
                       coordinate, warping length for steel and whether restrained warping matters
@@ -42,15 +44,14 @@ internal sealed class SectionCommand : ICommand
         double accuracy = args.Double("accuracy") ?? 1e-4;
         if (!(accuracy > 0 && accuracy < 0.5)) throw new UsageException("--accuracy must lie between 0 and 0.5, e.g. 1e-4");
         var unitText = args.Option("unit");
-        var srcOptions = new ProfileSourceOptions
+        var drawingNotes = new List<string>();
+        var srcOptions = DrawingOptions.Read(args, new ProfileSourceOptions
         {
             Unit = unitText is null ? null : LengthUnit.Parse(unitText),
-            Layer = args.Option("layer"),
-            Part = args.Int("part"),
             Accuracy = accuracy,
-            Notes = json ? null : note => ctx.Err.WriteLine($"note: {note}"),
+            Notes = json ? drawingNotes.Add : note => ctx.Err.WriteLine($"note: {note}"),
             Cancellation = ctx.Cancellation,
-        };
+        });
         string? plot = args.Option("plot");
         double? torque = TorqueOption(args.Option("torque"));
         var units = args.Option("units") is { } us ? UnitSystem.Parse(us) : null;
@@ -70,6 +71,9 @@ internal sealed class SectionCommand : ICommand
         SectionResult result;
         using (var progress = new ProgressLine(ctx, $"section {source}"))
             result = SectionAnalyzer.Analyze(profile, ctx.Analysis(accuracy) with { Warping = warping }, ctx.Cancellation, progress.Analysis("analysis"));
+        // in JSON the reader's notes (parts analysed together, entities left out, facets) travel with the warnings
+        if (drawingNotes.Count > 0)
+            result = result with { Warnings = drawingNotes.Select(n => new AnalysisWarning("drawing", n)).Concat(result.Warnings).ToList().AsReadOnly() };
         if (plot is not null) SectionPlotHook.Write(result, plot, torque, SectionPlotHook.Title(source, srcOptions.Part), units);
         if (dxf is not null) SectionDxfExport.Write(result, dxf, dxfMesh);
         Plastic.PlasticResult? plastic;

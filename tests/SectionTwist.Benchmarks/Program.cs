@@ -5,7 +5,7 @@ namespace SectionTwist.Benchmarks;
 
 /// <summary>
 /// BenchmarkDotNet entry (<c>dotnet run -c Release -- --filter *SolverBenchmarks*</c>), or <c>quick [m]</c> for a
-/// single pass with the Math.NET baseline and the ratio.
+/// single pass with the Math.NET baseline and the ratio, or <c>sheet [entities]</c> for the drawing-sheet timing (<see cref="SheetRun"/>).
 /// </summary>
 public static class Program
 {
@@ -19,6 +19,11 @@ public static class Program
         if (args.Length > 0 && args[0] == "quick")
         {
             QuickRun.Run(args.Length > 1 ? int.Parse(args[1], CultureInfo.InvariantCulture) : 158, args.Length > 2 && args[2] == "stock");
+            return;
+        }
+        if (args.Length > 0 && args[0] == "sheet")
+        {
+            SheetRun.Run(args.Length > 1 ? int.Parse(args[1], CultureInfo.InvariantCulture) : 50_000);
             return;
         }
         BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args);

@@ -86,12 +86,19 @@ public sealed class Profile
     /// <summary>All loops: for each region its outer loop then its holes.</summary>
     public IEnumerable<Loop> Loops => Regions.SelectMany(r => r.Loops);
 
+    /// <summary>
+    /// Largest distance, metres, between the outline and the drawn curves it stands for where those could not be kept
+    /// exactly (splines and bent ellipses replaced by arcs); 0 when the outline is the drawn geometry. The analysis adds
+    /// its effect on J to the error estimate.
+    /// </summary>
+    public double CurveTolerance { get; init; }
+
     /// <summary>Exact area properties (lines and arcs integrated exactly).</summary>
     public SectionProperties Properties => _properties ??= SectionProperties.Compute(this);
 
     /// <summary>The profile moved by a similarity transform.</summary>
-    public Profile Transformed(Similarity2 t) => new(Regions.Select(r => r.Transformed(t)), Unit, Name);
+    public Profile Transformed(Similarity2 t) => new(Regions.Select(r => r.Transformed(t)), Unit, Name) { CurveTolerance = CurveTolerance * t.Scale };
 
     /// <summary>The same profile under another name or display unit.</summary>
-    public Profile With(string? name = null, LengthUnit? unit = null) => new(Regions, unit ?? Unit, name ?? Name);
+    public Profile With(string? name = null, LengthUnit? unit = null) => new(Regions, unit ?? Unit, name ?? Name) { CurveTolerance = CurveTolerance };
 }

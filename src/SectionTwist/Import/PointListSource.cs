@@ -8,7 +8,8 @@ namespace SectionTwist.Import;
 /// A plain-text point list (<c>.csv</c>, <c>.pts</c>): one <c>x, y</c> vertex per line; a blank line ends a loop;
 /// <c>arc, xm, ym, xe, ye</c> adds an arc from the previous point through (xm, ym) to (xe, ye); <c>unit, in</c> sets
 /// the length unit (default mm); <c>#</c> starts a comment. Loops close themselves; nesting decides outer loops and
-/// holes. This source is also the worked example of writing an <see cref="IProfileSource"/>.
+/// holes. Curves given as many short lines are named in a note, or fitted by arcs with
+/// <see cref="ProfileSourceOptions.FitArcs"/>. This source is also the worked example of writing an <see cref="IProfileSource"/>.
 /// </summary>
 public sealed class PointListSource : IProfileSource
 {
@@ -27,7 +28,7 @@ public sealed class PointListSource : IProfileSource
     {
         ArgumentNullException.ThrowIfNull(options);
         string text = Limits.InputFile.ReadAllText(source, Limits.InputLimits.MaxPointListBytes, "point list", options.Cancellation);
-        return Parse(new StringReader(text), Path.GetFileName(source), options.Unit, options.Cancellation);
+        return FacetFit.Apply(Parse(new StringReader(text), Path.GetFileName(source), options.Unit, options.Cancellation), options);
     }
 
     /// <summary>Parses point-list text; <paramref name="name"/> is used in messages.</summary>

@@ -146,7 +146,8 @@ internal sealed partial class ShaftFileReader
     /// <summary>Checks a section definition now and returns a cached getter (template and DXF sections are analysed once, on first use).</summary>
     private Func<SectionStiffness> ReadSection(YamlNode node, string name)
     {
-        var m = new YamlMap(_file, node, $"section '{name}'", "round", "tube", "J", "shearFactor", "torsionalModulus", "polarMoment", "description", "outerDiameter", "template", "dxf", "layer", "part");
+        var m = new YamlMap(_file, node, $"section '{name}'", "round", "tube", "J", "shearFactor", "torsionalModulus", "polarMoment", "description", "outerDiameter", "template", "dxf",
+            "layer", "part", "at", "window", "hatch", "fitArcs", "snap", "skipOpen", "unit");
         string[] kinds = [.. new[] { "round", "tube", "J", "template", "dxf" }.Where(m.Has)];
         if (kinds.Length != 1)
             throw _file.Error(node, kinds.Length == 0 ? "round" : kinds[1],
@@ -193,11 +194,13 @@ internal sealed partial class ShaftFileReader
             default:
                 {
                     bool template = kinds[0] == "template";
-                    if (template && (m.Has("layer") || m.Has("part")))
-                        throw _file.Error(m.KeyNode(m.Has("layer") ? "layer" : "part"), m.Has("layer") ? "layer" : "part", "'layer' and 'part' belong to DXF sections; remove them from a template section");
+                    if (template && DrawingKeys.FirstOrDefault(m.Has) is { } drawingKey)
+                        throw _file.Error(m.KeyNode(drawingKey), drawingKey, $"'{drawingKey}' belongs to DXF sections ({string.Join(", ", DrawingKeys)}); remove it from a template section");
                     string value = m.String(kinds[0])!;
                     string? dxfPath = template ? null : Path.GetFullPath(Path.Combine(_baseDirectory, value));
-                    var src = new SectionSource(name, template ? value : null, dxfPath, m.String("layer"), m.String("part"), _file.Where(m.Get(kinds[0])!));
+                    var src = template
+                        ? new SectionSource(name, value, null, null, null, _file.Where(m.Get(kinds[0])!))
+                        : ReadDrawingKeys(m, name, dxfPath!);
                     var at = m.Get(kinds[0])!;
                     SectionStiffness? cached = null;
                     return () => cached ??= Resolve(src, at, kinds[0], description, od);

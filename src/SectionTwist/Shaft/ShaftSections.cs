@@ -64,10 +64,25 @@ public static class ShaftSections
             if (source.Part is { } p)
             {
                 if (!int.TryParse(p, NumberStyles.Integer, CultureInfo.InvariantCulture, out int n) || n < 1)
-                    throw new SectionTwistException("bad-section", $"part '{p}' must be a whole number from 1 (the n-th closed outline of the drawing)");
+                    throw new SectionTwistException("bad-section", $"part '{p}' must be a whole number from 1 (the n-th part of the drawing, largest first, as 'sectiontwist inspect' lists them)");
                 part = n;
             }
-            profile = ProfileSources.Load(path, new ProfileSourceOptions { Layer = source.Layer, Part = part, Notes = notes, Cancellation = ct });
+            profile = ProfileSources.Load(path, new ProfileSourceOptions
+            {
+                Layer = source.Layer,
+                Part = part,
+                At = source.At,
+                Window = source.Window,
+                UseHatches = source.UseHatches,
+                FitArcs = source.FitArcs,
+                SnapTolerance = source.SnapTolerance,
+                SkipOpen = source.SkipOpen,
+                Unit = source.Unit,
+                Accuracy = options?.Accuracy ?? new AnalysisOptions().Accuracy,
+                Notes = notes,
+                ShaftFileKeys = true,
+                Cancellation = ct,
+            });
         }
         else throw new SectionTwistException("bad-section", $"{source.Location}: section '{source.Name}' names neither a template nor a DXF file");
 

@@ -32,13 +32,14 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
         var corners = CornerAnalysis.Corners(profile);
         double p = CornerAnalysis.TorsionConstantOrder(corners);
         double warnAngle = options.ReentrantWarningAngleDeg * Math.PI / 180;
-        var sharp = corners.Where(c => c.InteriorAngle > warnAngle).ToList();
+        var (sharp, facetWarnings) = FacetWarnings.Split(profile, corners.Where(c => c.InteriorAngle > warnAngle).ToList(), Show);
+        warnings.AddRange(facetWarnings);
         foreach (var c in sharp.Take(5))
             warnings.Add(new AnalysisWarning("sharp-reentrant-corner",
                 $"sharp re-entrant corner at {Show(c.Where)} (interior angle {c.InteriorAngle * 180 / Math.PI:F0} deg): the peak shear there is singular and grows with refinement; model the real fillet radius"));
         if (sharp.Count > 5)
             warnings.Add(new AnalysisWarning("sharp-reentrant-corner", $"{sharp.Count - 5} more sharp re-entrant corners; model the real fillet radii"));
-        bool singular = sharp.Count > 0;
+        bool singular = sharp.Count > 0 || facetWarnings.Count > 0;
 
         var holeArea = profile.Regions.SelectMany(r => r.Loops).Select(l => Math.Abs(l.SignedArea)).ToArray();
         double size = Math.Sqrt(props.Area);
@@ -129,6 +130,7 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
                     $"the profile has {profile.Regions.Count} separate parts: they warp independently and have no common shear centre; analyse each part alone for its warping properties"));
             else estJ = Bracket(j, useF.J, warping.TorsionConstantUpperBound, estJ);
         }
+        estJ += CurveTerm(useF);
         var field = FieldRecovery.Build(useF);
         Report("done", 1);
         return new SectionResult
@@ -145,6 +147,21 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
             RegionTorsionConstants = Array.AsReadOnly(regionJ),
             Warping = warping,
         };
+    }
+
+    /// <summary>
+    /// The effect on J of drawn curves replaced within <see cref="Profile.CurveTolerance"/> h: by the shape derivative of
+    /// the torsion constant, dJ = integral over the boundary of |grad phi|^2 times the normal displacement (Hadamard's
+    /// formula for the Dirichlet problem; Sokolowski and Zolesio, Introduction to Shape Optimization, Springer 1992,
+    /// ch. 3; for the torsional rigidity see Polya and Szego, Isoperimetric Inequalities in Mathematical Physics, 1951),
+    /// so |dJ| / J &lt;= h (max |grad phi|)^2 (perimeter) / J, a bound.
+    /// </summary>
+    private double CurveTerm(TorsionSolution s)
+    {
+        double h = profile.CurveTolerance;
+        if (!(h > 0)) return 0;
+        double perimeter = profile.Loops.Sum(l => l.Perimeter);
+        return h * s.MaxGradient * s.MaxGradient * perimeter / s.J;
     }
 
     /// <summary>

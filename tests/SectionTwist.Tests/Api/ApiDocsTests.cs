@@ -57,6 +57,14 @@ public partial class ApiDocsTests
     }
 
     [Fact]
+    public void Largest_part_of_a_sheet_is_the_tube_of_its_section_view()
+    {
+        // Exact: J = pi (D^4 - d^4) / 32 for the sheet's 40/16 mm tube (Timoshenko and Goodier, ch. 10).
+        var r = ApiExamples.LargestPartOfSheet(SectionTwist.Tests.Import.SheetDrawingTests.Write(SectionTwist.Tests.Import.RegressionDrawings.Sheet()));
+        Tol.Rel(Math.PI * (Math.Pow(0.040, 4) - Math.Pow(0.016, 4)) / 32, r.TorsionConstant, 2e-4);
+    }
+
+    [Fact]
     public void Dxf_stream_reads_back_the_written_profile_area()
     {
         var original = ProfileTemplates.Create("tube:D=50,d=40");

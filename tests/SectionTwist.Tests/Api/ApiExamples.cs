@@ -30,6 +30,15 @@ public static class ApiExamples
     }
 
     // --- docs/api.md: "A profile from a DXF file or stream" ---
+    public static SectionResult LargestPartOfSheet(string path)
+    {
+        // List the parts of the sheet, then analyse the largest one, chosen by a point inside it.
+        DxfImportReport sheet = DxfProfiles.Inspect(path, new DxfReadOptions());
+        DxfPartInfo largest = sheet.Parts[0];
+        var options = new DxfReadOptions { At = largest.Inside };
+        return SectionAnalyzer.Analyze(DxfProfiles.Read(path, options).Profile);
+    }
+
     public static SectionResult TubeFromDxfFile(string path)
     {
         DxfImport import = DxfProfiles.Read(path, new DxfReadOptions { Layer = "DRUM" });

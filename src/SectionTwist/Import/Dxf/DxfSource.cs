@@ -18,14 +18,24 @@ internal sealed class DxfSource : IProfileSource
         return read.Profile;
     }
 
-    /// <summary>Maps the generic source options; the spline chord tolerance is a tenth of the requested accuracy (at most 1e-5).</summary>
+    /// <summary>
+    /// Maps the generic source options. Splines become arcs within a thousandth of the requested accuracy (at most 1e-7
+    /// of their size): the change of J is bounded by that deviation times the boundary integral of the squared shear
+    /// (shape derivative of the torsion constant), a small fraction of the accuracy.
+    /// </summary>
     internal static DxfReadOptions ToDxf(ProfileSourceOptions o) => new()
     {
         Unit = o.Unit,
         Layer = o.Layer,
         Part = o.Part,
+        At = o.At,
+        Window = o.Window,
+        UseHatches = o.UseHatches,
+        FitArcs = o.FitArcs,
+        SkipOpen = o.SkipOpen,
         SnapTolerance = o.SnapTolerance ?? 1e-6,
-        SplineTolerance = Math.Clamp(o.Accuracy / 10, 1e-9, 1e-5),
+        SplineTolerance = Math.Clamp(o.Accuracy / 1000, 1e-10, 1e-7),
+        ShaftFileKeys = o.ShaftFileKeys,
     };
 
     /// <summary>True when the largest gap closed is zero or round-off (a millionth of the default snap tolerance, about 1e-12 of the part).</summary>
@@ -38,6 +48,5 @@ internal sealed class DxfSource : IProfileSource
         // gaps of round-off size (end points that meet in exact arithmetic) are no news
         if (!IsRoundOff(r)) notes($"joined end points up to {Units.NumberText.Format(r.LargestGapClosed, 3)} {r.Unit?.Symbol ?? "drawing units"} apart");
         if (r.DuplicatesDropped > 0) notes($"dropped {r.DuplicatesDropped} duplicate or overlapping piece(s)");
-        if (r.Parts.Count > 1 && r.SelectedPart is null) notes($"{r.Parts.Count} separate parts analysed together; pick one with --part N (largest first)");
     }
 }
