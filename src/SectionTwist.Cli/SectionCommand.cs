@@ -31,8 +31,7 @@ internal sealed class SectionCommand : ICommand
     public int Run(Args args, CliContext ctx)
     {
         bool json = args.Flag("json");
-        double accuracy = args.Double("accuracy") ?? 1e-4;
-        if (!(accuracy > 0 && accuracy < 0.5)) throw new UsageException("--accuracy must lie between 0 and 0.5, e.g. 1e-4");
+        double accuracy = AccuracyOption.Read(args) ?? 1e-4;
         var unitText = args.Option("unit");
         var srcOptions = new ProfileSourceOptions
         {

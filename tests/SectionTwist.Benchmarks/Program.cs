@@ -16,6 +16,17 @@ public static class Program
             QuickRun.Run(args.Length > 1 ? int.Parse(args[1], CultureInfo.InvariantCulture) : 158, args.Length > 2 && args[2] == "stock");
             return;
         }
+        if (args.Length > 0 && args[0] == "estimates")
+        {
+            double[] acc = args.Length > 1 ? args[1].Split(',').Select(v => double.Parse(v, CultureInfo.InvariantCulture)).ToArray() : [1e-3, 1e-4, 1e-5, 1e-6];
+            double reference = args.Length > 2 ? double.Parse(args[2], CultureInfo.InvariantCulture) : 1e-8;
+            Environment.Exit(EstimateSweep.Run(acc, reference, args.Length > 3 ? args[3] : null) == 0 ? 0 : 1);
+        }
+        if (args.Length > 0 && args[0] == "orders")
+        {
+            Orders.Run(args[2..], double.Parse(args[1], CultureInfo.InvariantCulture));
+            return;
+        }
         BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args);
     }
 }

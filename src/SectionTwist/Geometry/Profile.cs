@@ -74,12 +74,18 @@ public sealed class Profile
     /// <summary>All loops: for each region its outer loop then its holes.</summary>
     public IEnumerable<Loop> Loops => Regions.SelectMany(r => r.Loops);
 
+    /// <summary>
+    /// Cautions from the source that built the profile (e.g. a template default quoted from memory of a standard);
+    /// empty for most profiles. An analysis repeats them among its warnings.
+    /// </summary>
+    public IReadOnlyList<ProfileWarning> Warnings { get; init; } = [];
+
     /// <summary>Exact area properties (lines and arcs integrated exactly).</summary>
     public SectionProperties Properties => _properties ??= SectionProperties.Compute(this);
 
     /// <summary>The profile moved by a similarity transform.</summary>
-    public Profile Transformed(Similarity2 t) => new(Regions.Select(r => r.Transformed(t)), Unit, Name);
+    public Profile Transformed(Similarity2 t) => new(Regions.Select(r => r.Transformed(t)), Unit, Name) { Warnings = Warnings };
 
     /// <summary>The same profile under another name or display unit.</summary>
-    public Profile With(string? name = null, LengthUnit? unit = null) => new(Regions, unit ?? Unit, name ?? Name);
+    public Profile With(string? name = null, LengthUnit? unit = null) => new(Regions, unit ?? Unit, name ?? Name) { Warnings = Warnings };
 }

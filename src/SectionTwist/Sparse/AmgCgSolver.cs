@@ -4,7 +4,7 @@ namespace SectionTwist.Sparse;
 
 /// <summary>
 /// Conjugate gradients preconditioned by a smoothed-aggregation multigrid V-cycle (<see cref="SmoothedAggregation"/>),
-/// solved to a fixed relative residual.
+/// solved to a relative residual (or to the attainable floor, see <see cref="ConjugateGradient"/>).
 /// </summary>
 internal sealed class AmgCgSolver : ISpdSolver
 {
@@ -23,13 +23,19 @@ internal sealed class AmgCgSolver : ISpdSolver
     public double Tolerance { get; }
 
     /// <summary>Iterations used by the last solve.</summary>
-    public int LastIterations { get; private set; }
+    public int LastIterations => LastOutcome.Iterations;
+
+    /// <summary>How the last solve ended.</summary>
+    public ConjugateGradient.Outcome LastOutcome { get; private set; }
+
+    /// <summary>Iteration limit per solve.</summary>
+    public const int MaxIterations = 1000;
 
     /// <summary>Builds the multigrid hierarchy for <paramref name="a"/>.</summary>
     public static AmgCgSolver Create(CscMatrix a, double tolerance = 1e-11, CancellationToken ct = default)
         => new(CsrMatrix.FromSymmetric(a), SmoothedAggregation.Build(a, ct: ct), tolerance, ct);
 
-    /// <inheritdoc/>
+    /// <summary>Solves; a stalled iteration returns its best iterate (see <see cref="LastOutcome"/>).</summary>
     public void Solve(ReadOnlySpan<double> b, Span<double> x)
-        => LastIterations = ConjugateGradient.Solve(_a, Hierarchy.VCycle, b, x, Tolerance, 1000, _ct);
+        => LastOutcome = ConjugateGradient.Solve(_a, Hierarchy.VCycle, b, x, Tolerance, MaxIterations, _ct);
 }

@@ -151,7 +151,7 @@ public partial class ApiDocsTests
     {
         // 60 x 10 bar: J = beta a b^3 from the series of Timoshenko and Goodier, sec. 109.
         var r = ApiExamples.AnalyseWithOwnSource();
-        var (beta, _) = VerificationSuite.RectangleSeries(0.060, 0.010);
+        var (beta, _) = SectionTwist.Tests.References.Published.Rectangle(0.060, 0.010);
         Tol.Rel(beta * 0.060 * Math.Pow(0.010, 3), r.TorsionConstant, 2e-4);
         Assert.Equal("bar:60x10", r.Profile.Name);
     }

@@ -36,7 +36,11 @@ public class TemplateParameterTests
         var e = Assert.Throws<SectionTwistException>(() => ProfileTemplates.Create("keyed:d=150"));
         Assert.Contains("DIN 6885-1 lists shafts over 6 up to 110 mm", e.Message, StringComparison.Ordinal);
         Assert.Contains("give b= and t1= explicitly", e.Message, StringComparison.Ordinal);
-        Assert.True(ProfileTemplates.Create("keyed:d=150,b=36,t1=12").Properties.Area > 0);
+        // Explicit sizes work: circle minus the keyseat strip plus two floor spandrels of the default radius, 0.70 mm for
+        // a 36 mm key (ISO 773 / DIN 6885-1 from memory, Published.KeyseatRadiusFromMemory); exact integrals (ClosedForms).
+        double radius = 0.075, r = 0.7e-3;
+        double area = Math.PI * radius * radius - ClosedForms.Keyseat(radius, 0.036, radius - 0.012).A + 2 * ClosedForms.SpandrelArea(r);
+        Tol.Rel(area, ProfileTemplates.Create("keyed:d=150,b=36,t1=12").Properties.Area, 1e-10);
     }
 
     [Fact]
