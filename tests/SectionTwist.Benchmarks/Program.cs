@@ -5,7 +5,9 @@ namespace SectionTwist.Benchmarks;
 
 /// <summary>
 /// BenchmarkDotNet entry (<c>dotnet run -c Release -- --filter *SolverBenchmarks*</c>), or <c>quick [m]</c> for a
-/// single pass with the Math.NET baseline and the ratio.
+/// single pass with the Math.NET baseline and the ratio, <c>orders [h] [specs]</c> for observed convergence orders
+/// (<see cref="Orders"/>), <c>estimates [accuracies] [reference] [name filter]</c> for the error estimates against the
+/// true errors (<see cref="EstimateSweep"/>).
 /// </summary>
 public static class Program
 {
@@ -24,7 +26,7 @@ public static class Program
         }
         if (args.Length > 0 && args[0] == "orders")
         {
-            Orders.Run(args[2..], double.Parse(args[1], CultureInfo.InvariantCulture));
+            Orders.Run(args.Length > 1 ? double.Parse(args[1], CultureInfo.InvariantCulture) : 0.15, args.Length > 2 ? args[2..] : null);
             return;
         }
         BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args);

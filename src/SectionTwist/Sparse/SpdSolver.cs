@@ -60,7 +60,6 @@ internal static class SpdSolver
             if (_direct is null)
             {
                 iterative.Solve(b, x);
-                if (Environment.GetEnvironmentVariable("ST_TRACE") is not null) Console.Error.WriteLine($"TRACE cg n {a.N} {iterative.LastOutcome}");
                 if (iterative.LastOutcome.Converged) return;
             }
             _direct ??= CreateDirect(a, ct);

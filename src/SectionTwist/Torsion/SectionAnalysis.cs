@@ -28,7 +28,6 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
     internal const double SafetyFactor = 1.25;
 
     private SectionResult? _result;
-    private readonly long _t0 = System.Diagnostics.Stopwatch.GetTimestamp();
 
     public SectionResult Compute() => _result ??= Run();
 
@@ -91,8 +90,8 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
             // erratic between 1.5 and 5 on corners and kinks) times the safety factor, plus the resolution floor of the
             // boundary recovery: the smoothed peak carries a bias of order 1e-5 that does not show between two meshes.
             estT = SafetyFactor * Math.Abs(tf - tc) / tf + ShearFloor;
-            bool shearOk = singular || estT <= shearTarget;
-            if (Environment.GetEnvironmentVariable("ST_TRACE") is not null) Console.Error.WriteLine($"TRACE pass {pass} el {coarseMesh.ElementCount} estJ {estJ:E2} peff {p:F2} estT {estT:E2} t {System.Diagnostics.Stopwatch.GetElapsedTime(_t0).TotalSeconds:F1}s res {fine.Residual:E1}");
+            // The estimate holds only once the peak is resolved on the coarse mesh (fillet edges of at most 15 deg).
+            bool shearOk = singular || (estT <= shearTarget && AdaptiveSizing.PeakResolved(coarse));
             if (estJ <= acc && shearOk) break;
             if (pass == MaxPasses - 1)
             {
@@ -126,6 +125,13 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
             for (int r = 0; r < regionJ.Length; r++) regionJ[r] = useF.RegionJ[r] + last.RegionCorrection[r];
         }
         if (singular) estT = double.PositiveInfinity;
+        else if (last is not null && !AdaptiveSizing.PeakResolved(useC))
+        {
+            // The limits stopped refinement before the peak was resolved: its two-mesh change is no bound.
+            estT = double.NaN;
+            warnings.Add(new AnalysisWarning("peak-shear-unresolved",
+                $"the peak shear at {Show(useF.MaxGradientLocation)} lies on a curve the mesh did not resolve within the limits; its error is not estimated; rerun with a finer accuracy (the first mesh is then finer at the peak)"));
+        }
         var field = FieldRecovery.Build(useF);
         Report("done", 1);
         return new SectionResult
@@ -151,7 +157,7 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
     internal static double SolverTolerance(double accuracy) => Math.Clamp(1e-4 * accuracy, 1e-12, 1e-9);
 
     /// <summary>Largest arc angle per boundary edge: coarse curved edges suffice at modest accuracy.</summary>
-    private static double ArcAngle(double accuracy) => Math.Clamp(30 * Math.Pow(accuracy / 1e-4, 0.125), 10, 45);
+    private static double ArcAngle(double accuracy) => Math.Clamp(30 * Math.Pow(accuracy / 1e-4, 0.125), 10, AdaptiveSizing.PeakEdgeTurn * 180 / Math.PI);
 
     private void Report(string stage, double fraction) => progress?.Report(new AnalysisProgress(stage, Math.Clamp(fraction, 0, 1)));
 
