@@ -8,7 +8,7 @@ namespace SectionTwist.Cli;
 /// <summary>Time to an accurate J: the whole analysis (mesh, solves, error estimate) at accuracy 1e-4, timed after a warm-up.</summary>
 internal static class SectionBench
 {
-    private static readonly string[] Specs = ["keyed:d=40", "keyed:d=40,r=0.4", "shs:B=80,t=5", "iso14:8x36x42,r=0.3"];
+    private static readonly string[] Specs = ["keyed:d=40,r=0", "keyed:d=40", "keyed:d=40,r=0.4", "shs:B=80,t=5", "iso14:8x36x42,r=0.3"];
 
     public static void Run(TextWriter w)
     {

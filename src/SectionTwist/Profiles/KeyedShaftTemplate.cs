@@ -19,7 +19,7 @@ internal static class KeyedShaftTemplate
                 new TemplateParameter("at", ParameterKind.AngleList, "angular positions of the keyseat centre lines from +x", "90 and evenly spaced"),
                 new TemplateParameter("b", ParameterKind.Length, "keyseat width", "DIN 6885-1 by d"),
                 new TemplateParameter("t1", ParameterKind.Length, "keyseat depth from the surface", "DIN 6885-1 by d"),
-                new TemplateParameter("r", ParameterKind.Length, "keyseat floor corner radius (0 = sharp: singular peak shear)", "smallest DIN 6885-1 radius for b (from memory)")),
+                new TemplateParameter("r", ParameterKind.Length, "keyseat floor corner radius (0 = sharp: singular peak shear)", "DIN 6885-1 min. by b (memory)")),
             "D = d", "keyed:d=40mm,n=2", ["keyway", "keyseat"]),
         Build,
         (a, _) => a.Length("d"));

@@ -18,7 +18,7 @@ internal static class StraightSplineTemplate
                 new TemplateParameter("d", ParameterKind.Length, "minor (root) diameter"),
                 new TemplateParameter("D", ParameterKind.Length, "major (tip) diameter", "ISO 14 row"),
                 new TemplateParameter("B", ParameterKind.Length, "tooth width", "ISO 14 row"),
-                new TemplateParameter("r", ParameterKind.Length, "root fillet radius, flank to core (0 = sharp)", "ISO 14 by D (from memory)"),
+                new TemplateParameter("r", ParameterKind.Length, "root fillet radius, flank to core (0 = sharp)", "ISO 14 by D (memory)"),
                 new TemplateParameter("series", ParameterKind.Choice, "ISO 14 series for the defaults", "any", ["light", "medium"])),
             "D = D (major diameter)", "spline:series=light,N=8,d=32", ["iso14"]),
         Build,
