@@ -42,7 +42,7 @@ public sealed class JsonSchemaTests : IDisposable
     public void Section_json_with_warnings_and_an_unbounded_shear_estimate_matches_its_schema()
     {
         // A sharp keyseat: the peak-shear error estimate is infinite (written as null) and warnings are present.
-        var n = ValidOutput("section", "section", "keyed:d=40", "--accuracy", "1e-3", "--json");
+        var n = ValidOutput("section", "section", "keyed:d=40,r=0", "--accuracy", "1e-3", "--json");
         Assert.Null(n["estimatedRelativeError"]!["maxShear"]);
         Assert.NotEmpty(n["warnings"]!.AsArray());
     }

@@ -129,7 +129,7 @@ public class TemplateGeometryTests
     [Fact]
     public void Hollow_sections_with_corner_radii()
     {
-        // shs 80 x 5, hot-finished defaults ro = 1.5 t, ri = t (REFERENCES.md, from memory there).
+        // shs 80 x 5, hot-finished defaults ro = 1.5 t, ri = t (from memory).
         double b = 80 * Mm, t = 5 * Mm, ro = 7.5 * Mm, ri = 5 * Mm;
         var shs = P("shs:B=80,t=5");
         Tol.Rel(RoundedRectArea(b, b, ro) - RoundedRectArea(b - 2 * t, b - 2 * t, ri), shs.Area, Exact);
@@ -193,7 +193,7 @@ public class TemplateGeometryTests
     [Fact]
     public void Straight_spline_is_core_plus_parallel_teeth()
     {
-        // 8 x 32 x 36, B = 6 (ISO 14 light, REFERENCES.md): tooth = {|y| < B/2, rf < |p| < ra, x > 0}.
+        // 8 x 32 x 36, B = 6 (ISO 14 light, Published.Iso14Checked): tooth = {|y| < B/2, rf < |p| < ra, x > 0}.
         double rf = 16 * Mm, ra = 18 * Mm, u = 3 * Mm;
         double tooth = 2 * (F1(ra, u) - F1(rf, u));
         double a = Math.PI * rf * rf + 8 * tooth;

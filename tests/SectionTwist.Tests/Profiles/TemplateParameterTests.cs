@@ -5,7 +5,7 @@ namespace SectionTwist.Tests.Profiles;
 /// <summary>Standard-size defaults (DIN 6885-1, ISO 14, hollow-section radii) and rejection of impossible parameters.</summary>
 public class TemplateParameterTests
 {
-    // DIN 6885-1 / ISO 773 rows (shared/REFERENCES.md): shaft diameter -> keyseat width b and depth t1, mm.
+    // DIN 6885-1 / ISO 773 rows (the test copy: References/Published.Din6885): shaft diameter -> keyseat width b and depth t1, mm.
     [Theory]
     [InlineData(7, 2, 1.2)]
     [InlineData(16, 5, 3.0)]
@@ -46,7 +46,7 @@ public class TemplateParameterTests
     [Fact]
     public void Iso14_rows_by_series_or_by_size()
     {
-        // REFERENCES.md: light 8x32x36 (6), medium 8x36x42 (7).
+        // ISO 14 rows checked against the standard (Published.Iso14Checked): light 8x32x36 (6), medium 8x36x42 (7).
         Tol.Rel(ProfileTemplates.Create("spline:N=8,d=32,D=36,B=6").Properties.Area, ProfileTemplates.Create("spline:series=light,d=32").Properties.Area, 1e-14);
         Tol.Rel(ProfileTemplates.Create("spline:N=8,d=36,D=42,B=7").Properties.Area, ProfileTemplates.Create("iso14:8x36x42").Properties.Area, 1e-14);
         Tol.Rel(ProfileTemplates.Create("spline:N=8,d=36,D=42,B=7").Properties.Area, ProfileTemplates.Create("spline:series=medium,N=8,d=36").Properties.Area, 1e-14);
@@ -60,7 +60,7 @@ public class TemplateParameterTests
     [Fact]
     public void Hollow_section_default_radii()
     {
-        // Hot-finished ro = 1.5 t, ri = t (REFERENCES.md, memory); cold-formed EN 10219-2 (from memory) by wall thickness.
+        // Hot-finished ro = 1.5 t, ri = t (from memory); cold-formed EN 10219-2 (from memory) by wall thickness.
         var (oh, ih) = HollowSectionTemplates.DefaultRadii(0.005, cold: false);
         Tol.Rel(0.0075, oh, 1e-14);
         Tol.Rel(0.005, ih, 1e-14);

@@ -43,7 +43,7 @@ public class TemplateTorsionTests
         Tol.Rel(Published.KeywaysJ(n, 0.020, width * 1e-3, depth * 1e-3), J(spec), 0.02, Roark);
     }
 
-    /// <summary>EN 10210-2 / EN 10219-2 torsion constant formula for a rectangular hollow section (shared/REFERENCES.md).</summary>
+    /// <summary>EN 10210-2 / EN 10219-2 torsion constant formula for a rectangular hollow section (EN 10210-2 / EN 10219-2, the standards' It formula).</summary>
     private static double En10210It(double b, double h, double t, double ro, double ri)
     {
         double rc = (ro + ri) / 2;
@@ -53,7 +53,7 @@ public class TemplateTorsionTests
         return t * t * t * p / 3 + 2 * k * ah;
     }
 
-    // EN 10210-2 tabulated It (cm^4): 40x2.6: 14.0; 60x4: 72.5; 80x5: 217 (REFERENCES.md). The formula reproduces
+    // EN 10210-2 tabulated It (cm^4): 40x2.6: 14.0; 60x4: 72.5; 80x5: 217 (EN 10210-2 tables). The formula reproduces
     // them (rounding of the table: 1 %); the exact Saint-Venant J of the rounded section is 2-3 % above the formula,
     // so the FE value is compared with the formula within 3 % (the standard's formula is itself approximate).
     [Theory]
