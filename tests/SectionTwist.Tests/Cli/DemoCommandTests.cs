@@ -67,9 +67,7 @@ public class DemoCommandTests(DemoRun demo) : IClassFixture<DemoRun>
         Assert.Contains($">-{t.ToString("G5", CultureInfo.InvariantCulture)}<", html, StringComparison.Ordinal);
         // The keyed journal governs: its printed peak (4 digits) is T times the peak shear per unit torque of its section,
         // keyed:d=45,r=0.5, solved independently here at 1e-5, within the two analyses' stated estimates and the rounding.
-        var spec = SectionTwist.Profiles.ProfileTemplates.Create("keyed:d=45,r=0.5");
-        var atDefault = SectionTwist.Torsion.SectionAnalyzer.Analyze(spec);
-        var fine = SectionTwist.Torsion.SectionAnalyzer.Analyze(spec, new SectionTwist.Torsion.AnalysisOptions { Accuracy = 1e-5 });
+        var (atDefault, fine) = SectionTwist.Tests.Shaft.DemoSectionReferences.For(SectionTwist.Tests.Shaft.DemoSectionReferences.Keyed);
         Tol.Rel(t * fine.MaxShearPerTorque / 1e6, PrintedPeakMpa(),
             atDefault.EstimatedRelativeError.MaxShear + fine.EstimatedRelativeError.MaxShear + 5e-4, "keyed:d=45,r=0.5 solved at 1e-5");
     }

@@ -33,11 +33,10 @@ public class WinchDemoTests
         double j = Math.PI * (Math.Pow(0.06, 4) - Math.Pow(0.04, 4)) / 32;
         Tol.Rel(-t * 0.42 / (79.3e9 * j), middle.Twist, 1e-9);
         Tol.Rel(16 * t * 0.06 / (Math.PI * (Math.Pow(0.06, 4) - Math.Pow(0.04, 4))), middle.MaxShear, 1e-9);
-        foreach (var (segment, spec) in new[] { ("input", "keyed:d=45,r=0.5"), ("spline", "spline:series=light,N=8,d=42,r=0.4") })
+        foreach (var (segment, spec) in new[] { ("input", DemoSectionReferences.Keyed), ("spline", DemoSectionReferences.Spline) })
         {
             var section = doc.Model.Segments.Single(s => s.Name == segment).Section!;
-            var demo = SectionTwist.Torsion.SectionAnalyzer.Analyze(SectionTwist.Profiles.ProfileTemplates.Create(spec));
-            var fine = SectionTwist.Torsion.SectionAnalyzer.Analyze(SectionTwist.Profiles.ProfileTemplates.Create(spec), new SectionTwist.Torsion.AnalysisOptions { Accuracy = 1e-5 });
+            var (demo, fine) = DemoSectionReferences.For(spec);
             Tol.Rel(fine.TorsionConstant, section.TorsionConstant, demo.EstimatedRelativeError.TorsionConstant + fine.EstimatedRelativeError.TorsionConstant, $"{spec} solved at 1e-5");
             Tol.Rel(fine.MaxShearPerTorque, section.ShearPerTorque, demo.EstimatedRelativeError.MaxShear + fine.EstimatedRelativeError.MaxShear, $"{spec} solved at 1e-5");
         }
