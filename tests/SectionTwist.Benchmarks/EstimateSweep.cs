@@ -27,7 +27,9 @@ public static class EstimateSweep
         foreach (var c in cases)
         {
             var profile = ProfileSources.Load(c.Spec);
-            string angles = string.Join(" ", CornerAnalysis.Corners(profile).Select(k => Math.Round(k.InteriorAngle * 180 / Math.PI)).Distinct().Order().Select(a => a.ToString(inv)));
+            var corners = CornerAnalysis.Corners(profile);
+            string angles = string.Join(" ", corners.Where(k => !k.CurvatureJump).Select(k => Math.Round(k.InteriorAngle * 180 / Math.PI)).Distinct().Order().Select(a => a.ToString(inv)))
+                + (corners.Any(k => k.CurvatureJump) ? " tangent joints" : "");
             double jRef, tRef, jRefErr = 0, tRefErr = 0;
             if (c.J is { } jx && c.Tau is { } tx) { jRef = jx; tRef = tx; }
             else

@@ -35,7 +35,8 @@ public static class Orders
             double jRef = j[3] + (j[3] - j[2]) / (Math.Pow(2, p2) - 1);
             var e01 = RichardsonEstimate.Compute(s[0], s[1], corners);
             var e12 = RichardsonEstimate.Compute(s[1], s[2], corners);
-            string angles = string.Join(" ", corners.Select(c => Math.Round(c.InteriorAngle * 180 / Math.PI)).Distinct().Order().Select(a => a.ToString(inv)));
+            string angles = string.Join(" ", corners.Where(c => !c.CurvatureJump).Select(c => Math.Round(c.InteriorAngle * 180 / Math.PI)).Distinct().Order().Select(a => a.ToString(inv)))
+                + (corners.Any(c => c.CurvatureJump) ? " tangent joints" : "");
             Console.WriteLine(string.Create(inv,
                 $"| {name} | {angles} | {CornerAnalysis.LowestOrder(corners):F2} | {p1:F2}, {p2:F2} | {e01.FineError / (jRef - j[1]):F2}, {e12.FineError / (jRef - j[2]):F2} | {q1:F1}, {q2:F1} |"));
         }
