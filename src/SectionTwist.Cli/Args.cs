@@ -58,6 +58,19 @@ internal sealed class Args
         return null;
     }
 
+    /// <summary>Every value of a repeatable option, in command-line order.</summary>
+    public IReadOnlyList<string> Options(string name)
+    {
+        var list = new List<string>();
+        for (int i = 0; i < _options.Count; i++)
+        {
+            if (_options[i].Name != name) continue;
+            _used.Add(i);
+            list.Add(_options[i].Value ?? throw new UsageException($"--{name} needs a value"));
+        }
+        return list;
+    }
+
     public double? Double(string name)
     {
         string? s = Option(name);

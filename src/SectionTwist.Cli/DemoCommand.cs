@@ -1,4 +1,5 @@
 using System.Diagnostics;
+using SectionTwist.Dynamics;
 using SectionTwist.Rendering.Adapters;
 using SectionTwist.Rendering.Report;
 using SectionTwist.Shaft;
@@ -26,7 +27,8 @@ internal sealed class DemoCommand : ICommand
         "sectiontwist demo [--out DIR]\n" +
         "  Solves the bundled demo: the drive shaft of a small winch (an invented scenario) with a keyed input, a hollow middle\n" +
         "  and a splined output, driven through a flexible coupling. The keyed and splined sections are analysed, the shaft is\n" +
-        "  solved, the verification cases are run, and DIR receives report.html, shaft.png, shaft.svg and section-NAME.png.\n" +
+        "  solved, the verification cases are run, and DIR receives report.html, shaft.png, shaft.svg and section-NAME.png;\n" +
+        "  the drivetrain (motor shaft, gear stage, inertias) gets its torsional modes and resonance check in modes.html.\n" +
         $"  --out DIR   output folder (default ./{DefaultFolder}; created when missing)\n" +
         "  The shaft file itself: sample-profiles/winch-shaft.yaml ('sectiontwist shaft' reads it too).";
 
@@ -39,17 +41,32 @@ internal sealed class DemoCommand : ICommand
 
         var clock = Stopwatch.StartNew();
         // the verification cases run beside the section analyses (both are single-threaded for these sizes)
-        var verifying = Task.Run(() => VerificationSuite.Run());
-        var sections = new ShaftSectionCatalog(notes: context.Err.WriteLine);
+        var verifying = Task.Run(() => VerificationSuite.Run(context.Analysis(), context.Cancellation));
+        var sections = new ShaftSectionCatalog(context.Analysis(), context.Err.WriteLine, context.Cancellation);
         var doc = ShaftFile.Parse(ReadDemoFile(), "winch-shaft.yaml", resolver: sections.Resolver);
         var result = ShaftSolver.Solve(doc.Model);
         var verification = verifying.GetAwaiter().GetResult();
         var content = ShaftReport.Build(doc, result, sections, verification, CliReport.Options());
-        var files = ShaftReport.WriteBundle(content, folder);
+        var files = ShaftReport.WriteBundle(content, folder).ToList();
+        string? modesLine = null;
+        if (doc.Dynamics is { } dyn)
+        {
+            var modes = ModalAnalysis.Solve(dyn.Drivetrain, dyn.Options);
+            var check = dyn.Excitation is { } ex ? ResonanceCheck.Evaluate(modes, ex) : null;
+            var forced = dyn.Forcing is { } f ? ForcedResponse.Compute(modes, f, dyn.DampingRatio) : null;
+            string modesFile = Path.Combine(folder, "modes.html");
+            ModesReport.Write(doc, modes, check, forced, modesFile, CliReport.Options());
+            files.Add(modesFile);
+            var first = modes.ElasticModes.FirstOrDefault();
+            modesLine = $"  Drivetrain: lowest torsional natural frequency {first?.Frequency.ToString("G4", System.Globalization.CultureInfo.InvariantCulture) ?? "-"} Hz" +
+                        (check?.Closest is { } c ? $"; closest crossing: mode {c.Mode} with {c.Excitation} ({(c.Status == CrossingStatus.Resonance ? "in the operating range" : $"margin {c.Margin * 100:F0} %")}, {ModalResultJson.Status(c.Status)})" : "") +
+                        " (modes.html)";
+        }
 
         var w = context.Out;
         w.WriteLine($"{doc.Model.Title ?? "demo shaft"} (bundled sample-profiles/winch-shaft.yaml)");
         foreach (string line in ShaftReport.Summary(doc, result)) w.WriteLine("  " + line);
+        if (modesLine is not null) w.WriteLine(modesLine);
         int failed = verification.Count(v => !v.Passed);
         w.WriteLine(failed == 0
             ? $"  Verification: all {verification.Count} cases passed on this build."

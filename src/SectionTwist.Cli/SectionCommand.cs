@@ -9,18 +9,26 @@ internal sealed class SectionCommand : ICommand
 {
     public string Name => "section";
     public string Summary => "torsion constant J, peak shear per torque and area properties of a cross-section";
-    public string Usage => """
-        sectiontwist section SOURCE [--accuracy REL] [--unit U] [--layer NAME] [--part N] [--json] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR]
+    public string Usage => $$"""
+        sectiontwist section SOURCE [--accuracy REL] [--unit U] [drawing options] [--json] [--warping] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR] [--plastic MATERIAL|STRESS [--plastic-plot FILE.png|svg]]
           SOURCE      a template spec such as circle:d=40, keyed:d=40, rect:b=60,h=20, a drawing file (.dxf),
                       a point list (.csv, .pts) or anything a plugin reads
           --accuracy  requested relative accuracy of J (default 1e-4)
           --unit      length unit of the input (mm, cm, m, in, ft); specs default to mm
-          --layer     use only this drawing layer;  --part N  use only the N-th separate part (largest first)
+        drawing options (see 'sectiontwist inspect' to list layers and parts):
+        {{DrawingOptions.Usage}}
+        output options:
           --json      print one JSON object in SI base units (m, m^2, m^4, 1/m^3)
+          --warping   also solve the warping function: shear centre, warping constant Iw, largest sectorial
+                      coordinate, warping length for steel and whether restrained warping matters
           --plot      write a shear-stress contour picture (PNG or SVG)
           --torque    torque in N*m for the plot colour bar in MPa (default: stress per unit torque)
           --dxf       write the outline (layer PROFILE) and stress-function contours (layer PHI) to a DXF file for CAD
           --dxf-mesh  also write the mesh edges (layer MESH)
+          --plastic   also the elastic-perfectly-plastic torsion: first-yield torque, fully plastic torque,
+                      shape factor and the torque-twist curve, for a material's shear yield (e.g. s355) or a
+                      shear yield stress (e.g. 140MPa)
+          --plastic-plot  write the plastic zone at each curve point (PNG or SVG)
           --plugins   load profile-source plugins (*.dll) from DIR; the SECTIONTWIST_PLUGINS environment
                       variable may list more folders (separated by the system path separator)
         """;
@@ -31,30 +39,43 @@ internal sealed class SectionCommand : ICommand
     public int Run(Args args, CliContext ctx)
     {
         bool json = args.Flag("json");
+        bool warping = args.Flag("warping");
         double accuracy = AccuracyOption.Read(args) ?? 1e-4;
         var unitText = args.Option("unit");
-        var srcOptions = new ProfileSourceOptions
+        var drawingNotes = new List<string>();
+        var srcOptions = DrawingOptions.Read(args, new ProfileSourceOptions
         {
             Unit = unitText is null ? null : LengthUnit.Parse(unitText),
-            Layer = args.Option("layer"),
-            Part = args.Int("part"),
             Accuracy = accuracy,
-            Notes = json ? null : note => ctx.Err.WriteLine($"note: {note}"),
-        };
+            Notes = json ? drawingNotes.Add : note => ctx.Err.WriteLine($"note: {note}"),
+            Cancellation = ctx.Cancellation,
+        });
         string? plot = args.Option("plot");
         double? torque = args.Double("torque");
         string? dxf = args.Option("dxf");
         bool dxfMesh = args.Flag("dxf-mesh");
         string? plugins = args.Option("plugins");
+        var plasticYield = args.Option("plastic") is { } py ? PlasticCli.ParseYield(py) : ((double, string)?)null;
+        string? plasticPlot = args.Option("plastic-plot");
+        if (plasticPlot is not null && plasticYield is null) throw new UsageException("--plastic-plot needs --plastic MATERIAL|STRESS");
         if (args.Positional.Count != 1) throw new UsageException(args.Positional.Count == 0 ? "give one SOURCE (a template spec or a .dxf file)" : $"give one SOURCE, not {args.Positional.Count}");
         args.EnsureAllUsed();
         LoadPlugins(plugins);
         var profile = ProfileSources.Load(args.Positional[0], srcOptions);
-        var result = SectionAnalyzer.Analyze(profile, new AnalysisOptions { Accuracy = accuracy });
+        var result = SectionAnalyzer.Analyze(profile, ctx.Analysis(accuracy) with { Warping = warping }, ctx.Cancellation);
+        // in JSON the reader's notes (parts analysed together, entities left out, facets) travel with the warnings
+        if (drawingNotes.Count > 0)
+            result = result with { Warnings = drawingNotes.Select(n => new AnalysisWarning("drawing", n)).Concat(result.Warnings).ToList().AsReadOnly() };
         if (plot is not null) SectionPlotHook.Write(result, plot, torque);
         if (dxf is not null) SectionDxfExport.Write(result, dxf, dxfMesh);
-        if (json) ctx.Out.WriteLine(SectionJson.Write(result, args.Positional[0]));
-        else SectionText.Write(ctx.Out, result, args.Positional[0]);
+        var plastic = plasticYield is { } yv ? Plastic.PlasticAnalyzer.Analyze(result, yv.Item1, null, ctx.Cancellation) : null;
+        if (plastic is not null && plasticPlot is not null) PlasticPlotHook.Write(plastic, plasticPlot);
+        if (json) ctx.Out.WriteLine(SectionJson.Write(result, args.Positional[0], plastic is null ? null : w => PlasticCli.WriteJson(w, plastic, plasticYield!.Value.Item2)));
+        else
+        {
+            SectionText.Write(ctx.Out, result, args.Positional[0]);
+            if (plastic is not null) PlasticCli.WriteText(ctx.Out, plastic, plasticYield!.Value.Item2);
+        }
         return 0;
     }
 

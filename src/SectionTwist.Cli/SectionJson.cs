@@ -8,13 +8,14 @@ namespace SectionTwist.Cli;
 /// <summary>The <c>--json</c> object for one section, in SI base units (m, m^2, m^4, 1/m^3); non-finite numbers are null.</summary>
 internal static class SectionJson
 {
-    public static string Write(SectionResult r, string source)
+    public static string Write(SectionResult r, string source, Action<Utf8JsonWriter>? extra = null)
     {
         using var ms = new MemoryStream();
         using (var w = new Utf8JsonWriter(ms, new JsonWriterOptions { Indented = true }))
         {
             w.WriteStartObject();
             Write(w, r, source);
+            extra?.Invoke(w);
             w.WriteEndObject();
         }
         return Encoding.UTF8.GetString(ms.ToArray());
@@ -45,13 +46,37 @@ internal static class SectionJson
         w.WriteStartArray("regionTorsionConstants");
         foreach (var j in r.RegionTorsionConstants) w.WriteNumberValue(j);
         w.WriteEndArray();
+        if (r.Warping is { } wr)
+        {
+            Pt(w, "shearCentre", wr.ShearCentre);
+            Num(w, "warpingConstant", wr.WarpingConstant);
+            Num(w, "maxSectorialCoordinate", wr.MaxSectorialCoordinate);
+            w.WriteStartObject("warping");
+            Pt(w, "maxSectorialCoordinateLocation", wr.MaxSectorialCoordinateLocation);
+            Num(w, "torsionConstantUpperBound", wr.TorsionConstantUpperBound);
+            Num(w, "warpingRatio", wr.WarpingRatio);
+            w.WriteString("classification", wr.Classification == Warping.WarpingClass.WarpingSensitive ? "warping-sensitive" : "warping-negligible");
+            Num(w, "steelWarpingLength", wr.SteelWarpingLength);
+            w.WriteStartObject("estimatedError");
+            Num(w, "shearCentre", wr.EstimatedError.ShearCentre);
+            Num(w, "warpingConstant", wr.EstimatedError.WarpingConstant);
+            Num(w, "maxSectorialCoordinate", wr.EstimatedError.MaxSectorialCoordinate);
+            w.WriteEndObject();
+            w.WriteEndObject();
+        }
         w.WriteStartObject("mesh");
         w.WriteNumber("nodes", r.Mesh.Nodes);
         w.WriteNumber("elements", r.Mesh.Elements);
         Num(w, "minAngleDeg", r.Mesh.MinAngleDeg);
         w.WriteEndObject();
+        Warnings(w, r.Warnings);
+    }
+
+    /// <summary>Writes a <c>warnings</c> array of code and message objects.</summary>
+    internal static void Warnings(Utf8JsonWriter w, IEnumerable<AnalysisWarning> warnings)
+    {
         w.WriteStartArray("warnings");
-        foreach (var warn in r.Warnings)
+        foreach (var warn in warnings)
         {
             w.WriteStartObject();
             w.WriteString("code", warn.Code);

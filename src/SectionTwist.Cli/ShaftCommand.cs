@@ -31,7 +31,7 @@ internal sealed class ShaftCommand : ICommand
         "  the internal torque, twist, peak shear, factor of safety and twist rate of every segment, the support reactions and\n" +
         "  the governing segment, in the file's units.\n" +
         "  --json        print the result as JSON in SI base units (m, N*m, Pa, rad) instead of tables\n" +
-        "  --csv DIR     also write DIR/stations.csv and DIR/segments.csv (SI units)\n" +
+        "  --csv DIR     also write DIR/stations.csv and DIR/segments.csv (SI units), and DIR/bending.csv with a 'bending' block\n" +
         "  --report OUT  also write one self-contained HTML report (inputs, tables, pictures, verification, method)\n" +
         "  Exceeded limits are flagged, not errors; the exit code is 0 when the shaft solved, 2 for bad input.";
 
@@ -46,13 +46,14 @@ internal sealed class ShaftCommand : ICommand
         if (report is not null) OutputPaths.CheckFile(report, "--report");
 
         // the report's verification cases run beside the section analyses
-        var verifying = report is null ? null : Task.Run(() => VerificationSuite.Run());
-        var sections = new ShaftSectionCatalog(notes: context.Err.WriteLine);
+        var verifying = report is null ? null : Task.Run(() => VerificationSuite.Run(context.Analysis(), context.Cancellation));
+        var sections = new ShaftSectionCatalog(context.Analysis(), context.Err.WriteLine, context.Cancellation);
         var doc = ShaftFile.Load(path, SectionResolver ?? sections.Resolver);
         ShaftResult result;
         try { result = ShaftSolver.Solve(doc.Model); }
         catch (SectionTwistException e) { throw new SectionTwistException(e.Code, $"{Path.GetFileName(path)}: {e.Message}", e); }
 
+        context.Cancellation.ThrowIfCancellationRequested();
         if (csv is not null) ShaftResultCsv.WriteAll(result, csv);
         if (report is not null)
         {
@@ -61,7 +62,7 @@ internal sealed class ShaftCommand : ICommand
         }
         if (json) context.Out.WriteLine(ShaftResultJson.Write(result, path));
         else PrintTables(context.Out, doc, result, path);
-        if (csv is not null) context.Err.WriteLine($"wrote {Path.Combine(csv, "stations.csv")} and {Path.Combine(csv, "segments.csv")}");
+        if (csv is not null) context.Err.WriteLine($"wrote {Path.Combine(csv, "stations.csv")} and {Path.Combine(csv, "segments.csv")}{(result.Bending is null ? "" : $" and {Path.Combine(csv, "bending.csv")}")}");
         return 0;
     }
 
@@ -139,10 +140,16 @@ internal sealed class ShaftCommand : ICommand
         w.WriteLine($"end-to-end twist: {F(Deg(r.EndToEndTwist), "F4")} deg ({F(r.EndToEndTwist, "G4")} rad)");
         if (r.AnyLimitExceeded) w.WriteLine("!! at least one segment exceeds its limit (see 'check' above)");
         w.WriteLine();
+        if (r.Bending is { } bending)
+        {
+            BendingTables.Print(w, u, bending, doc.Model.Bending!.Rotating);
+            w.WriteLine();
+        }
+        ShaftWarpingText.Write(w, doc, r);
         w.WriteLine(Caution);
     }
 
-    private static void Table(TextWriter w, List<string[]> rows)
+    internal static void Table(TextWriter w, List<string[]> rows)
     {
         int cols = rows[0].Length;
         var width = new int[cols];

@@ -38,7 +38,7 @@ internal sealed class SweepCommand : ICommand
         LengthUnit? unit = unitText is null ? null : LengthUnit.Parse(unitText);
         var steps = BuildSteps(args.Positional[0], vary, unit);
 
-        var options = new AnalysisOptions { Accuracy = accuracy ?? AnalysisOptions.Default.Accuracy };
+        var options = context.Analysis(accuracy);
         var results = new SectionResult[steps.Count];
         int done = 0;
         object gate = new();
@@ -50,9 +50,9 @@ internal sealed class SweepCommand : ICommand
         Report();
         try
         {
-            Parallel.For(0, steps.Count, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, i =>
+            Parallel.For(0, steps.Count, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount, CancellationToken = context.Cancellation }, i =>
             {
-                results[i] = SectionAnalyzer.Analyze(steps[i].Profile, options);
+                results[i] = SectionAnalyzer.Analyze(steps[i].Profile, options, context.Cancellation);
                 Interlocked.Increment(ref done);
                 Report();
             });
@@ -60,7 +60,8 @@ internal sealed class SweepCommand : ICommand
         catch (AggregateException e)
         {
             // Report the first step's failure as if it ran alone (input errors become one-line messages).
-            var first = e.InnerExceptions.FirstOrDefault(x => x is SectionTwistException) ?? e.InnerExceptions[0];
+            var first = e.InnerExceptions.FirstOrDefault(x => x is SectionTwistException)
+                        ?? e.InnerExceptions.FirstOrDefault(x => x is OperationCanceledException) ?? e.InnerExceptions[0];
             System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(first).Throw();
         }
         finally

@@ -23,7 +23,7 @@ internal sealed class VerifyCommand : ICommand
         double accuracy = AccuracyOption.Read(args) ?? 1e-4;
         bool json = args.Flag("json");
         args.EnsureAllUsed();
-        var outcomes = VerificationSuite.Run(new AnalysisOptions { Accuracy = accuracy });
+        var outcomes = VerificationSuite.Run(ctx.Analysis(accuracy), ctx.Cancellation);
         int failed = outcomes.Count(o => !o.Passed);
         if (json) ctx.Out.WriteLine(WriteJson(outcomes, accuracy));
         else WriteTable(ctx.Out, outcomes, failed);

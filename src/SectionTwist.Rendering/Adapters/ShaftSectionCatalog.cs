@@ -14,15 +14,18 @@ public sealed class ShaftSectionCatalog
 {
     private readonly AnalysisOptions? _options;
     private readonly Action<string>? _notes;
+    private readonly CancellationToken _ct;
     private readonly List<AnalysedSection> _sections = [];
 
     /// <summary>Creates an empty catalog.</summary>
     /// <param name="options">Section analysis options; null for the defaults.</param>
     /// <param name="notes">Receives one line per section analysed and per analysis warning; may be null.</param>
-    public ShaftSectionCatalog(AnalysisOptions? options = null, Action<string>? notes = null)
+    /// <param name="cancellationToken">Stops the reading and analysis of the sections.</param>
+    public ShaftSectionCatalog(AnalysisOptions? options = null, Action<string>? notes = null, CancellationToken cancellationToken = default)
     {
         _options = options;
         _notes = notes;
+        _ct = cancellationToken;
     }
 
     /// <summary>The sections analysed so far, in the order the shaft file's segments first used them.</summary>
@@ -35,11 +38,15 @@ public sealed class ShaftSectionCatalog
     public SectionStiffness Resolve(SectionSource source)
     {
         ArgumentNullException.ThrowIfNull(source);
-        var (r, templateOuter) = ShaftSections.Analyze(source, _options, _notes);
+        var (r, templateOuter) = ShaftSections.Analyze(source, _options, _notes, _ct);
         // a template knows its outer size; a drawing's is the larger side of its bounds
         double outer = templateOuter ?? Math.Max(r.Profile.Bounds.Width, r.Profile.Bounds.Height);
         _sections.Add(new AnalysedSection(source, r, outer, LargestHole(r.Profile)));
-        return new SectionStiffness(r.TorsionConstant, r.MaxShearPerTorque, source.TemplateSpec ?? Path.GetFileName(source.DxfPath), outer);
+        return ShaftSections.Stiffness(r, source.TemplateSpec ?? Path.GetFileName(source.DxfPath), outer) with
+        {
+            Bending = SectionTwist.Bending.BendingSection.FromSection(r, templateOuter),
+            PolarMoment = r.PolarMoment,
+        };
     }
 
     /// <summary>

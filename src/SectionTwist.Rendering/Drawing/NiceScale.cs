@@ -24,11 +24,13 @@ internal static class NiceScale
     public static (double Step, double[] Ticks) Ticks(double lo, double hi, int count = 6)
     {
         if (hi < lo) (lo, hi) = (hi, lo);
+        // non-finite or overflowing ranges would step forever: fall back to a unit range
+        if (!double.IsFinite(lo) || !double.IsFinite(hi) || !double.IsFinite(hi - lo)) { lo = -1; hi = 1; }
         if (hi - lo < 1e-300 * Math.Max(1, Math.Abs(lo))) { hi = lo + 1; lo -= 1; }
         double step = NiceNumber((hi - lo) / Math.Max(1, count - 1), true);
         double first = Math.Ceiling(lo / step - 1e-9) * step;
         var ticks = new List<double>();
-        for (double t = first; t <= hi + 1e-9 * step; t += step)
+        for (double t = first; t <= hi + 1e-9 * step && ticks.Count < 1000; t = first + ticks.Count * step)
             ticks.Add(Math.Abs(t) < 1e-12 * step ? 0 : t);
         return (step, ticks.ToArray());
     }
@@ -37,6 +39,7 @@ internal static class NiceScale
     public static (double Lo, double Hi, double Step) Range(double lo, double hi, int count = 6)
     {
         if (hi < lo) (lo, hi) = (hi, lo);
+        if (!double.IsFinite(lo) || !double.IsFinite(hi) || !double.IsFinite(hi - lo)) { lo = -1; hi = 1; }
         if (hi - lo < 1e-300 + 1e-12 * Math.Max(Math.Abs(lo), Math.Abs(hi)))
         {
             double pad = Math.Abs(lo) > 0 ? 0.1 * Math.Abs(lo) : 1;

@@ -41,6 +41,11 @@ public static class ShaftReport
         var chapters = new List<ReportChapter> { ShaftResultChapter.Build(doc, result, diagram) };
         var pictures = new List<ReportFigure>();
         var warnings = new List<string>();
+        if (result.Bending is { } bending)
+        {
+            chapters.Add(BendingChapter.Build(doc, result, unit));
+            warnings.AddRange(bending.Warnings);
+        }
         foreach (var s in DistinctUsed(sections))
         {
             double torque = MaxTorqueOn(result, s);
@@ -55,6 +60,8 @@ public static class ShaftReport
             chapters.Add(ReportAdapters.SectionChapter($"Section '{s.Name}' ({s.Source.TemplateSpec ?? Path.GetFileName(s.Source.DxfPath)})", s.Result, figure));
             warnings.AddRange(s.Result.Warnings.Select(w => $"section '{s.Name}': {w.Message}"));
         }
+        if (WarpingChapter.Build(doc, result) is { } warping) chapters.Insert(1, warping);
+        warnings.AddRange(result.WarpingWarnings);
         foreach (var seg in result.Segments.Where(x => x.ExceedsShearLimit || x.ExceedsTwistRateLimit))
             warnings.Add($"segment '{seg.Label}': {ShaftResultChapter.Flags(seg)}");
 
@@ -70,6 +77,7 @@ public static class ShaftReport
             Verification = ReportAdapters.Verification(verification),
             Warnings = warnings,
             Method = [.. ReportText.DefaultMethod, SectionsMethod],
+            Caution = result.Bending is null ? ReportText.DefaultCaution : BendingChapter.Caution,
         };
         return new ShaftReportContent(model, data, png, pictures);
     }

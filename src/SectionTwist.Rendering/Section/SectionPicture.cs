@@ -73,6 +73,7 @@ public static class SectionPicture
         if (o.ShowMesh) DrawMesh(c, data, L);
         if (o.PhiLines > 0) DrawPhiLines(c, data, L, o.PhiLines);
         DrawOutline(c, data, L);
+        DrawCentres(c, data, L);
         c.Restore();
         SectionAxes.DrawScaleBar(c, L, data.Unit);
         DrawPeak(c, data, L, Math.Abs(data.PeakShearPerTorque * factor), unit, o.Torque is null ? " per kN·m" : "");
@@ -202,6 +203,26 @@ public static class SectionPicture
         using var paint = Ink.Stroke(SKColors.Black, 1.4f);
         paint.StrokeJoin = SKStrokeJoin.Round;
         c.DrawPath(path, paint);
+    }
+
+    /// <summary>Centroid as a ringed cross, shear centre as a filled square, each with a short label.</summary>
+    private static void DrawCentres(SKCanvas c, SectionPlotData data, SectionLayout L)
+    {
+        if (data.Centroid is { } g)
+        {
+            var p = L.ToPixel(g);
+            using (var halo = Ink.Stroke(SKColors.White, 4f)) { c.DrawCircle(p, 6f, halo); c.DrawLine(p.X - 9, p.Y, p.X + 9, p.Y, halo); c.DrawLine(p.X, p.Y - 9, p.X, p.Y + 9, halo); }
+            using (var ink = Ink.Stroke(SKColors.Black, 1.5f)) { c.DrawCircle(p, 6f, ink); c.DrawLine(p.X - 9, p.Y, p.X + 9, p.Y, ink); c.DrawLine(p.X, p.Y - 9, p.X, p.Y + 9, ink); }
+            Ink.BoxedLabel(c, "centroid", p.X + 10, p.Y - 10, 11, Ink.Text);
+        }
+        if (data.ShearCentre is { } sc)
+        {
+            var p = L.ToPixel(sc);
+            var box = new SKRect(p.X - 5, p.Y - 5, p.X + 5, p.Y + 5);
+            using (var halo = Ink.Stroke(SKColors.White, 3f)) c.DrawRect(box, halo);
+            using (var fill = Ink.Fill(SKColors.Black)) c.DrawRect(box, fill);
+            Ink.BoxedLabel(c, "shear centre", p.X + 10, p.Y + 16, 11, Ink.Text);
+        }
     }
 
     private static void DrawPeak(SKCanvas c, SectionPlotData data, SectionLayout L, double peak, string unit, string suffix)

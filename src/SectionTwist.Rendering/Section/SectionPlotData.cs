@@ -15,11 +15,21 @@ namespace SectionTwist.Rendering.Section;
 /// <param name="Title">Heading drawn above the picture.</param>
 public sealed record SectionPlotData(SectionField Field, Point2 PeakLocation, double PeakShearPerTorque, LengthUnit Unit, string Title)
 {
+    /// <summary>Centroid to mark, m (null: not marked).</summary>
+    public Point2? Centroid { get; init; }
+
+    /// <summary>Shear centre to mark, m (null: not marked; known when the warping function was solved).</summary>
+    public Point2? ShearCentre { get; init; }
+
     /// <summary>The picture data of a solved section.</summary>
     public static SectionPlotData From(SectionResult result, string? title = null)
     {
         ArgumentNullException.ThrowIfNull(result);
         return new SectionPlotData(result.Field, result.MaxShearLocation, result.MaxShearPerTorque, result.LengthUnit,
-            title ?? "Shear stress magnitude");
+            title ?? "Shear stress magnitude")
+        {
+            Centroid = result.Properties.Centroid,
+            ShearCentre = result.Warping?.ShearCentre,
+        };
     }
 }

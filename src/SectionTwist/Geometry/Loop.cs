@@ -69,6 +69,10 @@ public sealed class Loop
         {
             var f = s.Flatten(sagitta);
             for (int i = 0; i < f.Count - 1; i++) pts.Add(f[i]);
+            // stacked or repeated curves could flatten to tens of millions of points: refuse before memory runs out
+            if (pts.Count > Limits.InputLimits.MaxOutlineEdges)
+                throw new SectionTwistException("profile-too-complex",
+                    $"a loop near {Segments[0].Start} has more than {Limits.InputLimits.MaxOutlineEdges} straight pieces when its curves are traced (stacked or repeated curves?); remove the duplicates or simplify the outline");
         }
         return pts;
     }

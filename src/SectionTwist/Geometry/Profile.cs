@@ -32,8 +32,12 @@ public sealed class Profile
         var list = loops.ToList();
         if (list.Count == 0) throw new SectionTwistException("empty-profile", $"{name ?? "profile"}: no closed loop found; draw at least one closed outline");
         var area = list.Select(l => Math.Abs(l.SignedArea)).ToArray();
-        var inner = list.Select(l => l.InteriorPoint()).ToArray();
         int n = list.Count;
+        if (n > Limits.InputLimits.MaxLoops)
+            throw new SectionTwistException("too-many-loops",
+                $"{name ?? "profile"}: {n} closed loops, more than the {Limits.InputLimits.MaxLoops} SectionTwist analyses together (contour or hatch lines?); keep only the section's outline and holes (a drawing: --layer NAME)");
+        var poly = new IReadOnlyList<Point2>?[n];
+        long traced = 0;
         // parent = smallest loop that contains a point of this loop
         var parent = new int[n];
         for (int i = 0; i < n; i++)
@@ -43,7 +47,16 @@ public sealed class Profile
             for (int j = 0; j < n; j++)
             {
                 if (i == j || area[j] <= area[i] || !list[j].Bounds.Contains(list[i].Bounds, 1e-9 * list[j].Bounds.Diagonal)) continue;
-                if (list[j].Contains(probe) && (parent[i] < 0 || area[j] < area[parent[i]])) parent[i] = j;
+                // each loop is traced once, not once per loop tested against it
+                if (poly[j] is null)
+                {
+                    poly[j] = list[j].Flatten(1e-7 * Math.Max(list[j].Bounds.Diagonal, double.Epsilon));
+                    traced += poly[j]!.Count;
+                    if (traced > Limits.InputLimits.MaxOutlineEdges)
+                        throw new SectionTwistException("profile-too-complex",
+                            $"{name ?? "profile"}: {n} loops trace to more than {Limits.InputLimits.MaxOutlineEdges} straight pieces (stacked or repeated outlines?); remove the duplicates or keep only the section's loops");
+                }
+                if (Loop.WindingNumber(poly[j]!, probe) != 0 && (parent[i] < 0 || area[j] < area[parent[i]])) parent[i] = j;
             }
         }
         var depth = new int[n];
@@ -55,7 +68,6 @@ public sealed class Profile
             var holes = Enumerable.Range(0, n).Where(j => parent[j] == i && depth[j] % 2 == 1).Select(j => list[j]);
             regions.Add(new Region(list[i], holes));
         }
-        _ = inner;
         return new Profile(regions, unit, name);
     }
 
@@ -80,12 +92,19 @@ public sealed class Profile
     /// </summary>
     public IReadOnlyList<ProfileWarning> Warnings { get; init; } = [];
 
+    /// <summary>
+    /// Largest distance, metres, between the outline and the drawn curves it stands for where those could not be kept
+    /// exactly (splines and bent ellipses replaced by arcs); 0 when the outline is the drawn geometry. The analysis adds
+    /// its effect on J to the error estimate.
+    /// </summary>
+    public double CurveTolerance { get; init; }
+
     /// <summary>Exact area properties (lines and arcs integrated exactly).</summary>
     public SectionProperties Properties => _properties ??= SectionProperties.Compute(this);
 
     /// <summary>The profile moved by a similarity transform.</summary>
-    public Profile Transformed(Similarity2 t) => new(Regions.Select(r => r.Transformed(t)), Unit, Name) { Warnings = Warnings };
+    public Profile Transformed(Similarity2 t) => new(Regions.Select(r => r.Transformed(t)), Unit, Name) { CurveTolerance = CurveTolerance * t.Scale, Warnings = Warnings };
 
     /// <summary>The same profile under another name or display unit.</summary>
-    public Profile With(string? name = null, LengthUnit? unit = null) => new(Regions, unit ?? Unit, name ?? Name) { Warnings = Warnings };
+    public Profile With(string? name = null, LengthUnit? unit = null) => new(Regions, unit ?? Unit, name ?? Name) { CurveTolerance = CurveTolerance, Warnings = Warnings };
 }

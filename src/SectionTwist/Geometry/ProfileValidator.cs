@@ -68,6 +68,9 @@ public static class ProfileValidator
             {
                 var pts = loop.Segments[s].Flatten(sag, double.PositiveInfinity);
                 for (int i = 0; i + 1 < pts.Count; i++) edges.Add((pts[i], pts[i + 1], li, s, edges.Count - start, 0));
+                if (edges.Count > Limits.InputLimits.MaxOutlineEdges)
+                    throw new SectionTwistException("profile-too-complex",
+                        $"{profile.Name}: the outline has more than {Limits.InputLimits.MaxOutlineEdges} straight pieces to check for crossings (stacked or repeated curves?); remove the duplicates or simplify the outline");
             }
             loopEdgeCount[li] = edges.Count - start;
         }

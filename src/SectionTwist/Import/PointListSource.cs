@@ -8,7 +8,8 @@ namespace SectionTwist.Import;
 /// A plain-text point list (<c>.csv</c>, <c>.pts</c>): one <c>x, y</c> vertex per line; a blank line ends a loop;
 /// <c>arc, xm, ym, xe, ye</c> adds an arc from the previous point through (xm, ym) to (xe, ye); <c>unit, in</c> sets
 /// the length unit (default mm); <c>#</c> starts a comment. Loops close themselves; nesting decides outer loops and
-/// holes. This source is also the worked example of writing an <see cref="IProfileSource"/>.
+/// holes. Curves given as many short lines are named in a note, or fitted by arcs with
+/// <see cref="ProfileSourceOptions.FitArcs"/>. This source is also the worked example of writing an <see cref="IProfileSource"/>.
 /// </summary>
 public sealed class PointListSource : IProfileSource
 {
@@ -25,13 +26,20 @@ public sealed class PointListSource : IProfileSource
     /// <inheritdoc />
     public Profile Load(string source, ProfileSourceOptions options)
     {
-        using var reader = new StreamReader(source);
-        return Parse(reader, Path.GetFileName(source), options.Unit);
+        ArgumentNullException.ThrowIfNull(options);
+        string text = Limits.InputFile.ReadAllText(source, Limits.InputLimits.MaxPointListBytes, "point list", options.Cancellation);
+        return FacetFit.Apply(Parse(new StringReader(text), Path.GetFileName(source), options.Unit, options.Cancellation), options);
     }
 
     /// <summary>Parses point-list text; <paramref name="name"/> is used in messages.</summary>
-    public static Profile Parse(TextReader reader, string name, LengthUnit? unitOverride = null)
+    /// <param name="reader">The text.</param>
+    /// <param name="name">Name used in messages.</param>
+    /// <param name="unitOverride">Unit that overrides the file's own 'unit' line.</param>
+    /// <param name="cancellationToken">Stops reading a long list.</param>
+    public static Profile Parse(TextReader reader, string name, LengthUnit? unitOverride = null, CancellationToken cancellationToken = default)
     {
+        ArgumentNullException.ThrowIfNull(reader);
+        int points = 0;
         var unit = LengthUnit.Millimetre;
         var loops = new List<Loop>();
         LoopBuilder? current = null;
@@ -47,6 +55,9 @@ public sealed class PointListSource : IProfileSource
         while ((line = reader.ReadLine()) is not null)
         {
             lineNo++;
+            if ((lineNo & 4095) == 0) cancellationToken.ThrowIfCancellationRequested();
+            if (line.Length > 10_000)
+                throw new SectionTwistException("bad-point-list", $"{name}:{lineNo}: a line of {line.Length} characters; a point list holds one short 'x, y' per line");
             int hash = line.IndexOf('#', StringComparison.Ordinal);
             if (hash >= 0) line = line[..hash];
             line = line.Trim();
@@ -71,16 +82,20 @@ public sealed class PointListSource : IProfileSource
                 continue;
             }
             if (parts.Length != 2) throw new SectionTwistException("bad-point-list", $"{name}:{lineNo}: expected 'x, y' but found {parts.Length} values");
+            if (++points > Limits.InputLimits.MaxPoints)
+                throw new SectionTwistException("bad-point-list", $"{name}:{lineNo}: more than {Limits.InputLimits.MaxPoints} points; thin the outline out");
             var p = new Point2(Num(parts[0], lineNo) * m, Num(parts[1], lineNo) * m);
             if (current is null) { current = new LoopBuilder(p); loopStartLine = lineNo; }
             else if (p != current.Current) current.LineTo(p);
         }
         Finish();
         if (loops.Count == 0) throw new SectionTwistException("bad-point-list", $"{name}: no points found; write one 'x, y' per line");
+        if (loops.Count > Limits.InputLimits.MaxLoops)
+            throw new SectionTwistException("bad-point-list", $"{name}: {loops.Count} loops, more than the {Limits.InputLimits.MaxLoops} SectionTwist analyses together; keep only the section's outline and holes");
         return Profile.FromLoops(loops, unitOverride ?? unit, name);
 
         double Num(string s, int ln) =>
             double.TryParse(s, NumberStyles.Float, CultureInfo.InvariantCulture, out double v) && double.IsFinite(v)
-                ? v : throw new SectionTwistException("bad-point-list", $"{name}:{ln}: '{s}' is not a number");
+                ? v : throw new SectionTwistException("bad-point-list", $"{name}:{ln}: '{(s.Length > 40 ? s[..40] + "..." : s)}' is not a number");
     }
 }

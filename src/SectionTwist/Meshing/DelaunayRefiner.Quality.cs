@@ -74,7 +74,7 @@ internal sealed partial class DelaunayRefiner
             {
                 _ct.ThrowIfCancellationRequested();
                 if (T.TriangleCount > 2L * _opt.MaxTriangles + 1000)
-                    throw new SectionTwistException("mesh-too-large", $"{_profile.Name}: the mesh exceeds {_opt.MaxTriangles} triangles; use a larger element size");
+                    throw new SectionTwistException("mesh-too-large", $"{_profile.Name}: the mesh exceeds {_opt.MaxTriangles} triangles; ask for a coarser accuracy (--accuracy) or a larger memory budget (--memory-budget MB)");
             }
             if (_segQ.Count > 0)
             {

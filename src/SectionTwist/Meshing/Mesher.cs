@@ -19,6 +19,7 @@ internal static class Mesher
     {
         ArgumentNullException.ThrowIfNull(profile);
         ArgumentNullException.ThrowIfNull(options);
+        MeshFeasibility.Check(profile);
         var refiner = new DelaunayRefiner(profile, options, ct);
         refiner.Run();
         // A boundary mid-side node far off its chord can fold a curved element (Jacobian sign change): split those

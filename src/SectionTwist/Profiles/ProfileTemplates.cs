@@ -20,6 +20,7 @@ public static class ProfileTemplates
         InvoluteSplineTemplate.Definition,
         .. HollowSectionTemplates.All(),
         .. RolledSectionTemplates.All(),
+        .. SteelSectionTemplates.All(),
     ];
 
     private static readonly string[] OutOfScope = ["crosshole", "cross-hole", "crossbore", "crossdrilled", "cross-drilled"];

@@ -1,8 +1,9 @@
 namespace SectionTwist.Shaft;
 
 /// <summary>
-/// A shaft material for torsion: shear modulus and the shear stress limits the results are checked against.
-/// All values are SI (Pa).
+/// A shaft material: shear modulus and the shear stress limits torsion results are checked against, plus the optional
+/// tensile, stiffness and mass data that bending, warping, fatigue and dynamics checks need. All values are SI
+/// (Pa, kg/m^3).
 /// </summary>
 /// <param name="Name">Display name.</param>
 /// <param name="ShearModulus">Shear modulus G, Pa.</param>
@@ -13,6 +14,25 @@ public sealed record Material(string Name, double ShearModulus, double? Allowabl
 {
     /// <summary>Distortion-energy ratio of shear yield to tensile yield, S_sy = 0.577 S_y (Budynas and Nisbett, Shigley's Mechanical Engineering Design, ch. 5).</summary>
     public const double DistortionEnergyShearRatio = 0.577;
+
+    /// <summary>Young's modulus E, Pa; null when not given (bending, warping torsion and composite sections need it).</summary>
+    public double? YoungsModulus { get; init; }
+
+    /// <summary>Mass density, kg/m^3; null when not given (shaft weight and rotational inertia need it).</summary>
+    public double? Density { get; init; }
+
+    /// <summary>Tensile yield strength S_y, Pa; null when not given.</summary>
+    public double? YieldStrength { get; init; }
+
+    /// <summary>Tensile (ultimate) strength S_u, Pa; null when not given.</summary>
+    public double? UltimateStrength { get; init; }
+
+    /// <summary>
+    /// What the strength values are: <see cref="MaterialBasis.SpecifiedMinimum"/> (a standard's guaranteed minimum),
+    /// <see cref="MaterialBasis.Typical"/> (a typical value: not a design value, outputs say so) or
+    /// <see cref="MaterialBasis.User"/> (given by the user).
+    /// </summary>
+    public MaterialBasis StrengthBasis { get; init; } = MaterialBasis.User;
 
     /// <summary>
     /// The stress the factor of safety is measured against: the allowable shear when given, otherwise the shear yield;
@@ -40,9 +60,28 @@ public sealed record Material(string Name, double ShearModulus, double? Allowabl
     {
         if (!(ShearModulus > 0) || !double.IsFinite(ShearModulus))
             throw new SectionTwistException("bad-material", $"material '{Name}': shear modulus G = {ShearModulus} Pa must be positive and finite");
-        if (AllowableShear is { } a && !(a > 0 && double.IsFinite(a)))
-            throw new SectionTwistException("bad-material", $"material '{Name}': allowable shear {a} Pa must be positive");
-        if (ShearYield is { } y && !(y > 0 && double.IsFinite(y)))
-            throw new SectionTwistException("bad-material", $"material '{Name}': shear yield {y} Pa must be positive");
+        Positive(AllowableShear, "allowable shear");
+        Positive(ShearYield, "shear yield");
+        Positive(YoungsModulus, "Young's modulus");
+        Positive(Density, "density");
+        Positive(YieldStrength, "yield strength");
+        Positive(UltimateStrength, "ultimate strength");
     }
+
+    private void Positive(double? value, string what)
+    {
+        if (value is { } v && !(v > 0 && double.IsFinite(v)))
+            throw new SectionTwistException("bad-material", $"material '{Name}': {what} {v} must be positive and finite");
+    }
+}
+
+/// <summary>What a material's strength values are.</summary>
+public enum MaterialBasis
+{
+    /// <summary>Given by the user (file or code).</summary>
+    User,
+    /// <summary>A standard's specified (guaranteed) minimum.</summary>
+    SpecifiedMinimum,
+    /// <summary>A typical value, not a guaranteed minimum: check it against the certificate before design use.</summary>
+    Typical,
 }

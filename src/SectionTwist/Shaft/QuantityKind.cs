@@ -15,5 +15,8 @@ internal enum QuantityKind
     AreaMoment,
     ShearPerTorque,
     TwistRate,
+    Density,
     Number,
+    Force,
+    Angle,
 }

@@ -36,6 +36,8 @@ internal static partial class QuantityText
                 return null;
             case QuantityKind.Power when u is "hp" or "HP" or "hp(I)":
                 return ShaftPower.MechanicalHorsepower;
+            case QuantityKind.Angle:
+                return AngleRadians(u);
             case QuantityKind.ShearPerTorque:
                 {
                     // 1/mm^3, /in^3, 1/m³: per cube of a length
@@ -76,6 +78,9 @@ internal static partial class QuantityText
         QuantityKind.AreaMoment => "mm^4, cm^4, m^4, in^4",
         QuantityKind.ShearPerTorque => "1/mm^3, 1/m^3, 1/in^3",
         QuantityKind.TwistRate => "deg/m, deg/ft, rad/m",
+        QuantityKind.Density => "kg/m^3, g/cm^3, lb/in^3",
+        QuantityKind.Force => "N, kN, lbf",
+        QuantityKind.Angle => "deg, rad",
         _ => "no unit",
     };
 
@@ -103,6 +108,8 @@ internal static partial class QuantityText
             QuantityKind.TorquePerLength => typeof(TorquePerLength),
             QuantityKind.RotationalStiffness => typeof(RotationalStiffness),
             QuantityKind.AreaMoment => typeof(AreaMomentOfInertia),
+            QuantityKind.Density => typeof(Density),
+            QuantityKind.Force => typeof(Force),
             _ => null,
         };
         if (t is null || !Quantity.TryParse(CultureInfo.InvariantCulture, t, "1 " + unit, out IQuantity? q)) return null;
@@ -117,6 +124,8 @@ internal static partial class QuantityText
             RotationalStiffness rs => rs.NewtonMetersPerRadian,
             AreaMomentOfInertia a => a.MetersToTheFourth,
             Volume vol => vol.CubicMeters,
+            Density d => d.KilogramsPerCubicMeter,
+            Force fo => fo.Newtons,
             _ => null,
         };
     }

@@ -11,6 +11,21 @@ namespace SectionTwist.Shaft;
 /// <param name="OuterDiameter">Optional outer diameter, m, for drawings.</param>
 public sealed record SectionStiffness(double TorsionConstant, double ShearPerTorque, string? Description = null, double? OuterDiameter = null)
 {
+    /// <summary>Warping constant Iw about the shear centre, m^6, when the warping function was solved; else null.</summary>
+    public double? WarpingConstant { get; init; }
+
+    /// <summary>Largest |sectorial coordinate| of the section, m^2, when the warping function was solved; else null.</summary>
+    public double? MaxSectorialCoordinate { get; init; }
+
+    /// <summary>True for an open thin-walled section whose members are sensitive to restrained warping (see <c>WarpingResult.Classification</c>).</summary>
+    public bool WarpingSensitive { get; init; }
+
+    /// <summary>
+    /// Polar second moment of area about the centroid, Ix + Iy, m^4 (not J: it sets the rotational inertia rho Ip per unit
+    /// length); null when not known (a handbook section without <c>polarMoment</c>).
+    /// </summary>
+    public double? PolarMoment { get; init; }
+
     /// <summary>
     /// Exact values for a solid round of diameter <paramref name="diameter"/> (m): J = pi d^4 / 32, tau = 16 T / (pi d^3)
     /// (Timoshenko and Goodier, Theory of Elasticity, ch. 10).
@@ -20,7 +35,7 @@ public sealed record SectionStiffness(double TorsionConstant, double ShearPerTor
         if (!(diameter > 0) || !double.IsFinite(diameter))
             throw new SectionTwistException("bad-section", $"round section: diameter {diameter} m must be positive");
         return new(Math.PI * Math.Pow(diameter, 4) / 32, 16 / (Math.PI * diameter * diameter * diameter),
-            $"round d={diameter * 1e3:G6} mm", diameter);
+            $"round d={diameter * 1e3:G6} mm", diameter) { Bending = SectionTwist.Bending.BendingSection.Round(diameter), PolarMoment = Math.PI * Math.Pow(diameter, 4) / 32 };
     }
 
     /// <summary>
@@ -38,8 +53,14 @@ public sealed record SectionStiffness(double TorsionConstant, double ShearPerTor
                 $"tube section: inner diameter {innerDiameter} m must be at least 0 and smaller than the outer diameter {outerDiameter} m");
         double d4 = Math.Pow(outerDiameter, 4) - Math.Pow(innerDiameter, 4);
         return new(Math.PI * d4 / 32, 16 * outerDiameter / (Math.PI * d4),
-            $"tube D={outerDiameter * 1e3:G6} mm d={innerDiameter * 1e3:G6} mm", outerDiameter);
+            $"tube D={outerDiameter * 1e3:G6} mm d={innerDiameter * 1e3:G6} mm", outerDiameter) { Bending = SectionTwist.Bending.BendingSection.Tube(outerDiameter, innerDiameter), PolarMoment = Math.PI * d4 / 32 };
     }
+
+    /// <summary>
+    /// Area properties and boundary shear samples for the bending and combined-stress checks; null when the section is known
+    /// only by its torsion values (then a shaft with transverse loads cannot be checked).
+    /// </summary>
+    public SectionTwist.Bending.BendingSection? Bending { get; init; }
 
     /// <summary>Checks the values; throws a <see cref="SectionTwistException"/> naming <paramref name="where"/> otherwise.</summary>
     internal void Validate(string where)

@@ -11,7 +11,9 @@ internal sealed class ShaftAnalysis(ShaftModel model)
 
     public ShaftResult Compute()
     {
+        ShaftModelGuard.CheckInput(model);
         var layout = new ShaftLayout(model);
+        ShaftModelGuard.CheckStiffnessSpread(layout);
         int n = layout.Stations.Count;
         var k = new double[n * n];
         var f = new double[n];
@@ -34,6 +36,8 @@ internal sealed class ShaftAnalysis(ShaftModel model)
         if (free) CheckBalance(layout, f);
         var constrained = free ? [layout.Reference] : layout.Fixed;
         var phi = SolveReduced(layout, k, f, n, constrained);
+        var isFixed = new bool[n];
+        foreach (int c in constrained) isFixed[c] = true;
 
         double phiRef = phi[layout.Reference];
         var stations = new StationResult[n];
@@ -53,6 +57,7 @@ internal sealed class ShaftAnalysis(ShaftModel model)
             reactions.Add(new SupportReaction(layout.Stations[i].Name, r));
         }
 
+        ShaftModelGuard.CheckSolution(k, f, phi, n, isFixed, free ? null : reactions);
         double scale = 0;
         foreach (var v in f) scale += Math.Abs(v);
         var segments = BuildSegments(layout, phi, scale);
@@ -62,7 +67,7 @@ internal sealed class ShaftAnalysis(ShaftModel model)
         var governing = segments.Where(s => s.ShearLimit is not null && s.MaxShear > 0)
             .OrderByDescending(s => s.MaxShear / s.ShearLimit!.Value).FirstOrDefault();
         var governingTwist = segments.Where(s => s.MaxTwistRate > 0).OrderByDescending(s => s.MaxTwistRate).FirstOrDefault();
-        return new ShaftResult
+        var result = new ShaftResult
         {
             Model = model,
             // Read-only views: a host cannot change a result through a cast back to the array or list.
@@ -74,6 +79,8 @@ internal sealed class ShaftAnalysis(ShaftModel model)
             GoverningSegment = governing,
             GoverningTwistSegment = governingTwist,
         };
+        ShaftModelGuard.CheckFinite(result);
+        return result;
     }
 
     /// <summary>A shaft with no support must carry torques that sum to zero, else it would spin up (a loose shaft).</summary>

@@ -29,4 +29,8 @@ public sealed record ShaftDisplayUnits(DisplayUnit Length, DisplayUnit Torque, D
 /// <param name="Path">The file, as given.</param>
 /// <param name="Model">The shaft model (SI).</param>
 /// <param name="Units">Display units from the file's <c>units</c> block.</param>
-public sealed record ShaftDocument(string Path, ShaftModel Model, ShaftDisplayUnits Units);
+public sealed record ShaftDocument(string Path, ShaftModel Model, ShaftDisplayUnits Units)
+{
+    /// <summary>The file's <c>dynamics</c> block (inertias, further shafts, stages, excitations), or null when it has none.</summary>
+    public Dynamics.DynamicsInput? Dynamics { get; init; }
+}

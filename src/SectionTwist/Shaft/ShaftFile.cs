@@ -12,9 +12,7 @@ public static class ShaftFile
     public static ShaftDocument Load(string path, Func<SectionSource, SectionStiffness>? resolver = null)
     {
         ArgumentNullException.ThrowIfNull(path);
-        if (!File.Exists(path))
-            throw new SectionTwistException("file-not-found", $"{path}: no such shaft file; check the path");
-        string text = File.ReadAllText(path);
+        string text = Limits.InputFile.ReadAllText(path, Limits.InputLimits.MaxShaftFileBytes, "shaft file");
         string dir = Path.GetDirectoryName(Path.GetFullPath(path)) ?? ".";
         return new ShaftFileReader(Path.GetFileName(path), dir, resolver).Read(path, text);
     }

@@ -54,7 +54,7 @@ internal sealed class ShaftFileContext(string fileName)
                     : $"'{unit}' is not a unit of this kind; use one of {QuantityText.Examples(kind)}");
         }
         double si = v * factor;
-        if (!double.IsFinite(si)) throw Error(node, key, $"'{text}' is not a finite number");
+        if (ShaftValueRange.Check(kind, si) is { } problem) throw Error(node, key, $"'{YamlGuard.Short(text)}' {problem}");
         return si;
     }
 }

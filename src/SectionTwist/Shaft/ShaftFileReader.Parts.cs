@@ -38,7 +38,7 @@ internal sealed partial class ShaftFileReader
         foreach (var (k, v) in map.Children)
         {
             string name = ((YamlScalarNode)k).Value ?? "";
-            var m = new YamlMap(_file, v, $"material '{name}'", "name", "library", "G", "E", "poisson", "allowableShear", "shearYield", "yield", "ultimate", "source");
+            var m = new YamlMap(_file, v, $"material '{name}'", "name", "library", "G", "E", "poisson", "density", "allowableShear", "shearYield", "yield", "ultimate", "source");
             Material? lib = null;
             if (m.Get("library") is { } ln)
             {
@@ -50,34 +50,53 @@ internal sealed partial class ShaftFileReader
                 }
                 lib = found;
             }
+            double? e = m.Has("E") ? PositiveStress(m, "E") : lib?.YoungsModulus;
             double g;
             if (m.Has("G"))
             {
-                if (m.Has("E") || m.Has("poisson")) throw _file.Error(m.KeyNode("E"), "E", $"material '{name}': give either G or E with poisson, not both");
+                if (m.Has("poisson")) throw _file.Error(m.KeyNode("poisson"), "poisson", $"material '{name}': give G, or E with poisson, not G and poisson");
                 g = m.Quantity("G", QuantityKind.Modulus)!.Value;
             }
-            else if (m.Has("E") || m.Has("poisson"))
+            else if (m.Has("poisson"))
             {
-                if (!m.Has("E") || !m.Has("poisson"))
-                    throw _file.Error(v, m.Has("E") ? "poisson" : "E", $"material '{name}': G = E / (2 (1 + poisson)) needs both 'E' and 'poisson'");
+                if (!m.Has("E")) throw _file.Error(v, "E", $"material '{name}': G = E / (2 (1 + poisson)) needs both 'E' and 'poisson'");
                 double nu = m.Quantity("poisson", QuantityKind.Number)!.Value;
                 if (!(nu > -1 && nu < 0.5)) throw _file.Error(m.Get("poisson")!, "poisson", "Poisson's ratio must lie between -1 and 0.5 (steel about 0.3)");
-                g = Material.ShearModulusFrom(PositiveStress(m, "E"), nu);
+                g = Material.ShearModulusFrom(e!.Value, nu);
             }
+            else if (m.Has("E") && lib is null)
+                throw _file.Error(v, "poisson", $"material '{name}': G = E / (2 (1 + poisson)) needs both 'E' and 'poisson' (or give G)");
             else g = lib?.ShearModulus ?? throw _file.Error(v, "G", $"material '{name}' needs a shear modulus: 'G', or 'E' and 'poisson', or 'library'");
-            if (!(g > 0)) throw _file.Error(m.Get("G")!, "G", "the shear modulus must be positive");
+            if (!(g > 0)) throw _file.Error(m.Get("G") ?? v, "G", "the shear modulus must be positive");
+            if (ShaftValueRange.Check(QuantityKind.Modulus, g) is { } odd) throw _file.Error(m.Get("G") ?? m.Get("E") ?? v, "G", $"material '{name}': the shear modulus {odd}");
 
-            double? allow = lib?.AllowableShear, ssy = lib?.ShearYield;
+            double? allow = lib?.AllowableShear, ssy = lib?.ShearYield, sy = lib?.YieldStrength, su = lib?.UltimateStrength;
+            bool strengthsGiven = m.Has("yield") || m.Has("ultimate") || m.Has("allowableShear") || m.Has("shearYield");
             if (m.Has("yield") || m.Has("ultimate"))
             {
-                var derived = ShaftMaterials.FromStrengths(name, g, m.Has("yield") ? PositiveStress(m, "yield") : null, m.Has("ultimate") ? PositiveStress(m, "ultimate") : null, "");
+                sy = m.Has("yield") ? PositiveStress(m, "yield") : null;
+                su = m.Has("ultimate") ? PositiveStress(m, "ultimate") : null;
+                var derived = ShaftMaterials.FromStrengths(name, g, sy, su, "");
                 allow = derived.AllowableShear; ssy = derived.ShearYield;
             }
             if (m.Has("allowableShear")) allow = PositiveStress(m, "allowableShear");
             if (m.Has("shearYield")) ssy = PositiveStress(m, "shearYield");
-            string source = m.String("source") ?? (lib is not null && !m.Has("G") && !m.Has("E") && !m.Has("yield") && !m.Has("ultimate") && !m.Has("allowableShear") && !m.Has("shearYield")
+            double? density = lib?.Density;
+            if (m.Has("density"))
+            {
+                density = m.Quantity("density", QuantityKind.Density)!.Value;
+                if (!(density > 0) || !double.IsFinite(density.Value)) throw _file.Error(m.Get("density")!, "density", "the density must be positive, e.g. '7850 kg/m^3'");
+            }
+            string source = m.String("source") ?? (lib is not null && !m.Has("G") && !m.Has("E") && !m.Has("density") && !strengthsGiven
                 ? lib.Source : $"given in {_file.FileName}{(lib is null ? "" : $", based on library '{m.String("library")}'")}");
-            result[name] = new Material(m.String("name") ?? name, g, allow, ssy, source);
+            result[name] = new Material(m.String("name") ?? name, g, allow, ssy, source)
+            {
+                YoungsModulus = e,
+                Density = density,
+                YieldStrength = sy,
+                UltimateStrength = su,
+                StrengthBasis = strengthsGiven || lib is null ? MaterialBasis.User : lib.StrengthBasis,
+            };
         }
         return result;
     }
@@ -116,7 +135,8 @@ internal sealed partial class ShaftFileReader
     /// <summary>Checks a section definition now and returns a cached getter (template and DXF sections are analysed once, on first use).</summary>
     private Func<SectionStiffness> ReadSection(YamlNode node, string name)
     {
-        var m = new YamlMap(_file, node, $"section '{name}'", "round", "tube", "J", "shearFactor", "torsionalModulus", "description", "outerDiameter", "template", "dxf", "layer", "part");
+        var m = new YamlMap(_file, node, $"section '{name}'", "round", "tube", "J", "shearFactor", "torsionalModulus", "polarMoment", "description", "outerDiameter", "template", "dxf",
+            "layer", "part", "at", "window", "hatch", "fitArcs", "snap", "skipOpen", "unit");
         string[] kinds = [.. new[] { "round", "tube", "J", "template", "dxf" }.Where(m.Has)];
         if (kinds.Length != 1)
             throw _file.Error(node, kinds.Length == 0 ? "round" : kinds[1],
@@ -155,17 +175,21 @@ internal sealed partial class ShaftFileReader
                         factor = 1 / z;
                     }
                     if (!(factor > 0)) throw _file.Error(m.Get("shearFactor")!, "shearFactor", "must be positive");
-                    var s = new SectionStiffness(j, factor, description ?? name, od);
+                    double? ip = m.Quantity("polarMoment", QuantityKind.AreaMoment);
+                    if (ip is { } ipv && !(ipv > 0)) throw _file.Error(m.Get("polarMoment")!, "polarMoment", "the polar second moment of area must be positive");
+                    var s = new SectionStiffness(j, factor, description ?? name, od) { PolarMoment = ip };
                     return () => s;
                 }
             default:
                 {
                     bool template = kinds[0] == "template";
-                    if (template && (m.Has("layer") || m.Has("part")))
-                        throw _file.Error(m.KeyNode(m.Has("layer") ? "layer" : "part"), m.Has("layer") ? "layer" : "part", "'layer' and 'part' belong to DXF sections; remove them from a template section");
+                    if (template && DrawingKeys.FirstOrDefault(m.Has) is { } drawingKey)
+                        throw _file.Error(m.KeyNode(drawingKey), drawingKey, $"'{drawingKey}' belongs to DXF sections ({string.Join(", ", DrawingKeys)}); remove it from a template section");
                     string value = m.String(kinds[0])!;
                     string? dxfPath = template ? null : Path.GetFullPath(Path.Combine(_baseDirectory, value));
-                    var src = new SectionSource(name, template ? value : null, dxfPath, m.String("layer"), m.String("part"), _file.Where(m.Get(kinds[0])!));
+                    var src = template
+                        ? new SectionSource(name, value, null, null, null, _file.Where(m.Get(kinds[0])!))
+                        : ReadDrawingKeys(m, name, dxfPath!);
                     var at = m.Get(kinds[0])!;
                     SectionStiffness? cached = null;
                     return () => cached ??= Resolve(src, at, kinds[0], description, od);

@@ -11,7 +11,7 @@ namespace SectionTwist.Shaft;
 /// </summary>
 internal sealed partial class ShaftFileReader
 {
-    private static readonly string[] TopKeys = ["title", "units", "materials", "sections", "stations", "segments", "loads", "supports", "springs", "reference", "twistLimit"];
+    private static readonly string[] TopKeys = ["title", "units", "materials", "sections", "stations", "segments", "loads", "supports", "springs", "reference", "twistLimit", "bending", "warping", "dynamics"];
     private readonly ShaftFileContext _file;
     private readonly string _baseDirectory;
     private readonly Func<SectionSource, SectionStiffness>? _resolver;
@@ -28,6 +28,7 @@ internal sealed partial class ShaftFileReader
 
     public ShaftDocument Read(string path, string text)
     {
+        YamlGuard.Check(text, _file.FileName);
         var stream = new YamlStream();
         try { stream.Load(new StringReader(text)); }
         catch (YamlException e)
@@ -39,6 +40,11 @@ internal sealed partial class ShaftFileReader
             // The YAML scanner gives up without a position on some malformed input (e.g. an unclosed '{'): report the last good spot.
             var (line, col) = LastGoodPosition(text);
             throw new SectionTwistException("shaft-file", $"{_file.FileName}:{line}:{col}: not valid YAML after this point; check for an unclosed '{{' or '[' or a stray quote");
+        }
+        catch (Exception e) when (e is ArgumentException or FormatException or NotSupportedException or UriFormatException)
+        {
+            var (line, col) = LastGoodPosition(text);
+            throw new SectionTwistException("shaft-file", $"{_file.FileName}:{line}:{col}: not valid YAML after this point ({YamlGuard.Short(e.Message, 120)}); check the keys, tags and quoting there");
         }
         if (stream.Documents.Count == 0)
             throw new SectionTwistException("shaft-file", $"{_file.FileName}:1: the file is empty; see docs/shaft-file.md for an example");
@@ -66,8 +72,10 @@ internal sealed partial class ShaftFileReader
             Springs = springs,
             ReferenceStation = reference,
             TwistRateLimit = limit,
+            Bending = root.Get("bending") is { } bn ? ReadBending(bn) : null,
+            Warping = root.Get("warping") is { } wn ? ReadWarping(wn) : null,
         };
-        return new ShaftDocument(path, model, units);
+        return new ShaftDocument(path, model, units) { Dynamics = root.Get("dynamics") is { } dn ? ReadDynamics(dn, model, materials, sections) : null };
     }
 
     private static (long Line, long Column) LastGoodPosition(string text)
@@ -79,7 +87,7 @@ internal sealed partial class ShaftFileReader
             while (parser.MoveNext()) if (parser.Current is { } ev) { line = ev.Start.Line; col = ev.Start.Column; }
         }
         catch (YamlException e) { line = e.Start.Line; col = e.Start.Column; }
-        catch (InvalidOperationException) { }
+        catch (Exception) { }
         return (line, col);
     }
 
@@ -87,7 +95,13 @@ internal sealed partial class ShaftFileReader
 
     private IEnumerable<YamlNode> Sequence(YamlNode node, string key, string example)
     {
-        if (node is YamlSequenceNode seq) return seq.Children;
+        if (node is YamlSequenceNode seq)
+        {
+            int max = key == "stations" ? Limits.InputLimits.MaxStations : Limits.InputLimits.MaxShaftItems;
+            if (seq.Children.Count > max)
+                throw _file.Error(node, key, $"{seq.Children.Count} entries, more than the {max} SectionTwist solves in one shaft; merge {(key == "stations" ? "stations (a prismatic stretch needs none between its ends)" : "entries")} or split the shaft");
+            return seq.Children;
+        }
         throw _file.Error(node, key, $"expected a list (lines starting with '- '), found {YamlMap.Describe(node)}; e.g. '{example}'");
     }
 
@@ -111,6 +125,8 @@ internal sealed partial class ShaftFileReader
                 if (!(after > 0))
                     throw _file.Error(m.Get("after")!, "after", $"negative or zero length {Si(after)} m from the previous station; stations are listed along the axis, so 'after' must be positive (use 'at' for an absolute position)");
                 x = previous.Value + after;
+                if (ShaftValueRange.Check(QuantityKind.Length, x) is { } far)
+                    throw _file.Error(m.Get("after")!, "after", $"station '{name}' ends up at {Si(x)} m, which {far}");
             }
             _stations[name] = x;
             _stationList.Add(new Station(name, x));
@@ -212,6 +228,8 @@ internal sealed partial class ShaftFileReader
                 double p = m.Quantity("power", QuantityKind.Power)!.Value, w = m.Quantity("speed", QuantityKind.Speed)!.Value;
                 if (w == 0) throw _file.Error(m.Get("speed")!, "speed", "speed must not be zero to turn power into torque");
                 total = ShaftPower.Torque(p, w);
+                if (ShaftValueRange.Check(QuantityKind.Torque, total) is { } big)
+                    throw _file.Error(m.Get("power")!, "power", $"power / speed gives a torque of {Si(total)} N*m, which {big}");
                 auto = $"{m.String("power")} at {m.String("speed")}";
             }
             if (m.Has("at"))
@@ -227,6 +245,8 @@ internal sealed partial class ShaftFileReader
                 throw _file.Error(m.Get("to")!, "to", $"no segment joins '{from}' and '{to}'; a distributed torque acts on one segment (split it into one load per segment)");
             double length = Math.Abs(_stations[to] - _stations[from]);
             double perLength = m.Has("torquePerLength") ? m.Quantity("torquePerLength", QuantityKind.TorquePerLength)!.Value : total / length;
+            if (ShaftValueRange.Check(QuantityKind.TorquePerLength, perLength) is { } dense)
+                throw _file.Error(m.Get("to")!, "to", $"the load spread over {from}-{to} is {Si(perLength)} N*m/m, which {dense}");
             list.Add(new DistributedTorque(from, to, perLength) { Description = name ?? auto });
         }
         return list;

@@ -32,6 +32,13 @@ public sealed record ShaftModel
     public string? ReferenceStation { get; init; }
     /// <summary>Allowed twist rate, rad/m (e.g. 0.25 deg/m = 0.00436 rad/m); null for no check.</summary>
     public double? TwistRateLimit { get; init; }
+    /// <summary>
+    /// Warping conditions per station for segments of open section (Vlasov torsion, <see cref="WarpingTorsion.WarpingMemberSolver"/>):
+    /// null when not stated (open sections then draw a warning), empty when free warping everywhere is stated.
+    /// </summary>
+    public IReadOnlyDictionary<string, WarpingTorsion.WarpingEnd>? Warping { get; init; }
+    /// <summary>Bearings, transverse loads and strength checks (bending with torsion); null for torsion only.</summary>
+    public Bending.BendingModel? Bending { get; init; }
     /// <summary>Optional title for reports.</summary>
     public string? Title { get; init; }
 }

@@ -23,6 +23,12 @@ public sealed record ShaftResult
     public required SegmentResult? GoverningSegment { get; init; }
     /// <summary>The segment with the highest twist rate.</summary>
     public required SegmentResult? GoverningTwistSegment { get; init; }
+    /// <summary>Non-uniform torsion with restrained warping (when <see cref="ShaftModel.Warping"/> restrains a station), else null.</summary>
+    public WarpingTorsion.WarpingMemberResult? Warping { get; init; }
+    /// <summary>Warnings about warping: open sections solved with free warping, and the cautions of the warping analysis.</summary>
+    public IReadOnlyList<string> WarpingWarnings { get; init; } = [];
+    /// <summary>The bending solution and strength checks, or null when the model has no <see cref="ShaftModel.Bending"/>.</summary>
+    public SectionTwist.Bending.BendingResult? Bending { get; init; }
     /// <summary>Twist-rate limit, rad/m, or null.</summary>
     public double? TwistRateLimit => Model.TwistRateLimit;
     /// <summary>True when some segment exceeds its allowable shear or the twist-rate limit.</summary>

@@ -28,9 +28,10 @@ internal static class ShaftResultCsv
     {
         AtomicFile.WriteText(Path.Combine(directory, "stations.csv"), Stations(r));
         AtomicFile.WriteText(Path.Combine(directory, "segments.csv"), Segments(r));
+        if (r.Bending is { } b) AtomicFile.WriteText(Path.Combine(directory, "bending.csv"), Bending.BendingCsv.Samples(b));
     }
 
-    private static string N(double? v) => v is { } x ? double.IsFinite(x) ? x.ToString("R", CultureInfo.InvariantCulture) : double.IsPositiveInfinity(x) ? "inf" : "" : "";
+    internal static string N(double? v) => v is { } x ? double.IsFinite(x) ? x.ToString("R", CultureInfo.InvariantCulture) : double.IsPositiveInfinity(x) ? "inf" : "" : "";
 
-    private static string Text(string s) => s.AsSpan().IndexOfAny(",\"\n") >= 0 ? "\"" + s.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"" : s;
+    internal static string Text(string s) => s.AsSpan().IndexOfAny(",\"\n") >= 0 ? "\"" + s.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"" : s;
 }

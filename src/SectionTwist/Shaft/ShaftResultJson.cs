@@ -14,7 +14,20 @@ internal static class ShaftResultJson
         PropertyNamingPolicy = JsonNamingPolicy.CamelCase,
         WriteIndented = true,
         DefaultIgnoreCondition = JsonIgnoreCondition.Never,
+        Converters = { new FiniteOrNull() },
     };
+
+    /// <summary>Writes a non-finite double as null: JSON has no infinity, and the result guard should never let one through.</summary>
+    private sealed class FiniteOrNull : JsonConverter<double>
+    {
+        public override double Read(ref Utf8JsonReader reader, Type typeToConvert, JsonSerializerOptions options) => reader.GetDouble();
+
+        public override void Write(Utf8JsonWriter writer, double value, JsonSerializerOptions options)
+        {
+            if (double.IsFinite(value)) writer.WriteNumberValue(value);
+            else writer.WriteNullValue();
+        }
+    }
 
     public static string Write(ShaftResult r, string? file = null) => JsonSerializer.Serialize(ToDto(r, file), Options);
 
@@ -41,6 +54,8 @@ internal static class ShaftResultJson
             length = s.Length,
             section = s.Section,
             material = s.Material.Name,
+            materialSource = s.Material.Source,
+            materialStrengthBasis = s.Material.StrengthBasis switch { MaterialBasis.SpecifiedMinimum => "specified-minimum", MaterialBasis.Typical => "typical", _ => "user" },
             stiffness = s.Stiffness,
             internalTorque = s.InternalTorque,
             torqueAtFrom = s.TorqueAtFrom,
@@ -56,5 +71,20 @@ internal static class ShaftResultJson
         }),
         reactions = r.Reactions.Select(x => new { station = x.Station, torque = x.Torque }),
         springs = r.Springs.Select(x => new { name = x.Label, stationA = x.StationA, stationB = x.StationB, torque = x.Torque, windup = x.Windup }),
+        warpingWarnings = r.WarpingWarnings,
+        warping = r.Warping is not { } w ? null : new
+        {
+            stations = w.Stations.Select(s => new { name = s.Name, position = s.Position, rotation = s.Rotation, rateOfTwist = s.RateOfTwist, reactionTorque = s.ReactionTorque, reactionBimoment = s.ReactionBimoment }),
+            segments = w.Segments.Select(s => new
+            {
+                name = s.Label,
+                warpingLength = s.WarpingLength,
+                maxRotation = s.MaxRotation,
+                maxBimoment = s.MaxBimoment,
+                maxWarpingNormalStress = s.MaxWarpingNormalStress,
+                maxSaintVenantShear = s.MaxSaintVenantShear,
+            }),
+        },
+        bending = r.Bending is null ? null : Bending.BendingJson.ToDto(r.Bending),
     };
 }

@@ -14,6 +14,8 @@ public static class ShaftSolver
     public static ShaftResult Solve(ShaftModel model)
     {
         ArgumentNullException.ThrowIfNull(model);
-        return new ShaftAnalysis(model).Compute();
+        var result = new ShaftAnalysis(model).Compute();
+        result = model.Bending is null ? result : result with { Bending = Bending.ShaftBending.Solve(result) };
+        return WarpingTorsion.ShaftWarping.Attach(result);
     }
 }

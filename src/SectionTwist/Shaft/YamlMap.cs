@@ -58,7 +58,7 @@ internal sealed class YamlMap
     {
         YamlMappingNode => "a mapping",
         YamlSequenceNode => "a list",
-        YamlScalarNode s => $"'{s.Value}'",
+        YamlScalarNode s => $"'{YamlGuard.Short(s.Value ?? "")}'",
         _ => "nothing",
     };
 

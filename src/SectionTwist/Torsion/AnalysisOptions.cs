@@ -22,8 +22,31 @@ public sealed record AnalysisOptions
     /// <summary>Upper limit on the number of elements of a single solve.</summary>
     public int MaxElements { get; init; } = 2_000_000;
 
+    /// <summary>
+    /// Memory the analysis may use, bytes (default <see cref="DefaultMemoryBudget"/>). The element count is estimated
+    /// before meshing and solving: a section that would need more is refused with a message, and refinement stops with an
+    /// accuracy warning before a pass would exceed it.
+    /// </summary>
+    public long MemoryBudgetBytes { get; init; } = DefaultMemoryBudget;
+
+    /// <summary>The default memory budget: 4 GiB, or half the memory available to the process when that is less.</summary>
+    public static long DefaultMemoryBudget { get; } = Math.Min(4L << 30, Math.Max(256L << 20, GC.GetGCMemoryInfo().TotalAvailableMemoryBytes / 2));
+
     /// <summary>Angle (degrees, measured inside the material) above which an unfilleted corner is reported as a singular re-entrant corner.</summary>
     public double ReentrantWarningAngleDeg { get; init; } = 185;
+
+    /// <summary>
+    /// Also solve the warping function on the same meshes: shear centre, warping constant and sectorial coordinate
+    /// (<see cref="SectionResult.Warping"/>) and a second, upper-bound J that can tighten the error estimate. Off by
+    /// default: the two extra solves (last coarse and fine mesh) add 40 to 140 % to the analysis time.
+    /// </summary>
+    public bool Warping { get; init; }
+
+    /// <summary>
+    /// Solve the warping function only when the section looks open (J below half the polar moment): shaft files use this
+    /// so that round, keyed and splined shafts pay nothing.
+    /// </summary>
+    internal bool WarpingIfOpen { get; init; }
 
     /// <summary>The default options.</summary>
     public static AnalysisOptions Default { get; } = new();

@@ -73,6 +73,10 @@ internal static class FieldRecovery
         }
         var boundaries = mesh.Loops.Select(l =>
             (IReadOnlyList<Point2>)l.Geometry.Flatten(1e-4 * Math.Max(l.Geometry.Bounds.Diagonal, 1e-300))).ToList();
-        return new SectionField((double[])mesh.X.Clone(), (double[])mesh.Y.Clone(), tris, (double[])sol.Phi.Clone(), sx, sy, boundaries, corners);
+        var chains = BoundaryFluxRecovery.BoundaryChains(mesh).Select(c => c.SelectMany(e => new[] { e.A, e.Mid }).ToArray()).ToArray();
+        return new SectionField((double[])mesh.X.Clone(), (double[])mesh.Y.Clone(), tris, (double[])sol.Phi.Clone(), sx, sy, boundaries, corners)
+        {
+            BoundaryNodeChains = chains,
+        };
     }
 }

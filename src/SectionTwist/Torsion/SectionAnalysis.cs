@@ -44,17 +44,19 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
         double p = CornerAnalysis.LowestOrder(corners);
         RichardsonEstimate.Result? last = null;
         double warnAngle = options.ReentrantWarningAngleDeg * Math.PI / 180;
-        var sharp = corners.Where(c => c.InteriorAngle > warnAngle).ToList();
+        var (sharp, facetWarnings) = FacetWarnings.Split(profile, corners.Where(c => c.InteriorAngle > warnAngle).ToList(), Show);
+        warnings.AddRange(facetWarnings);
         foreach (var c in sharp.Take(5))
             warnings.Add(new AnalysisWarning("sharp-reentrant-corner",
                 $"sharp re-entrant corner at {Show(c.Where)} (interior angle {c.InteriorAngle * 180 / Math.PI:F0} deg): the peak shear there is singular and grows with refinement; model the real fillet radius"));
         if (sharp.Count > 5)
             warnings.Add(new AnalysisWarning("sharp-reentrant-corner", $"{sharp.Count - 5} more sharp re-entrant corners; model the real fillet radii"));
-        bool singular = sharp.Count > 0;
+        bool singular = sharp.Count > 0 || facetWarnings.Count > 0;
 
         var holeArea = profile.Regions.SelectMany(r => r.Loops).Select(l => Math.Abs(l.SignedArea)).ToArray();
         double size = Math.Sqrt(props.Area);
         double h = Math.Min(0.6 * size * Math.Pow(acc, 0.25), profile.Bounds.Diagonal / 8);
+        var budget = AnalysisBudget.For(profile, options, acc, h);
         TorsionSolution? coarse = null, fine = null, pairC = null, pairF = null;
         Mesh? coarseMesh = null;
         Func<Point2, double>? sizeField = null;
@@ -64,22 +66,32 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
         {
             ct.ThrowIfCancellationRequested();
             double f0 = (double)pass / MaxPasses, span = 1.0 / MaxPasses;
-            coarseMesh = Mesher.Generate(profile, new MeshOptions { MaxEdgeLength = h, MaxTriangles = options.MaxElements, SizeField = sizeField, MaxArcAngleDegrees = ArcAngle(acc) }, ct);
+            Mesh mesh;
+            try { mesh = Mesher.Generate(profile, new MeshOptions { MaxEdgeLength = h, MaxTriangles = budget.MaxElements, SizeField = sizeField, MaxArcAngleDegrees = ArcAngle(acc) }, ct); }
+            catch (SectionTwistException e) when (e.Code == "mesh-too-large")
+            {
+                if (pass == 0) throw budget.Refusal();
+                warnings.Add(new AnalysisWarning("accuracy-not-reached", $"{budget.Describe()} stopped refinement; results carry the error estimate of the last pass"));
+                break;
+            }
+            coarseMesh = mesh;
             Report("solve", f0 + 0.2 * span);
             coarse = TorsionSolver.Solve(coarseMesh, holeArea, ct, SolverTolerance(acc));
             if (!options.EstimateError) { fine = coarse; break; }
-            if (4L * coarseMesh.ElementCount > options.MaxElements)
+            if (4L * coarseMesh.ElementCount > budget.MaxElements)
             {
                 // Keep the last pair of meshes with its estimate; without one the error is unknown.
                 warnings.Add(new AnalysisWarning("accuracy-not-reached", last is null
-                    ? $"the element limit ({options.MaxElements}) stopped the analysis before a refined solve; the error is not estimated"
-                    : $"the element limit ({options.MaxElements}) stopped refinement at an estimated {estJ:G2} for J; results are from the last pair of meshes"));
+                    ? $"{budget.Describe()} stopped the analysis before a refined solve; the error is not estimated"
+                    : $"{budget.Describe()} stopped refinement at an estimated {estJ:G2} for J; results are from the last pair of meshes"));
                 if (last is null) fine = coarse;
                 else (coarse, fine, coarseMesh) = (pairC!, pairF!, pairC!.Mesh);
                 break;
             }
             Report("refine", f0 + 0.4 * span);
+            ct.ThrowIfCancellationRequested();
             var fineMesh = MeshRefinement.Uniform(coarseMesh);
+            ct.ThrowIfCancellationRequested();
             fine = TorsionSolver.Solve(fineMesh, holeArea, ct, SolverTolerance(acc));
             last = RichardsonEstimate.Compute(coarse, fine, corners, ct);
             (pairC, pairF) = (coarse, fine);
@@ -101,8 +113,10 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
             }
             // Next pass: a size field from the Zienkiewicz-Zhu indicators of the coarse solution, aimed so that the next
             // coarse mesh has a J error of about 2^p times the target (the refined solve then meets the target).
+            ct.ThrowIfCancellationRequested();
             var coarseField = FieldRecovery.Build(coarse);
             var eta2 = AdaptiveSizing.Indicators(coarse, coarseField);
+            ct.ThrowIfCancellationRequested();
             // Richardson gives the coarse error E_r = |Jf - Jc| 2^p / (2^p - 1); the indicators give E_zz. Ask the
             // indicators for the reduction that Richardson says is needed (this calibrates them at singular corners).
             double coarseErr = Math.Abs(fine.J - coarse.J) * Math.Pow(2, p) / (Math.Pow(2, p) - 1) / fine.J;
@@ -132,6 +146,17 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
             warnings.Add(new AnalysisWarning("peak-shear-unresolved",
                 $"the peak shear at {Show(useF.MaxGradientLocation)} lies on a curve the mesh did not resolve within the limits; its error is not estimated; rerun with a finer accuracy (the first mesh is then finer at the peak)"));
         }
+        Warping.WarpingResult? warping = null;
+        if (options.Warping || (options.WarpingIfOpen && j < 0.5 * props.PolarMoment))
+        {
+            Report("warping", 0.97);
+            warping = Warping.WarpingProperties.Compute(useC.Mesh, useF.Mesh, props, j, ct);
+            if (warping is null)
+                warnings.Add(new AnalysisWarning("warping-not-computed",
+                    $"the profile has {profile.Regions.Count} separate parts: they warp independently and have no common shear centre; analyse each part alone for its warping properties"));
+            else estJ = Bracket(j, useF.J, warping.TorsionConstantUpperBound, estJ);
+        }
+        estJ += CurveTerm(useF);
         var field = FieldRecovery.Build(useF);
         Report("done", 1);
         return new SectionResult
@@ -146,6 +171,7 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
             Warnings = warnings.AsReadOnly(),
             Field = field,
             RegionTorsionConstants = Array.AsReadOnly(regionJ),
+            Warping = warping,
         };
     }
 
@@ -155,6 +181,35 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
     /// accuracy even at condition numbers near 1e10; below the attainable floor the solver stops at the floor.
     /// </summary>
     internal static double SolverTolerance(double accuracy) => Math.Clamp(1e-4 * accuracy, 1e-12, 1e-9);
+
+    /// <summary>
+    /// The effect on J of drawn curves replaced within <see cref="Profile.CurveTolerance"/> h: by the shape derivative of
+    /// the torsion constant, dJ = integral over the boundary of |grad phi|^2 times the normal displacement (Hadamard's
+    /// formula for the Dirichlet problem; Sokolowski and Zolesio, Introduction to Shape Optimization, Springer 1992,
+    /// ch. 3; for the torsional rigidity see Polya and Szego, Isoperimetric Inequalities in Mathematical Physics, 1951),
+    /// so |dJ| / J &lt;= h (max |grad phi|)^2 (perimeter) / J, a bound.
+    /// </summary>
+    private double CurveTerm(TorsionSolution s)
+    {
+        double h = profile.CurveTolerance;
+        if (!(h > 0)) return 0;
+        double perimeter = profile.Loops.Sum(l => l.Perimeter);
+        return h * s.MaxGradient * s.MaxGradient * perimeter / s.J;
+    }
+
+    /// <summary>
+    /// On the same mesh the stress-function J is a lower bound (complementary energy) and the warping-function J an upper
+    /// bound (potential energy) of the exact J of the mesh's domain, so for a polygonal profile (the mesh domain is the
+    /// exact one) the extrapolated J lies within max(J - lower, upper - J) of the truth. The estimate becomes the smaller
+    /// of that guaranteed bracket and the Richardson estimate; curved outlines keep the Richardson estimate.
+    /// </summary>
+    private double Bracket(double j, double lower, double upper, double estimate)
+    {
+        bool polygonal = profile.Loops.All(l => l.Segments.All(s => s is LineSegment));
+        if (!polygonal || !(lower <= j && j <= upper)) return estimate;
+        double bound = Math.Max(j - lower, upper - j) / j;
+        return double.IsNaN(estimate) ? bound : Math.Min(estimate, bound);
+    }
 
     /// <summary>Largest arc angle per boundary edge: coarse curved edges suffice at modest accuracy.</summary>
     private static double ArcAngle(double accuracy) => Math.Clamp(30 * Math.Pow(accuracy / 1e-4, 0.125), 10, AdaptiveSizing.PeakEdgeTurn * 180 / Math.PI);

@@ -35,6 +35,12 @@ public sealed class SectionField
     /// <summary>Boundary loops as fine polylines (m), for outlines.</summary>
     public IReadOnlyList<IReadOnlyList<Point2>> Boundaries { get; }
 
+    /// <summary>
+    /// Boundary nodes of the mesh, one ordered chain per loop (corner and mid-side nodes along the loop); their shear is the
+    /// smoothed consistent boundary flux. The combined-stress scan of the bending stage walks these.
+    /// </summary>
+    internal IReadOnlyList<int[]> BoundaryNodeChains { get; init; } = [];
+
     /// <summary>Shear stress magnitude per unit torque at node <paramref name="i"/>, 1/m^3.</summary>
     public double ShearMagnitude(int i) => Math.Sqrt(ShearX[i] * ShearX[i] + ShearY[i] * ShearY[i]);
 }

@@ -29,6 +29,11 @@ public sealed record SectionResult
     public required SectionField Field { get; init; }
     /// <summary>The torsion constant of each region, m^4 (their sum is <see cref="TorsionConstant"/>).</summary>
     public required IReadOnlyList<double> RegionTorsionConstants { get; init; }
+    /// <summary>
+    /// Warping properties (shear centre, warping constant, sectorial coordinate); null when not requested
+    /// (<see cref="AnalysisOptions.Warping"/>) or when the profile has more than one separate region.
+    /// </summary>
+    public Warping.WarpingResult? Warping { get; init; }
     /// <summary>The unit the profile was given in (display only).</summary>
     public LengthUnit LengthUnit => Profile.Unit;
     /// <summary>The polar moment about the centroid, m^4, for comparison with J.</summary>

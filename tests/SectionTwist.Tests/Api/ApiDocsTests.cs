@@ -2,6 +2,7 @@ using System.Text.RegularExpressions;
 using SectionTwist.Geometry;
 using SectionTwist.Import.Dxf;
 using SectionTwist.Profiles;
+using SectionTwist.Shaft;
 using SectionTwist.Torsion;
 using SectionTwist.Verification;
 
@@ -52,6 +53,14 @@ public partial class ApiDocsTests
         var r = ApiExamples.TubeFromDxfFile(Path.Combine(RepoPaths.SampleProfiles, "winch-drum-tube.dxf"));
         double D = 0.2191, d = D - 2 * 0.008;
         Tol.Rel(Math.PI * (Math.Pow(D, 4) - Math.Pow(d, 4)) / 32, r.TorsionConstant, 2e-4);
+    }
+
+    [Fact]
+    public void Largest_part_of_a_sheet_is_the_tube_of_its_section_view()
+    {
+        // Exact: J = pi (D^4 - d^4) / 32 for the sheet's 40/16 mm tube (Timoshenko and Goodier, ch. 10).
+        var r = ApiExamples.LargestPartOfSheet(SectionTwist.Tests.Import.SheetDrawingTests.Write(SectionTwist.Tests.Import.RegressionDrawings.Sheet()));
+        Tol.Rel(Math.PI * (Math.Pow(0.040, 4) - Math.Pow(0.016, 4)) / 32, r.TorsionConstant, 2e-4);
     }
 
     [Fact]
@@ -131,6 +140,19 @@ public partial class ApiDocsTests
     }
 
     [Fact]
+    public void Drivetrain_modes_in_code_match_the_two_rotor_formula()
+    {
+        var modes = ApiExamples.MotorAndDrumModes();
+        // omega^2 = k (I1 + I2) / (I1 I2), k = G J / L (Thomson, Theory of Vibration with Applications, two-rotor system);
+        // the shaft's own inertia (7850 * 1.9e-4 kg*m^2 over 0.6 m, about 0.001 kg*m^2) moves it by well under 1 %
+        double k = 79.3e9 * Math.PI * Math.Pow(0.040, 4) / 32 / 0.600;
+        double w = Math.Sqrt(k * (0.05 + 1.2) / (0.05 * 1.2));
+        Assert.True(modes.Modes[0].IsRigidBody);
+        Tol.Rel(w, modes.Modes[1].AngularFrequency, 0.01, "two-rotor formula");
+        Assert.True(modes.Modes[1].AngularFrequency < w, "the shaft's own inertia lowers the frequency");
+    }
+
+    [Fact]
     public void Shaft_in_code_twists_by_the_sum_of_T_L_over_G_J()
     {
         var res = ApiExamples.TwoStepShaft();
@@ -154,5 +176,30 @@ public partial class ApiDocsTests
         var (beta, _) = SectionTwist.Tests.References.Published.Rectangle(0.060, 0.010);
         Tol.Rel(beta * 0.060 * Math.Pow(0.010, 3), r.TorsionConstant, 2e-4);
         Assert.Equal("bar:60x10", r.Profile.Name);
+    }
+
+    [Fact]
+    public void Plastic_summary_of_the_round_bar_has_shape_factor_4_3()
+    {
+        // d = 40 mm, tau_y = 100 MPa: T_y = pi r^3 tau_y / 2 = 1257 N*m (Timoshenko and Goodier sec. 101),
+        // T_p = 2 pi r^3 tau_y / 3 = 1676 N*m (Nadai sand heap), shape factor 4/3; at 10 x the first-yield twist
+        // T / T_y = 4/3 (1 - 1/4000) = 1.333 (Beer, Johnston and DeWolf sec. 3.9, from memory).
+        string s = ApiExamples.PlasticSummary(Round.Value, 100e6);
+        Assert.Contains("T_y=1257 N*m", s, StringComparison.Ordinal);
+        Assert.Contains("T_p=1676 N*m", s, StringComparison.Ordinal);
+        Assert.Contains("shape factor 1.333", s, StringComparison.Ordinal);
+        Assert.Contains("T=1.333 T_y", s, StringComparison.Ordinal);
+    }
+
+    // Cantilever restrained at the wall: phi(L) = T/(GJ) (L - a tanh(L/a)) (Vlasov, Thin-Walled Elastic Beams, 2nd ed.,
+    // ch. 5; AISC Design Guide 9, from memory), with J and Iw of the same analysed channel.
+    [Fact]
+    public void Warping_member_example_matches_the_cantilever_closed_form()
+    {
+        var r = ApiExamples.EndPlatedChannel();
+        var steel = ShaftMaterials.All["steel-s355"];
+        var sec = SectionAnalyzer.Analyze(ProfileTemplates.Create("channel:h=100,b=50,tw=6,tf=8.5,r=8.5"), new AnalysisOptions { Warping = true });
+        double gj = steel.ShearModulus * sec.TorsionConstant, a = Math.Sqrt(steel.YoungsModulus!.Value * sec.Warping!.WarpingConstant / gj);
+        Tol.Rel(150 / gj * (1.2 - a * Math.Tanh(1.2 / a)), r.Stations[1].Rotation, 1e-9, "Vlasov ch. 5");
     }
 }

@@ -1,11 +1,15 @@
 using System.Globalization;
+using SectionTwist.Dynamics;
 using SectionTwist.Geometry;
 using SectionTwist.Import;
 using SectionTwist.Import.Dxf;
+using SectionTwist.Plastic;
 using SectionTwist.Profiles;
 using SectionTwist.Shaft;
 using SectionTwist.Torsion;
 using SectionTwist.Units;
+using SectionTwist.Warping;
+using SectionTwist.WarpingTorsion;
 
 namespace SectionTwist.Tests.Api;
 
@@ -26,6 +30,15 @@ public static class ApiExamples
     }
 
     // --- docs/api.md: "A profile from a DXF file or stream" ---
+    public static SectionResult LargestPartOfSheet(string path)
+    {
+        // List the parts of the sheet, then analyse the largest one, chosen by a point inside it.
+        DxfImportReport sheet = DxfProfiles.Inspect(path, new DxfReadOptions());
+        DxfPartInfo largest = sheet.Parts[0];
+        var options = new DxfReadOptions { At = largest.Inside };
+        return SectionAnalyzer.Analyze(DxfProfiles.Read(path, options).Profile);
+    }
+
     public static SectionResult TubeFromDxfFile(string path)
     {
         DxfImport import = DxfProfiles.Read(path, new DxfReadOptions { Layer = "DRUM" });
@@ -166,5 +179,56 @@ public static class ApiExamples
         ProfileSources.Register(new BarSource());          // or: ProfileSources.LoadPlugins("plugins")
         Profile bar = ProfileSources.Load("bar:60x10");
         return SectionAnalyzer.Analyze(bar);
+    }
+
+    // --- docs/api.md: "Yield and the fully plastic torque" ---
+    public static string PlasticSummary(SectionResult elastic, double shearYieldPascal)
+    {
+        // Elastic-perfectly-plastic: first yield, fully plastic torque (sand heap), torque-twist curve.
+        PlasticResult plastic = PlasticAnalyzer.Analyze(elastic, shearYieldPascal);
+        TorqueTwistPoint last = plastic.Curve[^1];
+        return string.Create(CultureInfo.InvariantCulture,
+            $"T_y={plastic.FirstYieldTorque:F0} N*m, T_p={plastic.FullyPlasticTorque:F0} N*m (+-{plastic.FullyPlasticTorqueError:P2}), " +
+            $"shape factor {plastic.ShapeFactor:F3}; at {last.TwistRatio} x first-yield twist T={last.TorqueRatio:F3} T_y, " +
+            $"{last.PlasticFraction:P0} yielded");
+    }
+
+    // --- docs/api.md: "Torsional modes of a drivetrain in code" ---
+    public static ModalResult MotorAndDrumModes()
+    {
+        Material steel = ShaftMaterials.All["steel-1045-cd"];                // density 7850 kg/m^3
+        var shaft = new ShaftModel
+        {
+            Stations = [new Station("motor", 0.0), new Station("drum", 0.600)],
+            Segments = [new ShaftSegment("motor", "drum", SectionStiffness.Round(0.040), steel)],
+        };
+        var train = new DrivetrainModel
+        {
+            Shafts = [new ShaftBranch("drive shaft", shaft)],
+            Inertias = [new PointInertia("motor", 0.05), new PointInertia("drum", 1.2)],   // kg*m^2
+        };
+        ModalResult modes = ModalAnalysis.Solve(train, new ModalOptions { ModeCount = 2 });
+        // modes.Modes[0] is the rigid-body mode of the free train; modes.Modes[1].Frequency in Hz.
+        return modes;
+    }
+
+    // --- docs/api.md: "Open sections: warping and restrained-warping members" ---
+    public static WarpingMemberResult EndPlatedChannel()
+    {
+        // The warping function is solved on request; it gives the shear centre, Iw and the largest |omega|.
+        var options = new AnalysisOptions { Warping = true };
+        SectionResult channel = SectionAnalyzer.Analyze(ProfileTemplates.Create("channel:h=100,b=50,tw=6,tf=8.5,r=8.5"), options);
+        WarpingResult w = channel.Warping!;          // w.ShearCentre (m), w.WarpingConstant (m^6), w.Classification
+        var member = new WarpingMember
+        {
+            Stations = [new Station("wall", 0.0), new Station("tip", 1.2)],
+            Segments = [new WarpingSegment("wall", "tip", WarpingSection.From(channel), ShaftMaterials.All["steel-s355"])],
+            Loads = [new PointTorque("tip", 150)],   // N*m, applied through the shear centre
+            FixedStations = ["wall"],
+            Warping = new Dictionary<string, WarpingEnd> { ["wall"] = WarpingEnd.Restrained },
+        };
+        WarpingMemberResult result = WarpingMemberSolver.Solve(member);
+        // result.Stations[1].Rotation in rad; result.Segments[0].MaxWarpingNormalStress in Pa.
+        return result;
     }
 }

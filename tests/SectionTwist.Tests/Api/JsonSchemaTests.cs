@@ -48,6 +48,22 @@ public sealed class JsonSchemaTests : IDisposable
     }
 
     [Fact]
+    public void Section_json_with_plastic_results_matches_its_schema()
+    {
+        var n = ValidOutput("section", "section", "circle:d=40", "--accuracy", "1e-3", "--plastic", "140MPa", "--json");
+        // circle: shape factor 4/3 (sand-heap analogy, Nadai; see PlasticClosedFormTests)
+        Tol.Rel(4.0 / 3, (double)n["plastic"]!["shapeFactor"]!, 1e-3, "circle shape factor 4/3");
+    }
+
+    [Fact]
+    public void Section_json_with_warping_matches_its_schema()
+    {
+        var n = ValidOutput("section", "section", "channel:h=100,b=50,tw=6,tf=8.5,r=8.5", "--accuracy", "1e-3", "--warping", "--json");
+        Assert.True((double)n["shearCentre"]!["x"]! < 0, "a channel's shear centre lies behind the web");
+        Assert.Equal("warping-sensitive", (string?)n["warping"]!["classification"]);
+    }
+
+    [Fact]
     public void Sweep_json_matches_its_schema()
     {
         var n = ValidOutput("sweep", "sweep", "rect:b=40,h=10", "--vary", "h=10:20:2", "--accuracy", "1e-3", "--json");
@@ -113,6 +129,23 @@ public sealed class JsonSchemaTests : IDisposable
     {
         var n = ValidOutput("shaft", "shaft", Path.Combine(RepoPaths.SampleProfiles, "winch-shaft.yaml"), "--json");
         Assert.Equal("motor", (string?)n["referenceStation"]);
+    }
+
+    [Fact]
+    public void Shaft_json_with_restrained_warping_matches_its_schema()
+    {
+        var n = ValidOutput("shaft", "shaft", Path.Combine(RepoPaths.SampleProfiles, "conveyor-cross-beam.yaml"), "--json");
+        Assert.Equal(2, n["warping"]!["segments"]!.AsArray().Count);
+    }
+
+    [Fact]
+    public void Shaft_json_with_bending_of_the_conveyor_sample_matches_its_schema()
+    {
+        var n = ValidOutput("shaft", "shaft", Path.Combine(RepoPaths.SampleProfiles, "conveyor-head-shaft.yaml"), "--json");
+        var b = n["bending"]!;
+        Assert.Equal(2, b["bearings"]!.AsArray().Count);
+        Assert.Single(b["fatigue"]!.AsArray());
+        Assert.Single(b["connections"]!.AsArray());
     }
 
     [Fact]

@@ -40,7 +40,7 @@ public class DemoCommandTests(DemoRun demo) : IClassFixture<DemoRun>
     public void Demo_exits_0_and_writes_the_report_and_pictures()
     {
         Assert.True(demo.Code == 0, demo.Err);
-        string[] expected = ["report.html", "shaft.png", "shaft.svg", "section-input-keyed.png", "section-spline-output.png"];
+        string[] expected = ["report.html", "shaft.png", "shaft.svg", "section-input-keyed.png", "section-spline-output.png", "modes.html"];
         Assert.Equal(expected.Order(), Directory.GetFiles(demo.Folder).Select(Path.GetFileName).Order());
         using (var shaft = SKBitmap.Decode(Path.Combine(demo.Folder, "shaft.png"))) Assert.Equal((1000, 900), (shaft.Width, shaft.Height));
         foreach (string s in expected.Where(f => f.StartsWith("section-", StringComparison.Ordinal)))

@@ -6,13 +6,16 @@ namespace SectionTwist.Import.Dxf;
 /// Turns model-space entities into outline curves in world coordinates: LINE, ARC, CIRCLE, LWPOLYLINE, 2D/3D POLYLINE,
 /// SPLINE, ELLIPSE, and INSERT (expanded recursively with base point, scale, rotation, arrays and OCS, cycles detected).
 /// Entities on layer 0 inside a block take the layer of the INSERT. Paper-space entities, text, dimensions, hatches and
-/// similar annotation are counted and ignored; unknown types are listed once as skipped.
+/// similar annotation are counted and ignored; unknown types are listed once as skipped. With <paramref name="hatches"/>
+/// the boundary paths of HATCH entities become the outline curves instead (section views hatch the cut material).
+/// Curves on layers outside the choice go to <see cref="OtherCurves"/> (a broken entity there is ignored, not fatal).
 /// </summary>
-internal sealed partial class DxfGeometryBuilder(DxfDocument doc, string? layerFilter)
+internal sealed partial class DxfGeometryBuilder(DxfDocument doc, Func<string, bool>? layerChosen, bool hatches = false, CancellationToken ct = default)
 {
     /// <summary>Most outline curves one drawing may produce (guards against huge arrays and runaway nesting).</summary>
-    public const int MaxCurves = 500_000;
-    private const int MaxDepth = 32;
+    public const int MaxCurves = Limits.InputLimits.MaxDxfPieces;
+    private const int MaxDepth = Limits.InputLimits.MaxDxfBlockDepth;
+    private int _emitted;
 
     private static readonly HashSet<string> Annotation = new(StringComparer.Ordinal)
     {
@@ -26,6 +29,12 @@ internal sealed partial class DxfGeometryBuilder(DxfDocument doc, string? layerF
     private readonly HashSet<string> _warnedUnknown = new(StringComparer.Ordinal);
 
     public List<SourcedCurve> Curves { get; } = [];
+    /// <summary>Outline curves on layers outside the choice (for the check that a layer choice leaves no loop behind).</summary>
+    public List<SourcedCurve> OtherCurves { get; } = [];
+    /// <summary>Insertion points of TEXT and MTEXT (world coordinates) with the entity, for the sheet check.</summary>
+    public List<(Point2 Where, string Source)> TextPoints { get; } = [];
+    /// <summary>HATCH entities seen in model space (expanded blocks included).</summary>
+    public int HatchCount { get; private set; }
     /// <summary>Model-space entity counts by type (top level, before block expansion).</summary>
     public SortedDictionary<string, int> EntityCounts { get; } = new(StringComparer.Ordinal);
     /// <summary>Model-space entity counts by layer (top level).</summary>
@@ -51,9 +60,18 @@ internal sealed partial class DxfGeometryBuilder(DxfDocument doc, string? layerF
 
     private void Emit(DxfEntity e, Affine2 m, string? insertLayer, string where)
     {
+        if ((++_emitted & 4095) == 0) ct.ThrowIfCancellationRequested();
         if (e.PaperSpace) return;
         string layer = insertLayer is not null && e.Layer == "0" ? insertLayer : e.Layer;
         if (e.Type == "INSERT") { ExpandInsert(e, m, layer, where); return; }
+        if (e.Type == "HATCH") HatchCount++;
+        if (e.Type is "TEXT" or "MTEXT") TextPoints.Add((m.Apply(e.Pt(10)), e.Describe() + where));
+        if (hatches)
+        {
+            if (e.Type == "HATCH") Guarded(e, m, layer, where, Hatch);
+            else if (!Annotation.Contains(e.Type)) Skipped.Add(e.Type);
+            return;
+        }
         if (Annotation.Contains(e.Type)) { Skipped.Add(e.Type); return; }
         bool known = e.Type is "LINE" or "ARC" or "CIRCLE" or "LWPOLYLINE" or "POLYLINE" or "SPLINE" or "ELLIPSE";
         if (!known)
@@ -62,13 +80,33 @@ internal sealed partial class DxfGeometryBuilder(DxfDocument doc, string? layerF
             if (_warnedUnknown.Add(e.Type)) Warnings.Add($"skipped entity type {e.Type} (first at line {e.Line}): not used for outlines");
             return;
         }
-        if (layerFilter is not null && !layer.Equals(layerFilter, StringComparison.OrdinalIgnoreCase)) return;
+        Guarded(e, m, layer, where, EmitCurve);
+    }
+
+    /// <summary>
+    /// Runs one entity's reader: curves on a chosen layer go to <see cref="Curves"/> and a geometry error there is fatal
+    /// (named with the entity); curves on other layers go to <see cref="OtherCurves"/> and a geometry error there only
+    /// drops that entity.
+    /// </summary>
+    private void Guarded(DxfEntity e, Affine2 m, string layer, string where, Action<DxfEntity, Affine2, string, string> read)
+    {
         string src = e.Describe() + where;
-        try { EmitCurve(e, m, src, layer); }
-        catch (SectionTwistException x) when (x.Code is "bad-arc" or "bad-ellipse" or "dxf-degenerate" or "bad-spline")
+        bool chosen = layerChosen?.Invoke(layer) ?? true;
+        if (chosen)
         {
-            throw new SectionTwistException(x.Code, $"{File}: {src}: {x.Message}");
+            try { read(e, m, src, layer); }
+            catch (SectionTwistException x) when (x.Code is "bad-arc" or "bad-ellipse" or "dxf-degenerate" or "bad-spline")
+            {
+                throw new SectionTwistException(x.Code, $"{File}: {src}: {x.Message}");
+            }
+            return;
         }
+        int before = Curves.Count, warnings = Warnings.Count;
+        try { read(e, m, src, layer); }
+        catch (SectionTwistException x) when (x.Code is "bad-arc" or "bad-ellipse" or "dxf-degenerate" or "bad-spline" or "bad-dxf-number" or "bad-hatch") { }
+        for (int i = before; i < Curves.Count; i++) OtherCurves.Add(Curves[i]);
+        Curves.RemoveRange(before, Curves.Count - before);
+        Warnings.RemoveRange(warnings, Warnings.Count - warnings);
     }
 
     private void EmitCurve(DxfEntity e, Affine2 m, string src, string layer)
@@ -86,7 +124,7 @@ internal sealed partial class DxfGeometryBuilder(DxfDocument doc, string? layerF
 
     private void Add(Segment s, string src, string layer)
     {
-        if (Curves.Count >= MaxCurves)
+        if (Curves.Count + OtherCurves.Count >= MaxCurves)
             throw new SectionTwistException("dxf-too-large", $"{File}: the drawing expands to more than {MaxCurves} outline pieces (huge block arrays?); export only the section outline");
         var b = s.Bounds;
         if (!double.IsFinite(b.MinX + b.MaxX + b.MinY + b.MaxY) || Math.Max(Math.Abs(b.MinX), Math.Max(Math.Abs(b.MaxX), Math.Max(Math.Abs(b.MinY), Math.Abs(b.MaxY)))) > 1e30)

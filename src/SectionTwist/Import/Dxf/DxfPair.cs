@@ -18,8 +18,22 @@ internal readonly record struct DxfPair(int Code, string Value, int Line, double
             throw new SectionTwistException("bad-dxf-number",
                 $"{file}:{Line}: group code {Code} holds {Trunc(Value)}, outside the range of drawing coordinates (|x| <= 1e20); the file is damaged");
         }
+        if (DecimalComma(Value))
+            throw new SectionTwistException("bad-dxf-number",
+                $"{file}:{Line}: group code {Code} holds '{Trunc(Value)}', a number with a decimal comma; DXF needs a decimal point: " +
+                "export the drawing again with '.' as the decimal separator (the number format of the DXF export, or a system region that writes 1.5)");
         throw new SectionTwistException("bad-dxf-number",
             $"{file}:{Line}: group code {Code} needs a number but holds '{Trunc(Value)}'; the file is damaged or not DXF");
+    }
+
+    /// <summary>True for text like "12,5" or "-0,75": digits, one comma, digits.</summary>
+    private static bool DecimalComma(string v)
+    {
+        v = v.Trim();
+        int c = v.IndexOf(',', StringComparison.Ordinal);
+        if (c <= 0 || c != v.LastIndexOf(',') || c == v.Length - 1) return false;
+        string head = v[..c].TrimStart('-', '+');
+        return head.Length > 0 && head.All(char.IsAsciiDigit) && v[(c + 1)..].All(char.IsAsciiDigit);
     }
 
     /// <summary>The value as an integer (a real number is truncated toward zero); throws a located error otherwise.</summary>

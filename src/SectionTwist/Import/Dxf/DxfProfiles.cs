@@ -11,23 +11,32 @@ public static class DxfProfiles
     /// <summary>Reads a profile from a DXF file. Throws <see cref="SectionTwistException"/> with a one-line message on bad input.</summary>
     /// <param name="path">The drawing file.</param>
     /// <param name="options">Unit override, layer, part, tolerances.</param>
-    public static DxfImport Read(string path, DxfReadOptions? options = null)
+    /// <param name="cancellationToken">Stops reading a large drawing.</param>
+    public static DxfImport Read(string path, DxfReadOptions? options = null, CancellationToken cancellationToken = default)
     {
         ArgumentNullException.ThrowIfNull(path);
-        return Read(ReadBytes(path), Path.GetFileName(path), options);
+        return Read(ReadBytes(path, cancellationToken), Path.GetFileName(path), options, cancellationToken);
     }
 
     /// <summary>Reads a profile from a stream holding a DXF file; <paramref name="name"/> is used in messages.</summary>
-    public static DxfImport Read(Stream stream, string name, DxfReadOptions? options = null)
+    /// <param name="stream">The drawing.</param>
+    /// <param name="name">Name used in messages.</param>
+    /// <param name="options">Unit override, layer, part, tolerances.</param>
+    /// <param name="cancellationToken">Stops reading a large drawing.</param>
+    public static DxfImport Read(Stream stream, string name, DxfReadOptions? options = null, CancellationToken cancellationToken = default)
     {
         ArgumentNullException.ThrowIfNull(stream);
-        return Read(ReadBytes(stream, name), name, options);
+        return Read(ReadBytes(stream, name), name, options, cancellationToken);
     }
 
     /// <summary>Reads a profile from the bytes of a DXF file; <paramref name="name"/> is used in messages.</summary>
-    public static DxfImport Read(ReadOnlySpan<byte> data, string name, DxfReadOptions? options = null)
+    /// <param name="data">The bytes of the drawing.</param>
+    /// <param name="name">Name used in messages.</param>
+    /// <param name="options">Unit override, layer, part, tolerances.</param>
+    /// <param name="cancellationToken">Stops reading a large drawing.</param>
+    public static DxfImport Read(ReadOnlySpan<byte> data, string name, DxfReadOptions? options = null, CancellationToken cancellationToken = default)
     {
-        var (report, profile) = Guard(name, data, options ?? new DxfReadOptions(), false);
+        var (report, profile) = Guard(name, data, options ?? new DxfReadOptions(), false, cancellationToken);
         return new DxfImport(profile!, report);
     }
 
@@ -35,10 +44,13 @@ public static class DxfProfiles
     /// Reports what a drawing holds (layers, entity counts, units, loops, parts, gaps closed, skipped types) without
     /// requiring a unit; a problem that stops loop building is returned in <see cref="DxfImportReport.Problem"/>.
     /// </summary>
-    public static DxfImportReport Inspect(string path, DxfReadOptions? options = null)
+    /// <param name="path">The drawing file.</param>
+    /// <param name="options">Unit override, layer, part, tolerances.</param>
+    /// <param name="cancellationToken">Stops reading a large drawing.</param>
+    public static DxfImportReport Inspect(string path, DxfReadOptions? options = null, CancellationToken cancellationToken = default)
     {
         ArgumentNullException.ThrowIfNull(path);
-        return Guard(Path.GetFileName(path), ReadBytes(path), options ?? new DxfReadOptions(), true).Report;
+        return Guard(Path.GetFileName(path), ReadBytes(path, cancellationToken), options ?? new DxfReadOptions(), true, cancellationToken).Report;
     }
 
     /// <summary>Writes a profile (and optional extra polylines) to a DXF file through a temporary file.</summary>
@@ -57,13 +69,13 @@ public static class DxfProfiles
         DxfWriter.Write(profile, stream, options ?? new DxfWriteOptions());
     }
 
-    private static (DxfImportReport Report, Profile? Profile) Guard(string name, ReadOnlySpan<byte> data, DxfReadOptions o, bool inspect)
+    private static (DxfImportReport Report, Profile? Profile) Guard(string name, ReadOnlySpan<byte> data, DxfReadOptions o, bool inspect, CancellationToken ct)
     {
         try
         {
-            return DxfReader.Read(data, name, o, inspect);
+            return DxfReader.Read(data, name, o, inspect, ct);
         }
-        catch (Exception e) when (e is not SectionTwistException and not OperationCanceledException and not OutOfMemoryException)
+        catch (Exception e) when (e is not SectionTwistException and not OperationCanceledException and not OutOfMemoryException and not InsufficientExecutionStackException)
         {
             // A safety net: damaged files must give a one-line message, never a stack trace. Tests assert it is never hit.
             throw new SectionTwistException("dxf-internal",
@@ -71,14 +83,8 @@ public static class DxfProfiles
         }
     }
 
-    private static byte[] ReadBytes(string path)
-    {
-        var fi = new FileInfo(path);
-        if (!fi.Exists) throw new SectionTwistException("file-not-found", $"{path}: no such file");
-        if (fi.Length > DxfTokenizer.MaxBytes)
-            throw new SectionTwistException("dxf-too-large", $"{path}: {fi.Length / (1 << 20)} MB is larger than the {DxfTokenizer.MaxBytes >> 20} MB limit; export only the section outline");
-        return File.ReadAllBytes(path);
-    }
+    private static byte[] ReadBytes(string path, CancellationToken ct) =>
+        Limits.InputFile.ReadAllBytes(path, DxfTokenizer.MaxBytes, "DXF drawing", ct);
 
     private static byte[] ReadBytes(Stream s, string name)
     {

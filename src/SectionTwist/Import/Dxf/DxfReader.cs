@@ -4,77 +4,57 @@ using SectionTwist.Units;
 
 namespace SectionTwist.Import.Dxf;
 
-/// <summary>The read pipeline: bytes -> pairs -> document -> curves -> loops -> parts -> profile in metres.</summary>
+/// <summary>
+/// The read pipeline: bytes -> pairs -> document -> curves -> (window, far strays, loops, regions, choice) -> profile in
+/// metres. Every number of the chosen layers is read before the unit is asked for, so a damaged file is named first.
+/// </summary>
 internal static class DxfReader
 {
-    public static (DxfImportReport Report, Profile? Profile) Read(ReadOnlySpan<byte> data, string file, DxfReadOptions o, bool inspect)
+    public static (DxfImportReport Report, Profile? Profile) Read(ReadOnlySpan<byte> data, string file, DxfReadOptions o, bool inspect, CancellationToken ct = default)
     {
-        if (!(o.SnapTolerance >= 0 && o.SnapTolerance < 0.1))
-            throw new SectionTwistException("bad-option", $"snap tolerance {o.SnapTolerance} must lie in [0, 0.1) (a fraction of the part size, e.g. 1e-6)");
-        if (!(o.SplineTolerance > 0 && o.SplineTolerance < 0.1))
-            throw new SectionTwistException("bad-option", $"spline tolerance {o.SplineTolerance} must lie in (0, 0.1) (a fraction of the part size, e.g. 1e-5)");
-        if (o.Part is < 1) throw new SectionTwistException("bad-option", $"--part {o.Part}: parts are numbered from 1 (largest first)");
-
-        var pairs = DxfTokenizer.Tokenize(data, file, out string format, out bool bom);
+        var fix = new DxfRemedy(o.ShaftFileKeys);
+        CheckOptions(o, fix);
+        var pairs = DxfTokenizer.Tokenize(data, file, out string format, out bool bom, ct);
+        ct.ThrowIfCancellationRequested();
+        if (pairs.Count == 0)
+            throw new SectionTwistException("dxf-empty", $"{file}: the file is empty; export the drawing again as DXF");
         string? acadVer = FindHeader(pairs, "$ACADVER"), codePage = FindHeader(pairs, "$DWGCODEPAGE");
         var enc = DxfText.EncodingFor(acadVer, codePage, bom);
         for (int i = 0; i < pairs.Count; i++)
             if (DxfPair.IsStringCode(pairs[i].Code)) pairs[i] = pairs[i] with { Value = DxfText.Decode(pairs[i].Value, enc) };
         var doc = DxfParser.Parse(pairs, file, format);
+        DxfBudget.Check(doc, ct);
+        if (doc.Entities.Count == 0)
+            throw new SectionTwistException("dxf-no-entities",
+                $"{file}: the drawing holds no entities in its ENTITIES section; export the drawing with its geometry (model space)");
+
+        var known = doc.Layers.Concat(doc.Entities.Select(e => e.Layer)).Concat(doc.Blocks.Values.SelectMany(b => b.Entities).Select(e => e.Layer))
+            .Distinct(StringComparer.OrdinalIgnoreCase).ToList();
+        var filter = LayerFilter.Create(o.Layer, known);
+        var builder = new DxfGeometryBuilder(doc, filter is null ? null : filter.Matches, o.UseHatches, ct);
+        builder.Run();
+        var warnings = new List<string>(doc.Warnings);
+        warnings.AddRange(builder.Warnings);
+        var layers = doc.Layers.Concat(builder.LayerCounts.Keys).Distinct(StringComparer.OrdinalIgnoreCase).ToList();
 
         int? ins = doc.HeaderInt("$INSUNITS");
         LengthUnit? unit = o.Unit;
         string unitSource = "option";
-        var warnings = new List<string>(doc.Warnings);
         if (unit is null)
         {
             unit = ins is { } c ? DxfUnits.FromCode(c) : null;
             unitSource = unit is null ? "none" : "$INSUNITS";
             if (ins is { } bad && (bad < 0 || bad > DxfUnits.MaxCode)) warnings.Add($"unknown $INSUNITS code {bad}; treated as unitless");
         }
+
+        var sel = new DxfSelection(file, o, builder, filter, layers.Concat(known).Distinct(StringComparer.OrdinalIgnoreCase).ToList(), unit ?? LengthUnit.Millimetre, ct);
+        string? problem = null;
+        try { sel.Run(); }
+        catch (SectionTwistException e) when (inspect) { problem = e.Message; }
+        warnings.AddRange(sel.Warnings);
         if (unit is null && !inspect)
             throw new SectionTwistException("dxf-unitless",
-                $"{file}: the drawing has no length unit ($INSUNITS {(ins is null ? "is missing" : $"= {ins}")}); pass --unit mm (or in, cm, m, ft) to say what one drawing unit is");
-
-        var builder = new DxfGeometryBuilder(doc, o.Layer);
-        builder.Run();
-        warnings.AddRange(builder.Warnings);
-        var layers = doc.Layers.Concat(builder.LayerCounts.Keys).Distinct(StringComparer.OrdinalIgnoreCase).ToList();
-
-        var box = Box2.Empty;
-        foreach (var c in builder.Curves) box = box.Union(c.Bounds);
-        double diag = box.Diagonal;
-        string? problem = null;
-        var parts = new List<DxfPartInfo>();
-        List<Region> regions = [];
-        OutlineAssembler? asm = null;
-        try
-        {
-            if (builder.Curves.Count == 0 || !(diag > 0))
-                throw new SectionTwistException("dxf-no-outline",
-                    $"{file}: no outline entities{(o.Layer is null ? "" : $" on layer '{o.Layer}'")} in model space; layers: {string.Join(", ", layers.DefaultIfEmpty("(none)"))}");
-            asm = new OutlineAssembler(file, o.SnapTolerance * diag, o.SplineTolerance * diag, diag);
-            asm.Run(builder.Curves);
-            if (asm.Loops.Count == 0) throw new SectionTwistException("dxf-no-outline", $"{file}: no closed outline found");
-            // nest in drawing units so validation messages quote drawing coordinates
-            var drawn = Profile.FromLoops(asm.Loops, unit ?? LengthUnit.Millimetre, file);
-            regions = drawn.Regions.OrderByDescending(r => r.Area).ThenBy(r => r.Outer.Bounds.MinX).ThenBy(r => r.Outer.Bounds.MinY).ToList();
-            for (int k = 0; k < regions.Count; k++)
-            {
-                var loopSet = regions[k].Loops.ToList();
-                var lay = new SortedSet<string>(StringComparer.OrdinalIgnoreCase);
-                for (int li = 0; li < asm.Loops.Count; li++)
-                    if (loopSet.Any(l => SameLoop(l, asm.Loops[li]))) foreach (var s in asm.LoopLayers[li]) lay.Add(s);
-                parts.Add(new DxfPartInfo(k + 1, regions[k].Area, regions[k].Holes.Count, regions[k].Outer.Bounds, lay.ToArray()));
-            }
-            if (o.Part is { } pn && pn > regions.Count)
-                throw new SectionTwistException("dxf-no-part",
-                    $"{file}: --part {pn} does not exist: the drawing holds {regions.Count} part(s) with areas {string.Join(", ", parts.Select(p => p.Area.ToString("G4", CultureInfo.InvariantCulture)))} (largest first)");
-        }
-        catch (SectionTwistException e) when (inspect)
-        {
-            problem = e.Message;
-        }
+                $"{file}: the drawing has no length unit ($INSUNITS {(ins is null ? "is missing" : $"= {ins}")}); give it with {fix.Unit} to say what one drawing unit is");
 
         var report = new DxfImportReport
         {
@@ -90,24 +70,45 @@ internal static class DxfReader
             LayerEntityCounts = builder.LayerCounts,
             SkippedTypes = builder.Skipped.ToArray(),
             PaperSpaceSkipped = builder.PaperSpaceSkipped,
-            Loops = asm?.Loops.Count ?? 0,
-            Parts = parts,
-            SelectedPart = o.Part,
-            LargestGapClosed = asm?.LargestGap ?? 0,
-            SnapTolerance = o.SnapTolerance * diag,
-            DuplicatesDropped = asm?.DuplicatesDropped ?? 0,
+            Loops = sel.Loops,
+            Parts = sel.Parts,
+            SelectedPart = sel.SelectedPart,
+            Selection = sel.Selection,
+            Extent = sel.Extent,
+            LargestGapClosed = sel.LargestGap,
+            SnapTolerance = sel.SnapTolerance,
+            DuplicatesDropped = sel.DuplicatesDropped,
+            LeftOut = sel.LeftOut,
+            Junctions = sel.Junctions,
+            Frames = sel.Frames,
+            Facets = sel.Facets,
             Warnings = warnings,
             Problem = problem,
         };
-        if (inspect || unit is null) return (report, null);
-        var chosen = o.Part is { } n ? [regions[n - 1]] : regions;
-        string name = file + (o.Layer is null ? "" : $" layer {o.Layer}") + (o.Part is null ? "" : $" part {o.Part}");
-        var scale = Similarity2.Scaling(unit.Metres);
-        return (report, new Profile(chosen.Select(r => r.Transformed(scale)), unit, name));
+        if (inspect || unit is null || sel.Chosen is null) return (report, null);
+        string name = file + (o.Layer is null ? "" : $" layer {o.Layer}") + (sel.Selection is null or "all parts" ? "" : $" {sel.Selection}");
+        // validate in drawing units so that messages quote drawing coordinates, then scale to metres
+        var drawn = new Profile(sel.Chosen, unit, name) { CurveTolerance = sel.CurveTolerance };
+        return (report, drawn.Transformed(Similarity2.Scaling(unit.Metres)));
     }
 
-    private static bool SameLoop(Loop a, Loop b) =>
-        a.Segments.Count == b.Segments.Count && a.Bounds == b.Bounds;
+    private static void CheckOptions(DxfReadOptions o, DxfRemedy fix)
+    {
+        string snap = fix.ShaftFileKeys ? "snap" : "--snap", fit = fix.ShaftFileKeys ? "fitArcs" : "--fit-arcs";
+        if (!(o.SnapTolerance >= 0 && o.SnapTolerance < 0.1))
+            throw new SectionTwistException("bad-option", $"{snap} {o.SnapTolerance.ToString(CultureInfo.InvariantCulture)} must lie in [0, 0.1) (a fraction of the drawing's size, e.g. 1e-6)");
+        if (!(o.SplineTolerance > 0 && o.SplineTolerance < 0.1))
+            throw new SectionTwistException("bad-option", $"spline tolerance {o.SplineTolerance.ToString(CultureInfo.InvariantCulture)} must lie in (0, 0.1) (a fraction of the curve's size, e.g. 1e-7)");
+        if (o.FitArcs is { } f && !(f > 0 && f <= 0.01))
+            throw new SectionTwistException("bad-option", $"{fit} {f.ToString(CultureInfo.InvariantCulture)} must lie in (0, 0.01] (a fraction of the part size, e.g. 1e-4)");
+        if (o.Part is < 1) throw new SectionTwistException("bad-option", $"{(fix.ShaftFileKeys ? "part" : "--part")} {o.Part}: parts are numbered from 1 (largest first)");
+        if (o.Part is not null && o.At is not null)
+            throw new SectionTwistException("bad-option", fix.ShaftFileKeys ? "give either 'part' or 'at', not both" : "give either --part or --at, not both");
+        if (o.At is { } p && !(double.IsFinite(p.X) && double.IsFinite(p.Y)))
+            throw new SectionTwistException("bad-option", "the point must have finite coordinates");
+        if (o.Window is { } w && !(double.IsFinite(w.MinX + w.MinY + w.MaxX + w.MaxY) && w.MaxX > w.MinX && w.MaxY > w.MinY))
+            throw new SectionTwistException("bad-option", "the window needs x1 < x2 and y1 < y2 (finite numbers, drawing units)");
+    }
 
     private static string? FindHeader(List<DxfPair> pairs, string name)
     {

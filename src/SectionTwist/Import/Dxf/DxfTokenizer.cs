@@ -12,33 +12,34 @@ namespace SectionTwist.Import.Dxf;
 internal static class DxfTokenizer
 {
     /// <summary>Largest file read (bytes).</summary>
-    public const long MaxBytes = 512L << 20;
+    public const long MaxBytes = Limits.InputLimits.MaxDxfBytes;
 
     private static readonly byte[] Sentinel = Encoding.ASCII.GetBytes("AutoCAD Binary DXF\r\n\x1a\0");
 
     /// <summary>Reads all pairs; <paramref name="format"/> receives "ASCII" or "binary". Strings are Latin-1 here.</summary>
-    public static List<DxfPair> Tokenize(ReadOnlySpan<byte> data, string file, out string format, out bool utf8Bom)
+    public static List<DxfPair> Tokenize(ReadOnlySpan<byte> data, string file, out string format, out bool utf8Bom, CancellationToken ct = default)
     {
         utf8Bom = false;
         if (data.Length >= Sentinel.Length && data[..Sentinel.Length].SequenceEqual(Sentinel))
         {
             format = "binary";
-            return TokenizeBinary(data, file);
+            return TokenizeBinary(data, file, ct);
         }
         format = "ASCII";
         if (data.Length >= 3 && data[0] == 0xEF && data[1] == 0xBB && data[2] == 0xBF) { utf8Bom = true; data = data[3..]; }
         if (data.IndexOf((byte)0) >= 0 && data.IndexOf((byte)0) < 4096)
             throw new SectionTwistException("not-dxf",
                 $"{file}: holds binary bytes but not the binary DXF sentinel; it is not a DXF file (a DWG drawing must be saved as DXF first)");
-        return TokenizeAscii(data, file);
+        return TokenizeAscii(data, file, ct);
     }
 
-    private static List<DxfPair> TokenizeAscii(ReadOnlySpan<byte> data, string file)
+    private static List<DxfPair> TokenizeAscii(ReadOnlySpan<byte> data, string file, CancellationToken ct)
     {
         var pairs = new List<DxfPair>();
         int pos = 0, line = 0;
         while (true)
         {
+            if ((pairs.Count & 65535) == 65535) ct.ThrowIfCancellationRequested();
             int codeLine = line + 1;
             var codeText = NextLine(data, ref pos, ref line);
             if (codeText is null) break;
@@ -72,7 +73,7 @@ internal static class DxfTokenizer
         return s;
     }
 
-    private static List<DxfPair> TokenizeBinary(ReadOnlySpan<byte> data, string file)
+    private static List<DxfPair> TokenizeBinary(ReadOnlySpan<byte> data, string file, CancellationToken ct)
     {
         var pairs = new List<DxfPair>();
         int pos = Sentinel.Length;
@@ -80,6 +81,7 @@ internal static class DxfTokenizer
         bool twoByte = data.Length > pos + 1 && data[pos + 1] == 0;
         while (pos < data.Length)
         {
+            if ((pairs.Count & 65535) == 65535) ct.ThrowIfCancellationRequested();
             int at = pos;
             int code;
             if (twoByte)

@@ -1,4 +1,3 @@
-using System.Globalization;
 using SectionTwist.Geometry;
 
 namespace SectionTwist.Import.Dxf;
@@ -33,6 +32,7 @@ internal sealed partial class OutlineAssembler
             var order = Enumerable.Range(0, alive.Count).OrderBy(i => boxes[i].MinX).ToArray();
             for (int oi = 0; oi < order.Length; oi++)
             {
+                if ((oi & 255) == 0) ct.ThrowIfCancellationRequested();
                 int i = order[oi];
                 if (alive[i].Dead) continue;
                 for (int oj = oi + 1; oj < order.Length && boxes[order[oj]].MinX <= boxes[i].MaxX + tol; oj++)
@@ -79,65 +79,137 @@ internal sealed partial class OutlineAssembler
         var live = _pieces.Where(p => !p.Dead).ToList();
         var at = new Dictionary<int, List<OutlinePiece>>();
         foreach (var p in live)
-        {
             foreach (int node in (ReadOnlySpan<int>)[p.A, p.B])
             {
                 if (!at.TryGetValue(node, out var l)) at[node] = l = [];
                 l.Add(p);
             }
+        var pruned = Prune(live, at);
+        var kept = live.Where(p => !pruned.Contains(p)).ToList();
+        var keptNodes = new HashSet<int>(kept.SelectMany(p => new[] { p.A, p.B }));
+        GroupLoose(pruned, at, keptNodes);
+        foreach (var comp in Components(kept, []))
+        {
+            var odd = comp.SelectMany(p => new[] { p.A, p.B }).Distinct().Where(n => Degree(at[n], pruned) % 2 == 1).ToList();
+            if (odd.Count > 0) { Junctions.Add(MakeJunction(comp, odd, at, pruned)); continue; }
+            ChainComponent(comp, at, pruned);
         }
-        var odd = at.Where(kv => kv.Value.Count % 2 == 1).Select(kv => kv.Key).ToList();
-        if (odd.Count > 0) throw OpenError(odd, at);
+    }
+
+    private static int Degree(List<OutlinePiece> atNode, HashSet<OutlinePiece> pruned) => atNode.Count(p => !pruned.Contains(p));
+
+    /// <summary>Removes pieces with a free end, repeatedly (construction lines, stray ends, open outlines).</summary>
+    private static HashSet<OutlinePiece> Prune(List<OutlinePiece> live, Dictionary<int, List<OutlinePiece>> at)
+    {
+        var pruned = new HashSet<OutlinePiece>();
+        var deg = at.ToDictionary(kv => kv.Key, kv => kv.Value.Count);
+        var queue = new Queue<int>(deg.Where(kv => kv.Value == 1).Select(kv => kv.Key));
+        while (queue.Count > 0)
+        {
+            int node = queue.Dequeue();
+            var piece = at[node].FirstOrDefault(p => !pruned.Contains(p));
+            if (piece is null) continue;
+            pruned.Add(piece);
+            foreach (int n in (ReadOnlySpan<int>)[piece.A, piece.B])
+                if (--deg[n] == 1) queue.Enqueue(n);
+        }
+        return pruned;
+    }
+
+    /// <summary>Connected groups of pieces (sharing a node other than the <paramref name="barrier"/> nodes); union-find over node ids.</summary>
+    private List<List<OutlinePiece>> Components(List<OutlinePiece> pieces, HashSet<int> barrier)
+    {
+        int nn = _nodes.Count;
+        var parent = new int[nn + 2 * pieces.Count];
+        for (int i = 0; i < parent.Length; i++) parent[i] = i;
+        int Find(int x)
+        {
+            while (parent[x] != x) { parent[x] = parent[parent[x]]; x = parent[x]; }
+            return x;
+        }
+        // a barrier node joins nothing: each piece end there gets a private id
+        int Id(int i, int node, int side) => barrier.Contains(node) ? nn + 2 * i + side : node;
+        for (int i = 0; i < pieces.Count; i++)
+        {
+            int a = Find(Id(i, pieces[i].A, 0)), b = Find(Id(i, pieces[i].B, 1));
+            if (a != b) parent[a] = b;
+        }
+        var groups = new Dictionary<int, List<OutlinePiece>>();
+        var result = new List<List<OutlinePiece>>();
+        for (int i = 0; i < pieces.Count; i++)
+        {
+            int r = Find(Id(i, pieces[i].A, 0));
+            if (!groups.TryGetValue(r, out var g)) { groups[r] = g = []; result.Add(g); }
+            g.Add(pieces[i]);
+        }
+        return result;
+    }
+
+    private void GroupLoose(HashSet<OutlinePiece> pruned, Dictionary<int, List<OutlinePiece>> at, HashSet<int> keptNodes)
+    {
+        foreach (var comp in Components(pruned.ToList(), keptNodes))
+        {
+            if (comp.Count == 1)
+            {
+                // the common case on sheets: one loose piece (a centre line, a leader, a table line)
+                var q = comp[0];
+                var ends = new List<(Point2, string)>(2);
+                if (at[q.A].Count == 1) ends.Add((_nodes[q.A], q.Source));
+                if (at[q.B].Count == 1) ends.Add((_nodes[q.B], q.Source));
+                Loose.Add(new LooseGroup([q.Source], [q.Layer], [.. ends], q.Segment.Bounds, q.Segment is LineSegment, [q.Segment]));
+                continue;
+            }
+            var free = comp.SelectMany(p => new[] { p.A, p.B }).Distinct().Where(n => at[n].Count == 1).ToList();
+            var box = Box2.Empty;
+            foreach (var p in comp) box = box.Union(p.Segment.Bounds);
+            Loose.Add(new LooseGroup(comp.Select(p => p.Source).Distinct().ToArray(), comp.Select(p => p.Layer).Distinct(StringComparer.OrdinalIgnoreCase).ToArray(),
+                free.Select(n => (_nodes[n], at[n][0].Source)).ToArray(), box, IsStraight(comp), comp.Select(p => p.Segment).ToArray()));
+        }
+    }
+
+    private bool IsStraight(List<OutlinePiece> comp)
+    {
+        if (comp.Any(p => p.Segment is not LineSegment)) return false;
+        var longest = comp.MaxBy(p => p.Segment.Length)!.Segment;
+        double len = longest.Length;
+        if (len == 0) return false;
+        Point2 u = (1 / len) * (longest.End - longest.Start);
+        double tol = Math.Max(snapTol, 1e-9 * diag);
+        return comp.All(p => Math.Abs(Point2.Cross(u, p.Segment.Start - longest.Start)) <= tol && Math.Abs(Point2.Cross(u, p.Segment.End - longest.Start)) <= tol);
+    }
+
+    private Junction MakeJunction(List<OutlinePiece> comp, List<int> odd, Dictionary<int, List<OutlinePiece>> at, HashSet<OutlinePiece> pruned)
+    {
+        int node = odd.MaxBy(n => Degree(at[n], pruned));
+        var box = Box2.Empty;
+        foreach (var p in comp) box = box.Union(p.Segment.Bounds);
+        var here = at[node].Where(p => !pruned.Contains(p)).ToList();
+        return new Junction(_nodes[node], here.Count, here.Take(4).Select(p => p.Source).ToArray(), box, comp.Count,
+            comp.Select(p => p.Layer).Distinct(StringComparer.OrdinalIgnoreCase).ToArray());
+    }
+
+    private void ChainComponent(List<OutlinePiece> comp, Dictionary<int, List<OutlinePiece>> at, HashSet<OutlinePiece> pruned)
+    {
         var used = new HashSet<OutlinePiece>();
-        foreach (var first in live)
+        foreach (var first in comp)
         {
             if (!used.Add(first)) continue;
             var segs = new List<Segment> { first.Segment };
+            var sources = new List<string> { first.Source };
             var layers = new SortedSet<string>(StringComparer.OrdinalIgnoreCase) { first.Layer };
             int start = first.A, cur = first.B;
             while (cur != start)
             {
-                var next = at[cur].FirstOrDefault(q => !used.Contains(q));
-                if (next is null) throw OpenError([cur], at);
+                var next = at[cur].First(q => !used.Contains(q) && !pruned.Contains(q));
                 used.Add(next);
                 layers.Add(next.Layer);
+                sources.Add(next.Source);
                 if (next.A == cur) { segs.Add(next.Segment); cur = next.B; }
                 else { segs.Add(next.Segment.Reversed()); cur = next.A; }
             }
             Loops.Add(new Loop(segs));
             LoopLayers.Add(layers.ToArray());
+            LoopSources.Add(sources.ToArray());
         }
-    }
-
-    private SectionTwistException OpenError(List<int> odd, Dictionary<int, List<OutlinePiece>> at)
-    {
-        string F(double v) => v.ToString("G6", CultureInfo.InvariantCulture);
-        string P(Point2 p) => $"({F(p.X)}, {F(p.Y)})";
-        int branch = -1;
-        foreach (var kv in at) if (kv.Value.Count >= 3 && (branch < 0 || kv.Value.Count % 2 == 1)) branch = kv.Key;
-        if (branch >= 0)
-        {
-            var who = string.Join(", ", at[branch].Take(4).Select(p => p.Source));
-            return new SectionTwistException("dxf-branch",
-                $"{file}: {at[branch].Count} outline ends meet at {P(_nodes[branch])} ({who}); remove stray or construction lines there, or pick the outline layer with --layer");
-        }
-        // the closest pair of dangling ends is most likely the gap that should have been closed
-        var ends = odd.Take(2000).ToList();
-        double bestD = double.PositiveInfinity;
-        int ba = ends[0], bb = -1;
-        for (int i = 0; i < ends.Count; i++)
-            for (int j = i + 1; j < ends.Count; j++)
-            {
-                double d = Point2.Distance(_nodes[ends[i]], _nodes[ends[j]]);
-                if (d < bestD) { bestD = d; ba = ends[i]; bb = ends[j]; }
-            }
-        string ra = at[ba][0].Source;
-        if (bb < 0)
-            return new SectionTwistException("open-loop", $"{file}: open outline: {ra} ends at {P(_nodes[ba])} with nothing joined to it; close the outline in CAD");
-        string rb = at[bb][0].Source;
-        string widen = diag > 0 ? $" or widen the snap tolerance to more than {F(bestD / diag * 1.5)} of the part size (now {F(snapTol / diag)})" : "";
-        return new SectionTwistException("open-loop",
-            $"{file}: open outline: gap of {F(bestD)} drawing units between the end of {ra} at {P(_nodes[ba])} and the end of {rb} at {P(_nodes[bb])} " +
-            $"({odd.Count} loose ends in all); close the outline in CAD, pick the outline layer with --layer,{widen}");
     }
 }

@@ -6,17 +6,27 @@ namespace SectionTwist.Import.Dxf;
 /// Builds closed loops from loose outline pieces: flattens splines, snaps end points that lie within a tolerance
 /// (uniform-grid spatial hash with cell size = tolerance, union-find clusters, so near ends join transitively), moves
 /// line ends onto the cluster point (arcs are re-fitted through their mid point), drops degenerate, duplicate and
-/// overlapping pieces, and chains the rest into loops by walking node adjacency.
+/// overlapping pieces, removes pieces with a free end (repeatedly: they cannot belong to a closed outline), and chains
+/// the rest into loops by walking node adjacency. Groups where an odd number of ends (three or more) meet are set
+/// aside as junctions. Nothing here refuses a drawing: the reader decides what the loose pieces and junctions mean.
 /// </summary>
-internal sealed partial class OutlineAssembler(string file, double snapTol, double splineTol, double diag)
+internal sealed partial class OutlineAssembler(string file, double snapTol, double splineRel, double diag, CancellationToken ct = default)
 {
     /// <summary>Largest distance an end point was moved by snapping (drawing units).</summary>
     public double LargestGap { get; private set; }
     public int DuplicatesDropped { get; private set; }
     public int DegenerateDropped { get; private set; }
+    /// <summary>Largest tolerance used where a curve was replaced by arcs (splines, bent ellipses), drawing units; 0 when none.</summary>
+    public double CurveTolerance { get; private set; }
     public List<Loop> Loops { get; } = [];
     /// <summary>Layers that each loop's pieces came from.</summary>
     public List<string[]> LoopLayers { get; } = [];
+    /// <summary>For each loop, the entity of each of its segments (in loop order).</summary>
+    public List<string[]> LoopSources { get; } = [];
+    /// <summary>Pieces that do not close (free ends, removed repeatedly), in connected groups.</summary>
+    public List<LooseGroup> Loose { get; } = [];
+    /// <summary>Groups of pieces where three or more ends meet, so that no unique loop runs through them.</summary>
+    public List<Junction> Junctions { get; } = [];
 
     private readonly List<OutlinePiece> _pieces = [];
     private List<Point2> _nodes = [];
@@ -26,29 +36,52 @@ internal sealed partial class OutlineAssembler(string file, double snapTol, doub
         foreach (var c in curves)
         {
             if (c.Segment is not null) { _pieces.Add(new OutlinePiece(c.Segment, c.Source, c.Layer)); continue; }
-            var pts = c.Spline!.Flatten(splineTol, 200_000);
-            var dedup = new List<Point2> { pts[0] };
-            for (int i = 1; i < pts.Count; i++) if (pts[i] != dedup[^1]) dedup.Add(pts[i]);
-            for (int i = 0; i + 1 < dedup.Count; i++) _pieces.Add(new OutlinePiece(new LineSegment(dedup[i], dedup[i + 1]), c.Source, c.Layer));
+            ct.ThrowIfCancellationRequested();
+            // splines become tangent-near arcs within a tolerance relative to their own size (negligible for J)
+            double tol = splineRel * Math.Min(diag, Math.Max(c.Spline!.ControlBounds.Diagonal, 1e-300));
+            CurveTolerance = Math.Max(CurveTolerance, tol);
+            foreach (var s in SplineArcs.Fit(c.Spline!, tol)) _pieces.Add(new OutlinePiece(s, c.Source, c.Layer));
+            if (_pieces.Count > Limits.InputLimits.MaxDxfPieces)
+                throw new SectionTwistException("dxf-too-large", $"{file}: the splines become more than {Limits.InputLimits.MaxDxfPieces} pieces; export only the section outline or simplify the splines");
         }
         var closed = _pieces.Where(p => p.IsClosedCurve).ToList();
         _pieces.RemoveAll(p => p.IsClosedCurve);
         Snap();
+        ct.ThrowIfCancellationRequested();
         Rebuild();
+        ct.ThrowIfCancellationRequested();
         DropDuplicates();
+        ct.ThrowIfCancellationRequested();
         AddClosedCurves(closed);
         Chain();
+        ct.ThrowIfCancellationRequested();
+        // the limit on loops analysed together (Limits.InputLimits.MaxLoops) applies to the chosen section: DxfSelection
     }
 
+    /// <summary>Full circles and ellipses are loops by themselves; a copy lying on an earlier one is dropped (sweep over boxes sorted by their left edge).</summary>
     private void AddClosedCurves(List<OutlinePiece> closed)
     {
+        var boxes = closed.Select(c => c.Segment.Bounds).ToArray();
+        var order = Enumerable.Range(0, closed.Count).OrderBy(i => boxes[i].MinX).ThenBy(i => i).ToArray();
+        var dropped = new bool[closed.Count];
+        double tol = Math.Max(snapTol, 1e-12 * diag);
+        for (int oi = 0; oi < order.Length; oi++)
+        {
+            int i = order[oi];
+            if (dropped[i]) continue;
+            for (int oj = oi + 1; oj < order.Length && boxes[order[oj]].MinX <= boxes[i].MinX + tol; oj++)
+            {
+                int j = order[oj];
+                if (!dropped[j] && boxes[i].Intersects(boxes[j], tol) && Covers(closed[i].Segment, closed[j].Segment)) dropped[j] = true;
+            }
+        }
         for (int i = 0; i < closed.Count; i++)
         {
-            bool dup = false;
-            for (int j = 0; j < i && !dup; j++) dup = Covers(closed[j].Segment, closed[i].Segment);
-            if (dup) { DuplicatesDropped++; continue; }
+            if ((i & 255) == 0) ct.ThrowIfCancellationRequested();
+            if (dropped[i]) { DuplicatesDropped++; continue; }
             Loops.Add(new Loop([closed[i].Segment]));
             LoopLayers.Add([closed[i].Layer]);
+            LoopSources.Add([closed[i].Source]);
         }
     }
 
@@ -62,8 +95,14 @@ internal sealed partial class OutlineAssembler(string file, double snapTol, doub
         int Find(int x) { while (parent[x] != x) { parent[x] = parent[parent[x]]; x = parent[x]; } return x; }
         double cell = snapTol > 0 ? snapTol : Math.Max(diag, 1) * 1e-15;
         var grid = new Dictionary<(long, long), List<int>>();
+        // exact copies (stacked duplicate entities) join their first occurrence directly: the grid sees each point once,
+        // so a crowd of coincident ends costs O(n), not O(n^2)
+        var exact = new Dictionary<Point2, int>();
         for (int i = 0; i < n; i++)
         {
+            if ((i & 4095) == 0) ct.ThrowIfCancellationRequested();
+            if (exact.TryGetValue(pts[i], out int first)) { parent[Find(i)] = Find(first); continue; }
+            exact[pts[i]] = i;
             long cx = (long)Math.Floor(pts[i].X / cell), cy = (long)Math.Floor(pts[i].Y / cell);
             for (long dx = -1; dx <= 1; dx++)
                 for (long dy = -1; dy <= 1; dy++)
@@ -115,16 +154,19 @@ internal sealed partial class OutlineAssembler(string file, double snapTol, doub
                 default:
                     if (Point2.Distance(s.Start, a) > 1e-10 * diag || Point2.Distance(s.End, b) > 1e-10 * diag)
                     {
-                        // an elliptical arc whose ends must move: replace it by chords within the spline tolerance
-                        var pts = s.Flatten(splineTol).ToArray();
-                        pts[0] = a; pts[^1] = b;
-                        var ids = new int[pts.Length];
+                        // an elliptical arc whose ends must move: replace it by arcs within the spline tolerance, ends moved
+                        double tol = splineRel * Math.Min(diag, s.Bounds.Diagonal);
+                        CurveTolerance = Math.Max(CurveTolerance, tol);
+                        var fit = SplineArcs.Fit(s, tol);
+                        fit[0] = MoveEnds(fit[0], a, fit.Count == 1 ? b : fit[0].End);
+                        if (fit.Count > 1) fit[^1] = MoveEnds(fit[^1], fit[^1].Start, b);
+                        var ids = new int[fit.Count + 1];
                         ids[0] = p.A; ids[^1] = p.B;
-                        for (int i = 1; i + 1 < pts.Length; i++) { ids[i] = _nodes.Count; _nodes.Add(pts[i]); }
-                        p.Segment = new LineSegment(pts[0], pts[1]);
+                        for (int i = 1; i < fit.Count; i++) { ids[i] = _nodes.Count; _nodes.Add(fit[i].Start); }
+                        p.Segment = fit[0];
                         p.B = ids[1];
-                        for (int i = 1; i + 1 < pts.Length; i++)
-                            _extra.Add(new OutlinePiece(new LineSegment(pts[i], pts[i + 1]), p.Source, p.Layer) { A = ids[i], B = ids[i + 1] });
+                        for (int i = 1; i < fit.Count; i++)
+                            _extra.Add(new OutlinePiece(fit[i], p.Source, p.Layer) { A = ids[i], B = ids[i + 1] });
                     }
                     break;
             }
@@ -134,4 +176,14 @@ internal sealed partial class OutlineAssembler(string file, double snapTol, doub
     }
 
     private readonly List<OutlinePiece> _extra = [];
+
+    /// <summary>The segment with its ends moved to <paramref name="a"/> and <paramref name="b"/> (an arc keeps its middle point).</summary>
+    private static Segment MoveEnds(Segment s, Point2 a, Point2 b)
+    {
+        if (s.Start == a && s.End == b) return s;
+        if (s is ArcSegment arc)
+            try { return ArcSegment.ThroughThreePoints(a, arc.PointAt(0.5), b); }
+            catch (SectionTwistException) { }
+        return new LineSegment(a, b);
+    }
 }

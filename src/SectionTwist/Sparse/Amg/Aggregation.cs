@@ -9,7 +9,7 @@ namespace SectionTwist.Sparse.Amg;
 internal static class Aggregation
 {
     /// <summary>Aggregate number of every row; returns the number of aggregates.</summary>
-    public static int Build(CsrMatrix a, double theta, out int[] aggregate)
+    public static int Build(CsrMatrix a, double theta, out int[] aggregate, CancellationToken ct = default)
     {
         int n = a.Rows;
         int[] rp = a.RowPtr, ci = a.ColIdx;
@@ -33,6 +33,7 @@ internal static class Aggregation
         // pass 1: root nodes whose strong neighbourhood is untouched
         for (int i = 0; i < n; i++)
         {
+            if ((i & 65535) == 0) ct.ThrowIfCancellationRequested();
             if (agg[i] != -1) continue;
             bool free = true, any = false;
             for (int p = rp[i]; p < rp[i + 1]; p++)
@@ -47,6 +48,7 @@ internal static class Aggregation
         var pass1 = (int[])agg.Clone();
         for (int i = 0; i < n; i++)
         {
+            if ((i & 65535) == 0) ct.ThrowIfCancellationRequested();
             if (agg[i] != -1) continue;
             double best = -1; int ba = -1;
             for (int p = rp[i]; p < rp[i + 1]; p++)
@@ -60,6 +62,7 @@ internal static class Aggregation
         // pass 3: remaining nodes with their unaggregated strong neighbours
         for (int i = 0; i < n; i++)
         {
+            if ((i & 65535) == 0) ct.ThrowIfCancellationRequested();
             if (agg[i] != -1) continue;
             agg[i] = count;
             for (int p = rp[i]; p < rp[i + 1]; p++)

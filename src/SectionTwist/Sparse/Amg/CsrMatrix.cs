@@ -89,8 +89,8 @@ internal sealed class CsrMatrix
         return new CsrMatrix(Cols, Rows, rp, ci, v);
     }
 
-    /// <summary>C = this * b (Gustavson), symbolic then numeric pass per row block; columns sorted when asked.</summary>
-    public CsrMatrix Multiply(CsrMatrix b, bool sortRows)
+    /// <summary>C = this * b (Gustavson), symbolic then numeric pass per row block; columns sorted when asked. Observes <paramref name="ct"/> every 1024 rows.</summary>
+    public CsrMatrix Multiply(CsrMatrix b, bool sortRows, CancellationToken ct = default)
     {
         int rows = Rows, cols = b.Cols;
         var cp = new int[rows + 1];
@@ -102,6 +102,7 @@ internal sealed class CsrMatrix
             Array.Fill(mark, -1);
             for (int i = r0; i < r1; i++)
             {
+                if ((i & 1023) == 0 && ct.IsCancellationRequested) return;
                 int c = 0;
                 for (int p = RowPtr[i]; p < RowPtr[i + 1]; p++)
                 {
@@ -115,6 +116,7 @@ internal sealed class CsrMatrix
                 cp[i + 1] = c;
             }
         });
+        ct.ThrowIfCancellationRequested();
         for (int i = 0; i < rows; i++) cp[i + 1] += cp[i];
         var ci = new int[cp[rows]];
         var cv = new double[cp[rows]];
@@ -125,6 +127,7 @@ internal sealed class CsrMatrix
             Array.Fill(pos, -1);
             for (int i = r0; i < r1; i++)
             {
+                if ((i & 1023) == 0 && ct.IsCancellationRequested) return;
                 int start = cp[i], w = start;
                 for (int p = RowPtr[i]; p < RowPtr[i + 1]; p++)
                 {
@@ -141,6 +144,7 @@ internal sealed class CsrMatrix
                 if (sortRows) Array.Sort(ci, cv, start, w - start);
             }
         });
+        ct.ThrowIfCancellationRequested();
         return new CsrMatrix(rows, cols, cp, ci, cv);
     }
 }

@@ -48,14 +48,15 @@ internal sealed class SmoothedAggregation
             var lvl = NewLevel(cur);
             levels.Add(lvl);
             if (cur.Rows <= CoarseSize || levels.Count >= 20) break;
-            int nc = Aggregation.Build(cur, theta, out var agg);
+            int nc = Aggregation.Build(cur, theta, out var agg, ct);
             if (nc >= cur.Rows * 0.9) break; // no useful coarsening
             ct.ThrowIfCancellationRequested();
-            var p = SmoothedProlongator(cur, lvl.InvDiag, agg, nc);
+            var p = SmoothedProlongator(cur, lvl.InvDiag, agg, nc, ct);
             var r = p.Transpose();
             ct.ThrowIfCancellationRequested();
-            var ap = cur.Multiply(p, sortRows: false);
-            cur = r.Multiply(ap, sortRows: true);
+            var ap = cur.Multiply(p, sortRows: false, ct);
+            ct.ThrowIfCancellationRequested();
+            cur = r.Multiply(ap, sortRows: true, ct);
             lvl.P = p; lvl.R = r;
             theta *= 0.5;
         }
@@ -80,9 +81,10 @@ internal sealed class SmoothedAggregation
     }
 
     /// <summary>P = (I - omega D^-1 A) T with T the aggregate indicator, built row by row.</summary>
-    private static CsrMatrix SmoothedProlongator(CsrMatrix a, double[] invDiag, int[] agg, int nc)
+    private static CsrMatrix SmoothedProlongator(CsrMatrix a, double[] invDiag, int[] agg, int nc, CancellationToken ct)
     {
-        double rho = SpectralRadius(a, invDiag);
+        double rho = SpectralRadius(a, invDiag, ct);
+        ct.ThrowIfCancellationRequested();
         double omega = 4.0 / (3.0 * rho);
         int n = a.Rows;
         int[] rp = a.RowPtr, ci = a.ColIdx;
@@ -102,6 +104,7 @@ internal sealed class SmoothedAggregation
                 pp[i + 1] = c;
             }
         });
+        ct.ThrowIfCancellationRequested();
         for (int i = 0; i < n; i++) pp[i + 1] += pp[i];
         var pi = new int[pp[n]];
         var pv = new double[pp[n]];
@@ -128,7 +131,7 @@ internal sealed class SmoothedAggregation
     }
 
     /// <summary>Largest eigenvalue of D^-1 A by 12 power iterations from a fixed pseudo-random start (slightly inflated).</summary>
-    private static double SpectralRadius(CsrMatrix a, double[] invDiag)
+    private static double SpectralRadius(CsrMatrix a, double[] invDiag, CancellationToken ct)
     {
         int n = a.Rows;
         var x = new double[n];
@@ -138,6 +141,7 @@ internal sealed class SmoothedAggregation
         double lambda = 1;
         for (int it = 0; it < 12; it++)
         {
+            ct.ThrowIfCancellationRequested();
             a.Multiply(x, y);
             double num = 0, den = 0;
             for (int i = 0; i < n; i++) { y[i] *= invDiag[i]; num += y[i] * y[i]; den += x[i] * y[i]; }

@@ -1,0 +1,34 @@
+using System.Globalization;
+using SectionTwist.Shaft;
+
+namespace SectionTwist.Cli;
+
+/// <summary>The warping part of the shaft tables: warnings and, when warping is restrained, the Vlasov results.</summary>
+internal static class ShaftWarpingText
+{
+    public static void Write(TextWriter w, ShaftDocument doc, ShaftResult r)
+    {
+        if (r.WarpingWarnings.Count == 0 && r.Warping is null) return;
+        var u = doc.Units;
+        string F(double v, string f = "G4") => v.ToString(f, CultureInfo.InvariantCulture);
+        if (r.Warping is { } m)
+        {
+            w.WriteLine("restrained warping (non-uniform torsion, Vlasov): these rotations replace the free-warping ones above");
+            w.WriteLine("  station        rotation [deg]   rate of twist [deg/m]   reaction torque [" + u.Torque.Symbol + "]   bimoment reaction [N*m^2]");
+            foreach (var s in m.Stations)
+                w.WriteLine($"  {s.Name,-14} {F(s.Rotation * 180 / Math.PI, "F4"),14}   {F(s.RateOfTwist * 180 / Math.PI),21}   {u.Torque.Format(s.ReactionTorque, "G4"),20}   {F(s.ReactionBimoment),25}");
+            w.WriteLine($"  segment        a [{u.Length.Symbol}]   max bimoment [N*m^2]   max warping normal stress [{u.Stress.Symbol}]   max Saint-Venant shear [{u.Stress.Symbol}]   warping stress / yield");
+            for (int i = 0; i < m.Segments.Count; i++)
+            {
+                var s = m.Segments[i];
+                double? sy = doc.Model.Segments.FirstOrDefault(x => x.Label == s.Label)?.Material.YieldStrength;
+                string ratio = sy is { } y && y > 0 ? F(s.MaxWarpingNormalStress / y, "F2") + (s.MaxWarpingNormalStress > y ? "  !! OVER YIELD" : "") : "- (no yield given)";
+                w.WriteLine($"  {s.Label,-14} {u.Length.Format(s.WarpingLength, "G4"),7}   {F(s.MaxBimoment),20}   {u.Stress.Format(s.MaxWarpingNormalStress, "G4"),30}   {u.Stress.Format(s.MaxSaintVenantShear, "G4"),27}   {ratio}");
+            }
+            w.WriteLine("  the warping normal stress adds to bending stresses at the flange tips (not combined here: check the sum against the steel design code);");
+            w.WriteLine("  the shear check above uses the whole torque as Saint-Venant torque");
+        }
+        foreach (var text in r.WarpingWarnings) w.WriteLine($"warning: {text}");
+        w.WriteLine();
+    }
+}

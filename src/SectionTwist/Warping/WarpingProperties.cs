@@ -1,0 +1,43 @@
+using SectionTwist.Geometry;
+using SectionTwist.Meshing;
+
+namespace SectionTwist.Warping;
+
+/// <summary>Builds a <see cref="WarpingResult"/> from the warping solves on the last two meshes of a section analysis.</summary>
+internal static class WarpingProperties
+{
+    /// <summary>
+    /// Solves on the fine mesh (and on the coarse one for the error estimate, unless it is the same mesh); null for
+    /// profiles of more than one region.
+    /// </summary>
+    public static WarpingResult? Compute(Mesh coarse, Mesh fine, SectionProperties props, double j, CancellationToken ct)
+    {
+        var f = WarpingSolver.Solve(fine, props.Centroid, ct);
+        if (f is null) return null;
+        var c = ReferenceEquals(coarse, fine) ? null : WarpingSolver.Solve(coarse, props.Centroid, ct);
+        // Whole change between the meshes (not divided by 2^p - 1: the order of Iw is not known at corners), plus a
+        // floor at the round-off level of the quantity's own scale.
+        double size = Math.Sqrt(props.Area);
+        double iwScale = Math.Max(f.WarpingConstant, 1e-12 * props.PolarMoment * props.Area);
+        var err = c is null
+            ? new WarpingErrorEstimate(double.NaN, double.NaN, double.NaN)
+            : new WarpingErrorEstimate(
+                Point2.Distance(c.ShearCentre, f.ShearCentre) + 1e-9 * size,
+                Math.Abs(c.WarpingConstant - f.WarpingConstant) + 1e-9 * iwScale,
+                Math.Abs(c.MaxOmega - f.MaxOmega) + 1e-9 * props.Area);
+        double ratio = f.WarpingConstant / (j * props.PolarMoment / props.Area);
+        return new WarpingResult
+        {
+            ShearCentre = f.ShearCentre,
+            WarpingConstant = f.WarpingConstant,
+            MaxSectorialCoordinate = f.MaxOmega,
+            MaxSectorialCoordinateLocation = f.MaxOmegaLocation,
+            TorsionConstantUpperBound = f.TorsionConstantUpper,
+            EstimatedError = err,
+            WarpingRatio = ratio,
+            Classification = ratio >= WarpingResult.SensitiveRatio ? WarpingClass.WarpingSensitive : WarpingClass.WarpingNegligible,
+            SteelWarpingLength = Math.Sqrt(WarpingResult.SteelModulusRatio * f.WarpingConstant / j),
+            Omega = Array.AsReadOnly(f.Omega),
+        };
+    }
+}

@@ -1,0 +1,20 @@
+using SectionTwist.Geometry;
+
+namespace SectionTwist.Warping;
+
+/// <summary>The warping function solved on one mesh, normalized about the shear centre (internal).</summary>
+internal sealed class WarpingSolution
+{
+    /// <summary>Normalized warping function at every mesh node for unit twist rate, m^2 (about the shear centre, zero mean).</summary>
+    public required double[] Omega { get; init; }
+    /// <summary>Shear centre (Trefftz), m.</summary>
+    public required Point2 ShearCentre { get; init; }
+    /// <summary>Warping constant about the shear centre, integral of Omega^2 dA, m^6.</summary>
+    public required double WarpingConstant { get; init; }
+    /// <summary>Largest |Omega| over the nodes, m^2.</summary>
+    public required double MaxOmega { get; init; }
+    /// <summary>Node where |Omega| is largest, m.</summary>
+    public required Point2 MaxOmegaLocation { get; init; }
+    /// <summary>Torsion constant from the warping function, Ip - integral |grad psi|^2 (an upper bound), m^4.</summary>
+    public required double TorsionConstantUpper { get; init; }
+}

@@ -1,0 +1,74 @@
+using SectionTwist.Shaft;
+using SectionTwist.WarpingTorsion;
+
+namespace SectionTwist.Tests.WarpingTorsion;
+
+/// <summary>The shaft file's <c>warping:</c> key and the open-section warning.</summary>
+public class ShaftWarpingTests
+{
+    private const string Beam = """
+        units: {length: mm, torque: N*m}
+        materials:
+          frame: {library: steel-s355}
+        sections:
+          beam: {template: "ibeam:h=200,b=100,tw=5.6,tf=8.5,r=12"}
+        stations:
+          - {name: A, at: 0}
+          - {name: B, after: 1200}
+        segments:
+          - {from: A, to: B, section: beam, material: frame}
+        loads:
+          - {at: B, torque: 300}
+        supports:
+          fixed: [A]
+
+        """;
+
+    private static readonly SectionTwist.Torsion.AnalysisOptions Coarse = new() { Accuracy = 1e-3 };
+
+    private static ShaftResult Solve(string text) =>
+        ShaftSolver.Solve(ShaftFile.Parse(text, resolver: ShaftSections.CreateResolver(Coarse)).Model);
+
+    [Fact]
+    public void Open_section_with_free_warping_is_warned_and_warping_free_silences_it()
+    {
+        var r = Solve(Beam);
+        Assert.Contains(r.WarpingWarnings, w => w.Contains("open thin-walled section solved with free warping", StringComparison.Ordinal));
+        Assert.Null(r.Warping);
+        var quiet = Solve(Beam + "warping: free\n");
+        Assert.Empty(quiet.WarpingWarnings);
+        Assert.Null(quiet.Warping);
+    }
+
+    [Fact]
+    public void Round_shafts_carry_no_warping_warning()
+    {
+        var r = Solve(Beam.Replace("{template: \"ibeam:h=200,b=100,tw=5.6,tf=8.5,r=12\"}", "{template: \"keyed:d=40\"}", StringComparison.Ordinal));
+        Assert.Empty(r.WarpingWarnings);
+    }
+
+    // Cantilever restrained at the root: phi(L) = T/(GJ) (L - a tanh(L/a)) (Vlasov, Thin-Walled Elastic Beams, 2nd ed.,
+    // ch. 5; AISC Design Guide 9, from memory), with J and Iw from the section analysis of the same file.
+    [Fact]
+    public void Restrained_root_in_a_shaft_file_matches_the_closed_form()
+    {
+        var r = Solve(Beam + "warping: {A: restrained}\n");
+        var m = r.Warping!;
+        var sec = r.Model.Segments[0].Section!;
+        double g = r.Model.Segments[0].Material.ShearModulus, e = r.Model.Segments[0].Material.YoungsModulus!.Value;
+        double gj = g * sec.TorsionConstant, a = Math.Sqrt(e * sec.WarpingConstant!.Value / gj), l = 1.2;
+        Tol.Rel(300 / gj * (l - a * Math.Tanh(l / a)), m.Stations[1].Rotation, 1e-9, "Vlasov ch. 5, cantilever");
+        Assert.True(m.Stations[1].Rotation < r.Stations[1].Rotation, "restraint stiffens the member");
+        Assert.Contains(r.WarpingWarnings, w => w.Contains("lateral-torsional buckling", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void A_bad_warping_value_names_the_line_and_the_remedy()
+    {
+        var ex = Assert.Throws<SectionTwistException>(() => Solve(Beam + "warping: {A: clamped}\n"));
+        Assert.Contains("shaft.yaml:", ex.Message, StringComparison.Ordinal);
+        Assert.Contains("expected 'free', 'restrained' or '{spring: K}'", ex.Message, StringComparison.Ordinal);
+        var ex2 = Assert.Throws<SectionTwistException>(() => Solve(Beam + "warping: {Q: restrained}\n"));
+        Assert.Contains("no station named 'Q'", ex2.Message, StringComparison.Ordinal);
+    }
+}
