@@ -13,7 +13,7 @@ namespace SectionTwist.Cli;
 /// </summary>
 internal static class SectionBench
 {
-    private static readonly string[] Specs = ["keyed:d=40", "keyed:d=40,r=0.4", "shs:B=80,t=5", "iso14:8x36x42,r=0.3"];
+    private static readonly string[] Specs = ["keyed:d=40,r=0", "keyed:d=40", "keyed:d=40,r=0.4", "shs:B=80,t=5", "iso14:8x36x42,r=0.3"];
 
     /// <summary>Accuracy of the reference solves: 1e-7 took 45-65 s per section on 2 shared cores, 1e-6 takes 5-15 s.</summary>
     internal const double ReferenceAccuracy = 1e-6;

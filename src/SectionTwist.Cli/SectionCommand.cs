@@ -41,8 +41,7 @@ internal sealed class SectionCommand : ICommand
     {
         bool json = args.Flag("json");
         bool warping = args.Flag("warping");
-        double accuracy = args.Double("accuracy") ?? 1e-4;
-        if (!(accuracy > 0 && accuracy < 0.5)) throw new UsageException("--accuracy must lie between 0 and 0.5, e.g. 1e-4");
+        double accuracy = AccuracyOption.Read(args) ?? 1e-4;
         var unitText = args.Option("unit");
         var drawingNotes = new List<string>();
         var srcOptions = DrawingOptions.Read(args, new ProfileSourceOptions

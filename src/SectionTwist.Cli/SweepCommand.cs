@@ -31,13 +31,12 @@ internal sealed class SweepCommand : ICommand
     {
         string vary = args.Option("vary") ?? throw new UsageException("--vary KEY=FROM:TO:STEPS is required");
         string? unitText = args.Option("unit");
-        double? accuracy = args.Double("accuracy");
+        double? accuracy = AccuracyOption.Read(args);
         var units = args.Option("units") is { } us ? UnitSystem.Parse(us) : null;
         bool json = args.Flag("json"), csv = args.Flag("csv");
         args.EnsureAllUsed();
         if (json && csv) throw new UsageException("choose one of --json and --csv");
         if (args.Positional.Count != 1) throw new UsageException("give exactly one template spec, e.g. keyed:d=40,n=2 (quote it if it has spaces)");
-        if (accuracy is { } acc && !(acc > 0 && acc < 0.5)) throw new UsageException($"--accuracy {acc}: use a relative accuracy between 0 and 0.5, e.g. 1e-3");
         LengthUnit? unit = unitText is null ? null : LengthUnit.Parse(unitText);
         var steps = BuildSteps(args.Positional[0], vary, unit);
 

@@ -20,10 +20,9 @@ internal sealed class VerifyCommand : ICommand
 
     public int Run(Args args, CliContext ctx)
     {
-        double accuracy = args.Double("accuracy") ?? 1e-4;
+        double accuracy = AccuracyOption.Read(args) ?? 1e-4;
         bool json = args.Flag("json");
         args.EnsureAllUsed();
-        if (!(accuracy > 0 && accuracy < 0.5)) throw new UsageException("--accuracy must lie between 0 and 0.5, e.g. 1e-4");
         IReadOnlyList<VerificationOutcome> outcomes;
         using (var progress = new ProgressLine(ctx, "verify"))
             outcomes = VerificationSuite.RunReporting(ctx.Analysis(accuracy), new Sink(f => progress.Report(f, "cases")), ctx.Cancellation);

@@ -100,7 +100,7 @@ public static class ProfileTemplates
             args = new TemplateArguments(specText, def.Info, items, unit);
             regions = def.Build(args);
         }
-        var profile = new Profile(regions, args.DisplayUnit, specText);
+        var profile = new Profile(regions, args.DisplayUnit, specText) { Warnings = args.Warnings.ToArray() };
         return (profile, def.OuterSize(args, regions), def.Info, args);
     }
 }

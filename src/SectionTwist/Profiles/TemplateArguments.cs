@@ -57,6 +57,20 @@ internal sealed class TemplateArguments
     /// <summary>The unit for display: the first explicit one, else the default.</summary>
     public LengthUnit DisplayUnit => FirstExplicitUnit ?? DefaultUnit;
 
+    /// <summary>Cautions raised while building (e.g. a default quoted from memory of a standard), in order.</summary>
+    public List<Geometry.ProfileWarning> Warnings { get; } = [];
+
+    /// <summary>
+    /// Records that a value quoted from memory of a standard (not checked against the standard's text) supplied the
+    /// default of <paramref name="key"/>: <paramref name="what"/> names the value, the remedy is appended.
+    /// </summary>
+    public void DefaultFromMemory(string key, string what) => DefaultFromMemory(key, what, $"give {key}= explicitly");
+
+    /// <summary>As <see cref="DefaultFromMemory(string, string)"/> with the given remedy (e.g. several keys to give).</summary>
+    public void DefaultFromMemory(string key, string what, string remedy) =>
+        Warnings.Add(new Geometry.ProfileWarning("default-from-memory",
+            $"{Spec}: {key}: default {what} quoted from memory of the standard (not checked against its text); compare it with the standard or your drawing, or {remedy}"));
+
     /// <summary>True when the spec gives <paramref name="key"/>.</summary>
     public bool Has(string key) => _values.ContainsKey(key);
 

@@ -173,7 +173,7 @@ public partial class ApiDocsTests
     public void Shaft_summary_in_US_units_converts_the_torque_and_flags_the_sharp_keyseat()
     {
         // T = P / omega = 2200 W / (90 rpm) = 233.4 N*m; 1 lbf*in = 4.4482216152605 N x 0.0254 m exactly (the international
-        // pound-force and inch), so T = 2066 lbf*in. The keyed body (keyed:d=40, no floor radius) has a sharp re-entrant
+        // pound-force and inch), so T = 2066 lbf*in. The keyed body (keyed:d=40,r=0, no floor radius) has a sharp re-entrant
         // corner: its peak shear is unbounded (Timoshenko and Goodier, sec. 113; docs/references.md), so the summary says so.
         var res = ApiExamples.TwoStepShaft();
         string s = ApiExamples.ShaftSummary(res, UnitSystem.US);
@@ -193,7 +193,7 @@ public partial class ApiDocsTests
     {
         // 60 x 10 bar: J = beta a b^3 from the series of Timoshenko and Goodier, sec. 109.
         var r = ApiExamples.AnalyseWithOwnSource();
-        var (beta, _) = VerificationSuite.RectangleSeries(0.060, 0.010);
+        var (beta, _) = SectionTwist.Tests.References.Published.Rectangle(0.060, 0.010);
         Tol.Rel(beta * 0.060 * Math.Pow(0.010, 3), r.TorsionConstant, 2e-4);
         Assert.Equal("bar:60x10", r.Profile.Name);
     }

@@ -132,7 +132,7 @@ public static class ApiExamples
     {
         Material steel = ShaftMaterials.All["steel-1045-cd"];
         SectionStiffness journal = SectionStiffness.Round(0.030);           // d = 30 mm, exact
-        SectionResult keyed = SectionAnalyzer.Analyze(ProfileTemplates.Create("keyed:d=40"));
+        SectionResult keyed = SectionAnalyzer.Analyze(ProfileTemplates.Create("keyed:d=40,r=0")); // r=0: a sharp keyseat floor
         SectionStiffness body = SectionStiffness.FromAnalysis(keyed, "keyed d=40 mm", 0.040); // J, peak shear, warnings
         var model = new ShaftModel
         {

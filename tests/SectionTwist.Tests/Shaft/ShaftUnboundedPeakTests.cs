@@ -24,7 +24,7 @@ public sealed class ShaftUnboundedPeakTests : IDisposable
         title: sharp keyseat
         units: {length: mm, torque: N*m}
         sections:
-          keyed: {template: "keyed:d=50"}
+          keyed: {template: "keyed:d=50,r=0"}
         stations:
           - {name: A, at: 0}
           - {name: B, at: 100}
@@ -84,7 +84,8 @@ public sealed class ShaftUnboundedPeakTests : IDisposable
 
         var segments = File.ReadAllLines(Path.Combine(csv, "segments.csv"));
         var header = segments[0].Split(',');
-        var cells = segments[1].Split(',');
+        // The section cell "keyed:d=50,r=0" is quoted (RFC 4180): split on commas outside quotes.
+        var cells = System.Text.RegularExpressions.Regex.Split(segments[1], ",(?=(?:[^\"]*\"[^\"]*\")*[^\"]*$)");
         Assert.Equal("", cells[Array.IndexOf(header, "max_shear_MPa")]);
         Assert.Equal("", cells[Array.IndexOf(header, "safety_factor")]);
         Assert.Equal("yes", cells[Array.IndexOf(header, "peak_shear_unbounded")]);
