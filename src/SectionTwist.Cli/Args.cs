@@ -89,10 +89,22 @@ internal sealed class Args
         return v;
     }
 
-    /// <summary>Throws a usage error for the first option no one asked for.</summary>
+    /// <summary>The options the command knows (names without dashes), for suggestions; empty when not given.</summary>
+    public IReadOnlyList<string> Known { get; init; } = [];
+
+    /// <summary>Throws a usage error for the first option no one asked for, with the nearest of <see cref="Known"/> as a suggestion.</summary>
     public void EnsureAllUsed()
     {
         for (int i = 0; i < _options.Count; i++)
-            if (!_used.Contains(i)) throw new UsageException($"unknown option --{_options[i].Name}");
+        {
+            if (_used.Contains(i)) continue;
+            string name = _options[i].Name;
+            string hint = Suggest.Nearest(name, Known) is { } near ? $"; did you mean --{near}?" : "";
+            throw new UsageException($"unknown option --{name}{hint}");
+        }
     }
+
+    /// <summary>The option names (without dashes) a usage text mentions, e.g. <c>accuracy</c> for <c>--accuracy REL</c>.</summary>
+    public static IReadOnlyList<string> OptionsIn(string usage) =>
+        System.Text.RegularExpressions.Regex.Matches(usage, @"--([a-z][a-z0-9-]*)").Select(m => m.Groups[1].Value).Append("help").Distinct().ToList();
 }

@@ -1,6 +1,7 @@
 using System.Globalization;
 using SectionTwist.Bending;
 using SectionTwist.Shaft;
+using SectionTwist.Units;
 
 namespace SectionTwist.Cli;
 
@@ -16,7 +17,7 @@ internal static class BendingTables
 
     private static string Sf(double? v) => v is { } x ? double.IsFinite(x) ? F(x, "F2") : "inf" : "-";
 
-    public static void Print(TextWriter w, ShaftDisplayUnits u, BendingResult r, bool rotating)
+    public static void Print(TextWriter w, UnitSystem u, BendingResult r, bool rotating)
     {
         string L = u.Length.Symbol, S = u.Stress.Symbol, T = u.Torque.Symbol;
         w.WriteLine("BENDING WITH TORSION");

@@ -14,6 +14,9 @@ internal sealed class CliContext(TextWriter output, TextWriter error, bool isTer
     /// <summary>True when standard error is an interactive terminal (progress display allowed; no default time limit).</summary>
     public bool IsTerminal { get; } = isTerminal;
 
+    /// <summary>How long work runs before a progress line appears (default 1 s: quick commands print none).</summary>
+    public TimeSpan ProgressDelay { get; init; } = TimeSpan.FromSeconds(1);
+
     /// <summary>Cancelled by Ctrl+C or when the time limit passes; every long operation observes it.</summary>
     public CancellationToken Cancellation { get; set; }
 

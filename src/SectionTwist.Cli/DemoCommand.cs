@@ -3,6 +3,7 @@ using SectionTwist.Dynamics;
 using SectionTwist.Rendering.Adapters;
 using SectionTwist.Rendering.Report;
 using SectionTwist.Shaft;
+using SectionTwist.Units;
 using SectionTwist.Verification;
 
 namespace SectionTwist.Cli;
@@ -24,17 +25,19 @@ internal sealed class DemoCommand : ICommand
     public string Summary => "solve the bundled winch drive shaft and write its report and pictures";
 
     public string Usage =>
-        "sectiontwist demo [--out DIR]\n" +
+        "sectiontwist demo [--out DIR] [--units SI-mm|SI-m|US]\n" +
         "  Solves the bundled demo: the drive shaft of a small winch (an invented scenario) with a keyed input, a hollow middle\n" +
         "  and a splined output, driven through a flexible coupling. The keyed and splined sections are analysed, the shaft is\n" +
         "  solved, the verification cases are run, and DIR receives report.html, shaft.png, shaft.svg and section-NAME.png;\n" +
         "  the drivetrain (motor shaft, gear stage, inertias) gets its torsional modes and resonance check in modes.html.\n" +
         $"  --out DIR   output folder (default ./{DefaultFolder}; created when missing)\n" +
+        "  --units SYS units of the summary, report and pictures: SI-mm (the demo file's own), SI-m or US\n" +
         "  The shaft file itself: sample-profiles/winch-shaft.yaml ('sectiontwist shaft' reads it too).";
 
     public int Run(Args args, CliContext context)
     {
         string folder = args.Option("out") ?? DefaultFolder;
+        var units = args.Option("units") is { } us ? UnitSystem.Parse(us) : null;
         args.EnsureAllUsed();
         if (args.Positional.Count > 0) throw new UsageException($"unexpected '{args.Positional[0]}'; the demo takes only --out DIR");
         OutputPaths.PrepareFolder(folder, "--out");
@@ -42,25 +45,40 @@ internal sealed class DemoCommand : ICommand
         var clock = Stopwatch.StartNew();
         // the verification cases run beside the section analyses (both are single-threaded for these sizes)
         var verifying = Task.Run(() => VerificationSuite.Run(context.Analysis(), context.Cancellation));
-        var sections = new ShaftSectionCatalog(context.Analysis(), context.Err.WriteLine, context.Cancellation);
-        var doc = ShaftFile.Parse(ReadDemoFile(), "winch-shaft.yaml", resolver: sections.Resolver);
-        var result = ShaftSolver.Solve(doc.Model);
-        var verification = verifying.GetAwaiter().GetResult();
-        var content = ShaftReport.Build(doc, result, sections, verification, CliReport.Options());
-        var files = ShaftReport.WriteBundle(content, folder).ToList();
+        ShaftDocument doc;
+        ShaftResult result;
+        IReadOnlyList<VerificationOutcome> verification;
+        List<string> files;
+        ShaftSectionCatalog sections;
         string? modesLine = null;
-        if (doc.Dynamics is { } dyn)
+        using (var progress = new ProgressLine(context, "demo"))
         {
-            var modes = ModalAnalysis.Solve(dyn.Drivetrain, dyn.Options);
-            var check = dyn.Excitation is { } ex ? ResonanceCheck.Evaluate(modes, ex) : null;
-            var forced = dyn.Forcing is { } f ? ForcedResponse.Compute(modes, f, dyn.DampingRatio) : null;
-            string modesFile = Path.Combine(folder, "modes.html");
-            ModesReport.Write(doc, modes, check, forced, modesFile, CliReport.Options());
-            files.Add(modesFile);
-            var first = modes.ElasticModes.FirstOrDefault();
-            modesLine = $"  Drivetrain: lowest torsional natural frequency {first?.Frequency.ToString("G4", System.Globalization.CultureInfo.InvariantCulture) ?? "-"} Hz" +
-                        (check?.Closest is { } c ? $"; closest crossing: mode {c.Mode} with {c.Excitation} ({(c.Status == CrossingStatus.Resonance ? "in the operating range" : $"margin {c.Margin * 100:F0} %")}, {ModalResultJson.Status(c.Status)})" : "") +
-                        " (modes.html)";
+            sections = new ShaftSectionCatalog(context.Analysis(), context.Err.WriteLine, context.Cancellation)
+            {
+                Progress = (name, p) => progress.Report(0.8 * p.Fraction, $"section '{name}': {p.Stage}"),
+            };
+            doc = ShaftFile.Parse(ReadDemoFile(), "winch-shaft.yaml", resolver: sections.Resolver);
+            if (units is not null) doc = doc with { Units = units };
+            result = ShaftSolver.Solve(doc.Model);
+            using (progress.Pulse("verification cases"))
+                verification = verifying.GetAwaiter().GetResult();
+            progress.Report(0.9, "pictures and report");
+            var content = ShaftReport.Build(doc, result, sections, verification, CliReport.Options());
+            files = ShaftReport.WriteBundle(content, folder).ToList();
+            if (doc.Dynamics is { } dyn)
+            {
+                progress.Report(0.95, "torsional modes");
+                var modes = ModalAnalysis.Solve(dyn.Drivetrain, dyn.Options);
+                var check = dyn.Excitation is { } ex ? ResonanceCheck.Evaluate(modes, ex) : null;
+                var forced = dyn.Forcing is { } f ? ForcedResponse.Compute(modes, f, dyn.DampingRatio) : null;
+                string modesFile = Path.Combine(folder, "modes.html");
+                ModesReport.Write(doc, modes, check, forced, modesFile, CliReport.Options());
+                files.Add(modesFile);
+                var first = modes.ElasticModes.FirstOrDefault();
+                modesLine = $"  Drivetrain: lowest torsional natural frequency {(first is null ? "-" : NumberText.Format(first.Frequency, 4))} Hz" +
+                            (check?.Closest is { } c ? $"; closest crossing: mode {c.Mode} with {c.Excitation} ({(c.Status == CrossingStatus.Resonance ? "in the operating range" : $"margin {NumberText.Fixed(c.Margin * 100, 0)} %")}, {ModalResultJson.Status(c.Status)})" : "") +
+                            " (modes.html)";
+            }
         }
 
         var w = context.Out;
@@ -71,7 +89,7 @@ internal sealed class DemoCommand : ICommand
         w.WriteLine(failed == 0
             ? $"  Verification: all {verification.Count} cases passed on this build."
             : $"  Verification: {failed} of {verification.Count} cases FAILED on this build (see the report).");
-        w.WriteLine($"wrote {files.Count} files to {Path.GetFullPath(folder)} in {clock.Elapsed.TotalSeconds:F1} s");
+        w.WriteLine($"wrote {files.Count} files to {Path.GetFullPath(folder)} in {NumberText.Fixed(clock.Elapsed.TotalSeconds, 1)} s");
         w.WriteLine($"report: {Path.GetFullPath(files[0])}");
         w.WriteLine(ShaftCommand.Caution);
         return 0;

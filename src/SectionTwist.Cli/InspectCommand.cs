@@ -35,7 +35,7 @@ internal sealed class InspectCommand : ICommand
 
     internal static void Print(TextWriter w, DxfImportReport r)
     {
-        string G(double v) => (Math.Abs(v) < 1e-300 ? 0 : v).ToString("G6", CultureInfo.InvariantCulture);
+        string G(double v) => NumberText.Format(v, 6);
         string u = r.Unit?.Symbol ?? "units";
         string Box(Geometry.Box2 b) => $"x {G(b.MinX)}..{G(b.MaxX)}, y {G(b.MinY)}..{G(b.MaxY)}";
         w.WriteLine($"drawing {r.Source}  ({r.Format} DXF, version {r.Version}{(r.CodePage is null ? "" : ", code page " + r.CodePage)})");
@@ -51,7 +51,9 @@ internal sealed class InspectCommand : ICommand
         if (r.SkippedTypes.Count > 0) w.WriteLine($"  skipped types  {string.Join(", ", r.SkippedTypes)}");
         if (r.Extent > 0) w.WriteLine($"  extent         {G(r.Extent)} {u} (diagonal, far strays left out)");
         w.WriteLine($"  loops          {r.Loops}");
-        w.WriteLine($"  gaps closed    largest {G(r.LargestGapClosed)} {u} (snap tolerance {G(r.SnapTolerance)} {u})");
+        w.WriteLine(DxfSource.IsRoundOff(r)
+            ? $"  gaps closed    none (end points meet to round-off; snap tolerance {G(r.SnapTolerance)} {u})"
+            : $"  gaps closed    largest {G(r.LargestGapClosed)} {u} (snap tolerance {G(r.SnapTolerance)} {u})");
         if (r.DuplicatesDropped > 0) w.WriteLine($"  duplicates     {r.DuplicatesDropped} dropped");
         if (r.Parts.Count > 0)
         {

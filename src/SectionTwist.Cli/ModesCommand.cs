@@ -33,8 +33,15 @@ internal sealed class ModesCommand : ICommand
         if (args.Positional.Count != 1) throw new UsageException(args.Positional.Count == 0 ? "give the shaft file, e.g. 'sectiontwist modes winch-shaft.yaml'" : "give exactly one shaft file");
         string path = args.Positional[0];
         if (report is not null) OutputPaths.CheckFile(report, "--report");
-        var sections = new ShaftSectionCatalog(notes: context.Err.WriteLine);
-        var doc = ShaftFile.Load(path, ShaftCommand.SectionResolver ?? sections.Resolver);
+        ShaftDocument doc;
+        using (var progress = new ProgressLine(context, $"modes {Path.GetFileName(path)}"))
+        {
+            var sections = new ShaftSectionCatalog(context.Analysis(), context.Err.WriteLine, context.Cancellation)
+            {
+                Progress = (name, p) => progress.Report(p.Fraction, $"section '{name}': {p.Stage}"),
+            };
+            doc = ShaftFile.Load(path, ShaftCommand.SectionResolver ?? sections.Resolver);
+        }
         var dyn = doc.Dynamics ?? throw new SectionTwistException("shaft-file",
             $"{Path.GetFileName(path)}: the file has no 'dynamics' block; add one with the inertias, e.g. 'dynamics: {{inertias: [{{at: A, inertia: 0.05 kg*m^2}}]}}' (docs/shaft-file.md)");
         ModalResult modes;

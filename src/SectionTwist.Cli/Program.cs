@@ -48,7 +48,12 @@ internal static class Program
     {
         if (argv.Length == 0 || argv[0] is "help" or "--help" or "-h")
         {
-            if (argv.Length > 1 && Find(argv[1]) is { } c) { ctx.Out.WriteLine(c.Usage); return 0; }
+            if (argv.Length > 1)
+            {
+                if (Find(argv[1]) is { } c) { ctx.Out.WriteLine(c.Usage); return 0; }
+                ctx.Err.WriteLine($"sectiontwist help: unknown command '{argv[1]}'{Hint(argv[1])}; the commands are {string.Join(", ", Commands.Select(x => x.Name))}");
+                return 2;
+            }
             PrintHelp(ctx.Out);
             return argv.Length == 0 ? 2 : 0;
         }
@@ -60,13 +65,13 @@ internal static class Program
         var cmd = Find(argv[0]);
         if (cmd is null)
         {
-            ctx.Err.WriteLine($"sectiontwist: unknown command '{argv[0]}'; run 'sectiontwist help' for the list");
+            ctx.Err.WriteLine($"sectiontwist: unknown command '{argv[0]}'{Hint(argv[0])}; run 'sectiontwist help' for the list");
             return 2;
         }
         CliLimits? limits = null;
         try
         {
-            var args = new Args(argv.Skip(1));
+            var args = new Args(argv.Skip(1)) { Known = Args.OptionsIn(cmd.Usage) };
             if (args.Flag("help")) { ctx.Out.WriteLine(cmd.Usage); return 0; }
             limits = new CliLimits(args, ctx, interrupt);
             if (limits.TimeoutSeconds > 0) Deadline = new DeadlineInfo(DateTime.UtcNow.AddSeconds(limits.TimeoutSeconds), limits.TimeoutMessage(cmd.Name));
@@ -128,6 +133,9 @@ internal static class Program
     private static string Short(string s) => s.Length <= 300 ? s : s[..300] + "...";
 
     private static ICommand? Find(string name) => Commands.FirstOrDefault(c => c.Name == name);
+
+    /// <summary><c>; did you mean 'section'?</c> for a mistyped command, or nothing.</summary>
+    private static string Hint(string word) => Suggest.DidYouMean(word, Commands.Select(c => c.Name));
 
     private static void PrintHelp(TextWriter w)
     {

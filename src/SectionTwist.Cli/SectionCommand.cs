@@ -10,19 +10,20 @@ internal sealed class SectionCommand : ICommand
     public string Name => "section";
     public string Summary => "torsion constant J, peak shear per torque and area properties of a cross-section";
     public string Usage => $$"""
-        sectiontwist section SOURCE [--accuracy REL] [--unit U] [drawing options] [--json] [--warping] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR] [--plastic MATERIAL|STRESS [--plastic-plot FILE.png|svg]]
+        sectiontwist section SOURCE [--accuracy REL] [--unit U] [--units SYSTEM] [drawing options] [--json] [--warping] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR] [--plastic MATERIAL|STRESS [--plastic-plot FILE.png|svg]]
           SOURCE      a template spec such as circle:d=40, keyed:d=40, rect:b=60,h=20, a drawing file (.dxf),
                       a point list (.csv, .pts) or anything a plugin reads
           --accuracy  requested relative accuracy of J (default 1e-4)
           --unit      length unit of the input (mm, cm, m, in, ft); specs default to mm
+          --units     units of the table and the plot: SI-mm, SI-m or US (default: the input's own, e.g. US for inches)
         drawing options (see 'sectiontwist inspect' to list layers and parts):
         {{DrawingOptions.Usage}}
         output options:
-          --json      print one JSON object in SI base units (m, m^2, m^4, 1/m^3)
+          --json      print one JSON object in SI base units (m, m^2, m^4, 1/m^3); --units does not change it
           --warping   also solve the warping function: shear centre, warping constant Iw, largest sectorial
                       coordinate, warping length for steel and whether restrained warping matters
           --plot      write a shear-stress contour picture (PNG or SVG)
-          --torque    torque in N*m for the plot colour bar in MPa (default: stress per unit torque)
+          --torque    torque for the plot colour bar, in N*m, or with a unit: 250Nm, 2kN*m, 1800lbf*in (default: stress per unit torque)
           --dxf       write the outline (layer PROFILE) and stress-function contours (layer PHI) to a DXF file for CAD
           --dxf-mesh  also write the mesh edges (layer MESH)
           --plastic   also the elastic-perfectly-plastic torsion: first-yield torque, fully plastic torque,
@@ -40,8 +41,7 @@ internal sealed class SectionCommand : ICommand
     {
         bool json = args.Flag("json");
         bool warping = args.Flag("warping");
-        double accuracy = args.Double("accuracy") ?? 1e-4;
-        if (!(accuracy > 0 && accuracy < 0.5)) throw new UsageException("--accuracy must lie between 0 and 0.5, e.g. 1e-4");
+        double accuracy = AccuracyOption.Read(args) ?? 1e-4;
         var unitText = args.Option("unit");
         var drawingNotes = new List<string>();
         var srcOptions = DrawingOptions.Read(args, new ProfileSourceOptions
@@ -52,7 +52,8 @@ internal sealed class SectionCommand : ICommand
             Cancellation = ctx.Cancellation,
         });
         string? plot = args.Option("plot");
-        double? torque = args.Double("torque");
+        double? torque = TorqueOption(args.Option("torque"));
+        var units = args.Option("units") is { } us ? UnitSystem.Parse(us) : null;
         string? dxf = args.Option("dxf");
         bool dxfMesh = args.Flag("dxf-mesh");
         string? plugins = args.Option("plugins");
@@ -62,22 +63,42 @@ internal sealed class SectionCommand : ICommand
         if (args.Positional.Count != 1) throw new UsageException(args.Positional.Count == 0 ? "give one SOURCE (a template spec or a .dxf file)" : $"give one SOURCE, not {args.Positional.Count}");
         args.EnsureAllUsed();
         LoadPlugins(plugins);
-        var profile = ProfileSources.Load(args.Positional[0], srcOptions);
-        var result = SectionAnalyzer.Analyze(profile, ctx.Analysis(accuracy) with { Warping = warping }, ctx.Cancellation);
+        if (plot is not null) OutputPaths.CheckFile(plot, "--plot");
+        if (dxf is not null) OutputPaths.CheckFile(dxf, "--dxf");
+        string source = args.Positional[0];
+        var profile = ProfileSources.Load(source, srcOptions);
+        SectionResult result;
+        using (var progress = new ProgressLine(ctx, $"section {source}"))
+            result = SectionAnalyzer.Analyze(profile, ctx.Analysis(accuracy) with { Warping = warping }, ctx.Cancellation, progress.Analysis("analysis"));
         // in JSON the reader's notes (parts analysed together, entities left out, facets) travel with the warnings
         if (drawingNotes.Count > 0)
             result = result with { Warnings = drawingNotes.Select(n => new AnalysisWarning("drawing", n)).Concat(result.Warnings).ToList().AsReadOnly() };
-        if (plot is not null) SectionPlotHook.Write(result, plot, torque);
+        if (plot is not null) SectionPlotHook.Write(result, plot, torque, SectionPlotHook.Title(source, srcOptions.Part), units);
         if (dxf is not null) SectionDxfExport.Write(result, dxf, dxfMesh);
-        var plastic = plasticYield is { } yv ? Plastic.PlasticAnalyzer.Analyze(result, yv.Item1, null, ctx.Cancellation) : null;
+        Plastic.PlasticResult? plastic;
+        using (var progress = new ProgressLine(ctx, $"section {source}"))
+        using (progress.Pulse("plastic torsion"))
+            plastic = plasticYield is { } yv ? Plastic.PlasticAnalyzer.Analyze(result, yv.Item1, null, ctx.Cancellation) : null;
         if (plastic is not null && plasticPlot is not null) PlasticPlotHook.Write(plastic, plasticPlot);
-        if (json) ctx.Out.WriteLine(SectionJson.Write(result, args.Positional[0], plastic is null ? null : w => PlasticCli.WriteJson(w, plastic, plasticYield!.Value.Item2)));
+        if (json) ctx.Out.WriteLine(SectionJson.Write(result, source, plastic is null ? null : w => PlasticCli.WriteJson(w, plastic, plasticYield!.Value.Item2)));
         else
         {
-            SectionText.Write(ctx.Out, result, args.Positional[0]);
+            SectionText.Write(ctx.Out, result, source, units);
             if (plastic is not null) PlasticCli.WriteText(ctx.Out, plastic, plasticYield!.Value.Item2);
         }
         return 0;
+    }
+
+    /// <summary>The <c>--torque</c> value in N*m: a plain number is N*m; a number with a torque unit (250Nm, 1800lbf*in) is converted.</summary>
+    internal static double? TorqueOption(string? text)
+    {
+        if (text is null) return null;
+        double? t = Shaft.QuantityText.TrySplit(text, out double v, out string unit)
+            ? unit.Length == 0 ? v : Shaft.QuantityText.UnitFactor(unit, Shaft.QuantityKind.Torque) * v
+            : null;
+        if (t is not { } x || !double.IsFinite(x) || x == 0)
+            throw new UsageException($"--torque: '{text}' is not a non-zero torque; write N*m (250) or a number with a unit: {Shaft.QuantityText.Examples(Shaft.QuantityKind.Torque)}");
+        return x;
     }
 
     private static void LoadPlugins(string? folder)

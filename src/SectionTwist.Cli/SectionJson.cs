@@ -34,11 +34,13 @@ internal static class SectionJson
         Num(w, "ixy", p.Ixy);
         Num(w, "i1", p.I1);
         Num(w, "i2", p.I2);
-        Num(w, "principalAngleDeg", p.PrincipalAngle * 180 / Math.PI);
+        // undefined when I1 = I2 (every centroidal axis is principal): null rather than an angle made of round-off
+        Num(w, "principalAngleDeg", p.HasPrincipalAxes ? p.PrincipalAngle * 180 / Math.PI : double.NaN);
         Num(w, "polarMoment", p.PolarMoment);
         Num(w, "torsionConstant", r.TorsionConstant);
         Num(w, "maxShearPerTorque", r.MaxShearPerTorque);
         Pt(w, "maxShearLocation", r.MaxShearLocation);
+        w.WriteBoolean("peakShearUnbounded", double.IsPositiveInfinity(r.EstimatedRelativeError.MaxShear));
         w.WriteStartObject("estimatedRelativeError");
         Num(w, "torsionConstant", r.EstimatedRelativeError.TorsionConstant);
         Num(w, "maxShear", r.EstimatedRelativeError.MaxShear);

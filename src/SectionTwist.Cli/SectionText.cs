@@ -1,55 +1,58 @@
-using System.Globalization;
 using SectionTwist.Torsion;
+using SectionTwist.Units;
 
 namespace SectionTwist.Cli;
 
-/// <summary>The human-readable table for one section, in the profile's unit.</summary>
+/// <summary>The human-readable table for one section, in a <see cref="UnitSystem"/> (by default the profile's own).</summary>
 internal static class SectionText
 {
-    public static void Write(TextWriter w, SectionResult r, string source)
+    public static void Write(TextWriter w, SectionResult r, string source, UnitSystem? units = null)
     {
-        var u = r.LengthUnit;
-        double l = u.Metres;
-        string s = u.Symbol;
+        var u = units ?? UnitSystem.For(r.LengthUnit);
         var p = r.Properties;
-        string F(double v) => v.ToString("G6", CultureInfo.InvariantCulture);
-        string E(double v) => double.IsNaN(v) ? "n/a" : double.IsInfinity(v) ? "unbounded (singular corner)" : v.ToString("0.0E+0", CultureInfo.InvariantCulture);
-        w.WriteLine($"section {source}  (lengths in {s})");
-        w.WriteLine($"  area A                    {F(p.Area / (l * l)),14} {s}^2");
-        w.WriteLine($"  centroid (x, y)           ({F(p.Centroid.X / l)}, {F(p.Centroid.Y / l)}) {s}");
-        w.WriteLine($"  Ixx, Iyy (centroidal)     {F(p.Ixx / Math.Pow(l, 4)),14}, {F(p.Iyy / Math.Pow(l, 4))} {s}^4");
-        w.WriteLine($"  Ixy                       {F(p.Ixy / Math.Pow(l, 4)),14} {s}^4");
-        w.WriteLine($"  I1, I2 (principal)        {F(p.I1 / Math.Pow(l, 4)),14}, {F(p.I2 / Math.Pow(l, 4))} {s}^4 at {F(p.PrincipalAngle * 180 / Math.PI)} deg");
-        w.WriteLine($"  polar moment Ip           {F(p.PolarMoment / Math.Pow(l, 4)),14} {s}^4");
-        w.WriteLine($"  torsion constant J        {F(r.TorsionConstant / Math.Pow(l, 4)),14} {s}^4   J/Ip = {r.TorsionConstant / p.PolarMoment:F4}   est. rel. error {E(r.EstimatedRelativeError.TorsionConstant)}");
-        w.WriteLine($"  peak shear per torque     {F(r.MaxShearPerTorque * 1e-3),14} MPa per kN*m   est. rel. error {E(r.EstimatedRelativeError.MaxShear)}");
-        w.WriteLine($"  torsional modulus T/tau   {F(r.TorsionalModulus / Math.Pow(l, 3)),14} {s}^3");
-        w.WriteLine($"  peak shear at             ({F(r.MaxShearLocation.X / l)}, {F(r.MaxShearLocation.Y / l)}) {s}");
+        string L(double m) => u.Length.Format(m, 6);
+        string I(double m4) => u.SecondMoment.Format(m4, 6);
+        bool unbounded = double.IsPositiveInfinity(r.EstimatedRelativeError.MaxShear);
+        string E(double v) => double.IsNaN(v) ? "n/a" : double.IsInfinity(v) ? "unbounded (sharp re-entrant corner)" : NumberText.Exponent(v, 2);
+        w.WriteLine($"section {source}  (units {u.Name})");
+        w.WriteLine($"  area A                    {u.Area.Format(p.Area, 6),14} {u.Area.Symbol}");
+        w.WriteLine($"  centroid (x, y)           ({L(p.Centroid.X)}, {L(p.Centroid.Y)}) {u.Length.Symbol}");
+        w.WriteLine($"  Ixx, Iyy (centroidal)     {I(p.Ixx),14}, {I(p.Iyy)} {u.SecondMoment.Symbol}");
+        w.WriteLine($"  Ixy                       {I(p.Ixy),14} {u.SecondMoment.Symbol}");
+        w.WriteLine(p.HasPrincipalAxes
+            ? $"  I1, I2 (principal)        {I(p.I1),14}, {I(p.I2)} {u.SecondMoment.Symbol}, I1 about the axis at {NumberText.Format(p.PrincipalAngle * 180 / Math.PI, 6)} deg from x"
+            : $"  I1 = I2 (principal)       {I(p.I1),14} {u.SecondMoment.Symbol} (equal: every centroidal axis is principal)");
+        w.WriteLine($"  polar moment Ip           {I(p.PolarMoment),14} {u.SecondMoment.Symbol}");
+        w.WriteLine($"  torsion constant J        {I(r.TorsionConstant),14} {u.SecondMoment.Symbol}   J/Ip = {NumberText.Fixed(r.TorsionConstant / p.PolarMoment, 4)}   est. rel. error {E(r.EstimatedRelativeError.TorsionConstant)}");
+        w.WriteLine(unbounded
+            ? $"  peak shear per torque     {"unbounded",14} at a sharp re-entrant corner ({u.ShearPerTorque.Format(r.MaxShearPerTorque, 6)} {u.ShearPerTorque.Symbol} on this mesh, growing with refinement)"
+            : $"  peak shear per torque     {u.ShearPerTorque.Format(r.MaxShearPerTorque, 6),14} {u.ShearPerTorque.Symbol}   est. rel. error {E(r.EstimatedRelativeError.MaxShear)}");
+        w.WriteLine(unbounded
+            ? $"  torsional modulus T/tau   {"n/a",14} (the peak shear is unbounded)"
+            : $"  torsional modulus T/tau   {u.SectionModulus.Format(r.TorsionalModulus, 6),14} {u.SectionModulus.Symbol}");
+        w.WriteLine($"  peak shear at             ({L(r.MaxShearLocation.X)}, {L(r.MaxShearLocation.Y)}) {u.Length.Symbol}");
         if (r.RegionTorsionConstants.Count > 1)
             for (int i = 0; i < r.RegionTorsionConstants.Count; i++)
-                w.WriteLine($"  J of part {i + 1,-3}             {F(r.RegionTorsionConstants[i] / Math.Pow(l, 4)),14} {s}^4");
-        if (r.Warping is { } wr) WriteWarping(w, r, wr);
-        w.WriteLine($"  mesh                      {r.Mesh.Nodes} nodes, {r.Mesh.Elements} quadratic triangles, min angle {r.Mesh.MinAngleDeg:F1} deg");
+                w.WriteLine($"  J of part {i + 1,-3}             {I(r.RegionTorsionConstants[i]),14} {u.SecondMoment.Symbol}");
+        if (r.Warping is { } wr) WriteWarping(w, u, wr);
+        w.WriteLine($"  mesh                      {r.Mesh.Nodes} nodes, {r.Mesh.Elements} quadratic triangles, min angle {NumberText.Fixed(r.Mesh.MinAngleDeg, 1)} deg");
         foreach (var warn in r.Warnings) w.WriteLine($"  warning [{warn.Code}]: {warn.Message}");
         }
 
-    private static void WriteWarping(TextWriter w, SectionResult r, Warping.WarpingResult wr)
+    private static void WriteWarping(TextWriter w, UnitSystem u, Warping.WarpingResult wr)
     {
-        var u = r.LengthUnit;
-        double l = u.Metres;
-        string s = u.Symbol;
-        string F(double v) => v.ToString("G6", CultureInfo.InvariantCulture);
-        string E(double v) => double.IsNaN(v) ? "n/a" : v.ToString("0.0E+0", CultureInfo.InvariantCulture);
+        string L(double m) => u.Length.Format(m, 6);
+        string E(double v, DisplayUnit unit) => double.IsNaN(v) ? "n/a" : $"{NumberText.Exponent(unit.FromSi(v), 2)} {unit.Symbol}";
         var e = wr.EstimatedError;
-        w.WriteLine($"  shear centre (x, y)       ({F(wr.ShearCentre.X / l)}, {F(wr.ShearCentre.Y / l)}) {s}   est. error {E(e.ShearCentre / l)} {s}");
-        w.WriteLine($"  warping constant Iw       {F(wr.WarpingConstant / Math.Pow(l, 6)),14} {s}^6   est. error {E(e.WarpingConstant / Math.Pow(l, 6))} {s}^6 (about the shear centre)");
-        w.WriteLine($"  max |sectorial coord.|    {F(wr.MaxSectorialCoordinate / (l * l)),14} {s}^2 at ({F(wr.MaxSectorialCoordinateLocation.X / l)}, {F(wr.MaxSectorialCoordinateLocation.Y / l)}) {s}   est. error {E(e.MaxSectorialCoordinate / (l * l))} {s}^2");
-        w.WriteLine($"  J from warping function   {F(wr.TorsionConstantUpperBound / Math.Pow(l, 4)),14} {s}^4 (upper bound; the J above is the lower-bound solve, extrapolated)");
-        w.WriteLine($"  warping length a (steel)  {F(wr.SteelWarpingLength / l),14} {s}   a = sqrt(E Iw / (G J)), E/G = 2.6");
+        w.WriteLine($"  shear centre (x, y)       ({L(wr.ShearCentre.X)}, {L(wr.ShearCentre.Y)}) {u.Length.Symbol}   est. error {E(e.ShearCentre, u.Length)}");
+        w.WriteLine($"  warping constant Iw       {u.WarpingConstant.Format(wr.WarpingConstant, 6),14} {u.WarpingConstant.Symbol}   est. error {E(e.WarpingConstant, u.WarpingConstant)} (about the shear centre)");
+        w.WriteLine($"  max |sectorial coord.|    {u.Area.Format(wr.MaxSectorialCoordinate, 6),14} {u.Area.Symbol} at ({L(wr.MaxSectorialCoordinateLocation.X)}, {L(wr.MaxSectorialCoordinateLocation.Y)}) {u.Length.Symbol}   est. error {E(e.MaxSectorialCoordinate, u.Area)}");
+        w.WriteLine($"  J from warping function   {u.SecondMoment.Format(wr.TorsionConstantUpperBound, 6),14} {u.SecondMoment.Symbol} (upper bound; the J above is the lower-bound solve, extrapolated)");
+        w.WriteLine($"  warping length a (steel)  {u.Length.Format(wr.SteelWarpingLength, 6),14} {u.Length.Symbol}   a = sqrt(E Iw / (G J)), E/G = 2.6");
         string verdict = wr.Classification == Warping.WarpingClass.WarpingSensitive
             ? "open thin-walled: restrained warping at supports and loads changes twist and adds normal stress; T L / (G J) alone can be far off"
             : "solid or closed: warping torsion negligible, Saint-Venant torsion applies";
-        w.WriteLine($"  warping ratio Iw/(J rp^2) {F(wr.WarpingRatio),14}   {verdict}");
+        w.WriteLine($"  warping ratio Iw/(J rp^2) {NumberText.Format(wr.WarpingRatio, 6),14}   {verdict}");
         if (wr.Classification == Warping.WarpingClass.WarpingSensitive)
             w.WriteLine("  caution: lateral-torsional buckling, local buckling and connection design are not checked; follow the local steel design code");
     }

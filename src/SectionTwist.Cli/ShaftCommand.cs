@@ -1,7 +1,7 @@
-using System.Globalization;
 using SectionTwist.Rendering.Adapters;
 using SectionTwist.Rendering.Report;
 using SectionTwist.Shaft;
+using SectionTwist.Units;
 using SectionTwist.Verification;
 
 namespace SectionTwist.Cli;
@@ -26,54 +26,67 @@ internal sealed class ShaftCommand : ICommand
     public string Summary => "twist, shear and reactions along a segmented shaft described in a YAML file";
 
     public string Usage =>
-        "sectiontwist shaft FILE.yaml [--json] [--csv DIR] [--report OUT.html]\n" +
+        "sectiontwist shaft FILE.yaml [--units SI-mm|SI-m|US] [--json] [--csv DIR] [--report OUT.html]\n" +
         "  Solves the shaft file (format: docs/shaft-file.md) by the stiffness method and prints the rotation of every station,\n" +
-        "  the internal torque, twist, peak shear, factor of safety and twist rate of every segment, the support reactions and\n" +
-        "  the governing segment, in the file's units.\n" +
-        "  --json        print the result as JSON in SI base units (m, N*m, Pa, rad) instead of tables\n" +
-        "  --csv DIR     also write DIR/stations.csv and DIR/segments.csv (SI units), and DIR/bending.csv with a 'bending' block\n" +
+        "  the internal torque, twist, peak shear, factor of safety, twist rate and check of every segment, the support\n" +
+        "  reactions, the governing segment and the warnings.\n" +
+        "  --units SYS   units of the tables, CSV files and report: SI-mm, SI-m or US (default: the file's own 'units' block)\n" +
+        "  --json        print the result as JSON in SI base units (m, N*m, Pa, rad) instead of tables; --units does not change it\n" +
+        "  --csv DIR     also write DIR/stations.csv, DIR/segments.csv and DIR/warnings.csv, and DIR/bending.csv with a 'bending' block\n" +
         "  --report OUT  also write one self-contained HTML report (inputs, tables, pictures, verification, method)\n" +
-        "  Exceeded limits are flagged, not errors; the exit code is 0 when the shaft solved, 2 for bad input.";
+        "  Exceeded limits and unbounded peaks (sharp corners) are flagged in the 'check' column, not errors; the exit code is\n" +
+        "  0 when the shaft solved, 2 for bad input.";
 
     public int Run(Args args, CliContext context)
     {
         bool json = args.Flag("json");
         string? csv = args.Option("csv");
         string? report = args.Option("report");
+        var units = args.Option("units") is { } us ? UnitSystem.Parse(us) : null;
         args.EnsureAllUsed();
         if (args.Positional.Count != 1) throw new UsageException(args.Positional.Count == 0 ? "give the shaft file, e.g. 'sectiontwist shaft winch-shaft.yaml'" : "give exactly one shaft file");
         string path = args.Positional[0];
         if (report is not null) OutputPaths.CheckFile(report, "--report");
+        if (csv is not null) OutputPaths.PrepareFolder(csv, "--csv");
 
         // the report's verification cases run beside the section analyses
         var verifying = report is null ? null : Task.Run(() => VerificationSuite.Run(context.Analysis(), context.Cancellation));
-        var sections = new ShaftSectionCatalog(context.Analysis(), context.Err.WriteLine, context.Cancellation);
-        var doc = ShaftFile.Load(path, SectionResolver ?? sections.Resolver);
+        ShaftDocument doc;
+        ShaftSectionCatalog sections;
+        using (var progress = new ProgressLine(context, $"shaft {Path.GetFileName(path)}"))
+        {
+            sections = new ShaftSectionCatalog(context.Analysis(), context.Err.WriteLine, context.Cancellation)
+            {
+                Progress = (name, p) => progress.Report(p.Fraction, $"section '{name}': {p.Stage}"),
+            };
+            doc = ShaftFile.Load(path, SectionResolver ?? sections.Resolver);
+        }
+        if (units is not null) doc = doc with { Units = units };
         ShaftResult result;
         try { result = ShaftSolver.Solve(doc.Model); }
         catch (SectionTwistException e) { throw new SectionTwistException(e.Code, $"{Path.GetFileName(path)}: {e.Message}", e); }
 
         context.Cancellation.ThrowIfCancellationRequested();
-        if (csv is not null) ShaftResultCsv.WriteAll(result, csv);
+        var csvFiles = csv is null ? [] : ShaftResultCsv.WriteAll(result, csv, doc.Units);
         if (report is not null)
         {
-            ShaftReport.Write(ShaftReport.Build(doc, result, sections, verifying!.GetAwaiter().GetResult(), CliReport.Options()), report);
+            IReadOnlyList<Verification.VerificationOutcome> outcomes;
+            using (var progress = new ProgressLine(context, "report"))
+            using (progress.Pulse("verification cases"))
+                outcomes = verifying!.GetAwaiter().GetResult();
+            ShaftReport.Write(ShaftReport.Build(doc, result, sections, outcomes, CliReport.Options()), report);
             context.Err.WriteLine($"wrote {report}");
         }
         if (json) context.Out.WriteLine(ShaftResultJson.Write(result, path));
         else PrintTables(context.Out, doc, result, path);
-        if (csv is not null) context.Err.WriteLine($"wrote {Path.Combine(csv, "stations.csv")} and {Path.Combine(csv, "segments.csv")}{(result.Bending is null ? "" : $" and {Path.Combine(csv, "bending.csv")}")}");
+        if (csv is not null) context.Err.WriteLine($"wrote {string.Join(", ", csvFiles)}");
         return 0;
     }
-
-    private static string F(double v, string format = "G5") => v.ToString(format, CultureInfo.InvariantCulture);
-
-    private static double Deg(double rad) => rad * 180 / Math.PI;
 
     internal static void PrintTables(TextWriter w, ShaftDocument doc, ShaftResult r, string path)
     {
         var u = doc.Units;
-        w.WriteLine($"{doc.Model.Title ?? "shaft"} ({path})");
+        w.WriteLine($"{doc.Model.Title ?? "shaft"} ({path}), units {u.Name}");
         w.WriteLine($"sign convention: right-hand rule about the axis from '{r.Stations[0].Name}' to '{r.Stations[^1].Name}'; " +
                     "internal torque positive when it acts counter-clockwise on the cut face looking back toward the first station");
         w.WriteLine($"rotations relative to station '{r.ReferenceStation}'");
@@ -82,7 +95,8 @@ internal sealed class ShaftCommand : ICommand
         w.WriteLine("stations");
         var st = new List<string[]> { new[] { "name", $"position [{u.Length.Symbol}]", $"applied torque [{u.Torque.Symbol}]", "rotation [deg]", "rotation [rad]", "support" } };
         foreach (var s in r.Stations)
-            st.Add([s.Name, u.Length.Format(s.Position), s.AppliedTorque == 0 ? "-" : u.Torque.Format(s.AppliedTorque), F(Deg(s.Rotation), "F4"), F(s.Rotation, "G4"), s.IsFixed ? "fixed" : ""]);
+            st.Add([s.Name, u.Length.Format(s.Position), s.AppliedTorque == 0 ? "-" : u.Torque.Format(s.AppliedTorque), NumberText.Fixed(Deg(s.Rotation), 4),
+                NumberText.Format(s.Rotation, 4), s.IsFixed ? "fixed" : ""]);
         Table(w, st);
         w.WriteLine();
 
@@ -90,18 +104,15 @@ internal sealed class ShaftCommand : ICommand
         var sg = new List<string[]>
         {
             new[] { "segment", "section", "material", $"length [{u.Length.Symbol}]", $"torque [{u.Torque.Symbol}]", "twist [deg]",
-                $"max shear [{u.Stress.Symbol}]", $"limit [{u.Stress.Symbol}]", "FoS", "twist rate [deg/m]", "check" },
+                $"max shear [{u.Stress.Symbol}]", $"limit [{u.Stress.Symbol}]", "FoS", $"twist rate [{u.TwistRate.Symbol}]", "check" },
         };
         foreach (var s in r.Segments)
         {
             string torque = s.TorqueAtFrom == s.TorqueAtTo ? u.Torque.Format(s.TorqueAtFrom) : $"{u.Torque.Format(s.TorqueAtFrom)}..{u.Torque.Format(s.TorqueAtTo)}";
             string label = s.Label == $"{s.From}-{s.To}" ? s.Label : $"{s.Label} ({s.From}-{s.To})";
-            var flags = new List<string>();
-            if (s.ExceedsShearLimit) flags.Add($"SHEAR OVER {s.Material.LimitBasis.ToUpperInvariant()}");
-            if (s.ExceedsTwistRateLimit) flags.Add("TWIST RATE OVER LIMIT");
-            sg.Add([label, s.Section, s.Material.Name, u.Length.Format(s.Length), torque, F(Deg(s.Twist), "F4"), u.Stress.Format(s.MaxShear, "G4"),
-                s.ShearLimit is { } lim ? u.Stress.Format(lim, "G4") : "-", s.SafetyFactor is { } sf ? double.IsFinite(sf) ? F(sf, "F2") : "inf" : "-",
-                F(s.MaxTwistRateDegPerMetre, "G4"), flags.Count == 0 ? "ok" : "!! " + string.Join(", ", flags)]);
+            sg.Add([label, s.Section, s.Material.Name, u.Length.Format(s.Length), torque, NumberText.Fixed(Deg(s.Twist), 4),
+                ShaftResultChapter.PeakShear(u, s, withUnit: false), s.ShearLimit is { } lim ? u.Stress.Format(lim, 4) : "-",
+                ShaftResultChapter.SafetyFactor(s).Replace('–', '-'), u.TwistRate.Format(s.MaxTwistRate, 4), s.Check == "ok" ? "ok" : "!! " + s.Check.ToUpperInvariant()]);
         }
         Table(w, sg);
         w.WriteLine();
@@ -110,7 +121,7 @@ internal sealed class ShaftCommand : ICommand
         {
             w.WriteLine("springs");
             var sp = new List<string[]> { new[] { "spring", "between", $"torque [{u.Torque.Symbol}]", "wind-up [deg]" } };
-            foreach (var s in r.Springs) sp.Add([s.Label, $"{s.StationA}-{s.StationB}", u.Torque.Format(s.Torque), F(Deg(s.Windup), "F4")]);
+            foreach (var s in r.Springs) sp.Add([s.Label, $"{s.StationA}-{s.StationB}", u.Torque.Format(s.Torque), NumberText.Fixed(Deg(s.Windup), 4)]);
             Table(w, sp);
             w.WriteLine();
         }
@@ -125,20 +136,17 @@ internal sealed class ShaftCommand : ICommand
         }
         w.WriteLine();
 
-        if (r.GoverningSegment is { } g)
-            w.WriteLine($"governing segment (shear): {g.Label}: {u.Stress.Format(g.MaxShear, "G4")} {u.Stress.Symbol} against {g.Material.LimitBasis} " +
-                        $"{u.Stress.Format(g.ShearLimit!.Value, "G4")} {u.Stress.Symbol}, factor of safety {F(g.SafetyFactor!.Value, "F2")} " +
-                        $"(margin {F((g.SafetyFactor.Value - 1) * 100, "F0")} %){(g.ExceedsShearLimit ? "  !! EXCEEDED" : "")}");
-        else w.WriteLine("governing segment (shear): none (no loaded segment has a shear limit; give the materials 'allowableShear' or 'yield')");
-        if (r.GoverningTwistSegment is { } t)
+        // the same sentences as the report's summary
+        w.WriteLine(ShaftResultChapter.Governing(doc, r));
+        w.WriteLine(ShaftResultChapter.TwistRate(doc, r));
+        w.WriteLine(ShaftResultChapter.EndToEnd(r));
+        foreach (var alarm in ShaftResultChapter.Alarms(r)) w.WriteLine("!! " + alarm);
+        if (r.Warnings.Count > 0)
         {
-            string lim = r.TwistRateLimit is { } l
-                ? $" against limit {F(Deg(l), "G4")} deg/m (margin {F((l / t.MaxTwistRate - 1) * 100, "F0")} %){(t.ExceedsTwistRateLimit ? "  !! EXCEEDED" : "")}"
-                : " (no twist limit given)";
-            w.WriteLine($"largest twist rate: {t.Label}: {F(t.MaxTwistRateDegPerMetre, "G4")} deg/m{lim}");
+            w.WriteLine();
+            w.WriteLine("warnings");
+            foreach (var x in r.Warnings) w.WriteLine($"  warning [{x.Code}]: {x.Message}");
         }
-        w.WriteLine($"end-to-end twist: {F(Deg(r.EndToEndTwist), "F4")} deg ({F(r.EndToEndTwist, "G4")} rad)");
-        if (r.AnyLimitExceeded) w.WriteLine("!! at least one segment exceeds its limit (see 'check' above)");
         w.WriteLine();
         if (r.Bending is { } bending)
         {
@@ -148,6 +156,8 @@ internal sealed class ShaftCommand : ICommand
         ShaftWarpingText.Write(w, doc, r);
         w.WriteLine(Caution);
     }
+
+    private static double Deg(double rad) => rad * 180 / Math.PI;
 
     internal static void Table(TextWriter w, List<string[]> rows)
     {

@@ -18,11 +18,12 @@ internal sealed class SweepCommand : ICommand
     public string Summary => "vary one template parameter and tabulate J, peak shear and J relative to a round";
 
     public string Usage =>
-        "sectiontwist sweep SPEC --vary KEY=FROM:TO:STEPS [--unit U] [--accuracy REL] [--json|--csv]\n" +
+        "sectiontwist sweep SPEC --vary KEY=FROM:TO:STEPS [--unit U] [--units SYSTEM] [--accuracy REL] [--json|--csv]\n" +
         "  e.g. sectiontwist sweep keyed:d=40,n=2 --vary t1=3:8:6\n" +
         "  FROM and TO may carry a unit (t1=3mm:8mm:6); STEPS >= 1 evenly spaced values, ends included.\n" +
         "  Prints per step: J, peak shear per unit torque, and J / (pi D^4 / 32) with D the template's outer size.\n" +
-        "  --json / --csv print SI units (m, m^4, 1/m^3); the table uses the spec's unit.";
+        "  --json / --csv print SI units (m, m^4, 1/m^3) for other programs, with the warnings of each step;\n" +
+        "  the table uses the spec's unit system, or --units SI-mm, SI-m or US.";
 
     private sealed record Step(string ValueText, double Value, string Spec, Geometry.Profile Profile, double OuterSize);
 
@@ -30,32 +31,25 @@ internal sealed class SweepCommand : ICommand
     {
         string vary = args.Option("vary") ?? throw new UsageException("--vary KEY=FROM:TO:STEPS is required");
         string? unitText = args.Option("unit");
-        double? accuracy = args.Double("accuracy");
+        double? accuracy = AccuracyOption.Read(args);
+        var units = args.Option("units") is { } us ? UnitSystem.Parse(us) : null;
         bool json = args.Flag("json"), csv = args.Flag("csv");
         args.EnsureAllUsed();
         if (json && csv) throw new UsageException("choose one of --json and --csv");
         if (args.Positional.Count != 1) throw new UsageException("give exactly one template spec, e.g. keyed:d=40,n=2 (quote it if it has spaces)");
-        if (accuracy is { } acc && !(acc > 0 && acc < 0.5)) throw new UsageException($"--accuracy {acc}: use a relative accuracy between 0 and 0.5, e.g. 1e-3");
         LengthUnit? unit = unitText is null ? null : LengthUnit.Parse(unitText);
         var steps = BuildSteps(args.Positional[0], vary, unit);
 
         var options = context.Analysis(accuracy);
         var results = new SectionResult[steps.Count];
         int done = 0;
-        object gate = new();
-        void Report()
-        {
-            if (!context.IsTerminal) return;
-            lock (gate) context.Err.Write($"\rsweep: {done}/{steps.Count} steps done");
-        }
-        Report();
+        using var progress = new ProgressLine(context, $"sweep over {steps.Count} steps");
         try
         {
             Parallel.For(0, steps.Count, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount, CancellationToken = context.Cancellation }, i =>
             {
                 results[i] = SectionAnalyzer.Analyze(steps[i].Profile, options, context.Cancellation);
-                Interlocked.Increment(ref done);
-                Report();
+                progress.Report((double)Interlocked.Increment(ref done) / steps.Count, $"{done} of {steps.Count} done");
             });
         }
         catch (AggregateException e)
@@ -65,16 +59,13 @@ internal sealed class SweepCommand : ICommand
                         ?? e.InnerExceptions.FirstOrDefault(x => x is OperationCanceledException) ?? e.InnerExceptions[0];
             System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(first).Throw();
         }
-        finally
-        {
-            if (context.IsTerminal) context.Err.WriteLine();
-        }
+        progress.Clear();
 
         string key = vary[..vary.IndexOf('=', StringComparison.Ordinal)].Trim();
         var info = ProfileTemplates.Find(TemplateSpec.Parse(args.Positional[0]).Name)!;
         if (json) WriteJson(context.Out, args.Positional[0], key, info, steps, results);
         else if (csv) WriteCsv(context.Out, key, steps, results);
-        else WriteTable(context.Out, args.Positional[0], key, info, steps, results);
+        else WriteTable(context.Out, args.Positional[0], key, info, steps, results, units ?? UnitSystem.For(steps[0].Profile.Unit));
         return 0;
     }
 
@@ -123,17 +114,15 @@ internal sealed class SweepCommand : ICommand
 
     private static double RelativeToRound(SectionResult r, double outer) => r.TorsionConstant / (Math.PI * Math.Pow(outer, 4) / 32);
 
-    private static void WriteTable(TextWriter w, string spec, string key, TemplateInfo info, List<Step> steps, SectionResult[] results)
+    private static void WriteTable(TextWriter w, string spec, string key, TemplateInfo info, List<Step> steps, SectionResult[] results, UnitSystem u)
     {
-        var u = steps[0].Profile.Unit;
-        string Inv(double v, string f) => v.ToString(f, CultureInfo.InvariantCulture);
-        w.WriteLine($"sweep of {spec} over {key}; J_round = pi D^4 / 32 with {info.OuterSize}");
-        w.WriteLine($"{key,12}  {"J [" + u.Symbol + "^4]",14}  {"tau/T [1/" + u.Symbol + "^3]",16}  {"J/J_round",9}  {"err(J)",8}");
+        w.WriteLine($"sweep of {spec} over {key}; J_round = pi D^4 / 32 with {info.OuterSize}; units {u.Name}");
+        w.WriteLine($"{key,12}  {"J [" + u.SecondMoment.Symbol + "]",14}  {"tau/T [" + u.ShearPerTorque.Symbol + "]",22}  {"J/J_round",9}  {"err(J)",8}");
         for (int i = 0; i < steps.Count; i++)
         {
             var r = results[i];
-            double j = r.TorsionConstant / Math.Pow(u.Metres, 4), tau = r.MaxShearPerTorque * Math.Pow(u.Metres, 3);
-            w.WriteLine($"{steps[i].ValueText,12}  {Inv(j, "G6"),14}  {Inv(tau, "G6"),16}  {Inv(RelativeToRound(r, steps[i].OuterSize), "F4"),9}  {Inv(r.EstimatedRelativeError.TorsionConstant, "0.0E+0"),8}");
+            string tau = double.IsPositiveInfinity(r.EstimatedRelativeError.MaxShear) ? "unbounded" : u.ShearPerTorque.Format(r.MaxShearPerTorque, 6);
+            w.WriteLine($"{steps[i].ValueText,12}  {u.SecondMoment.Format(r.TorsionConstant, 6),14}  {tau,22}  {NumberText.Fixed(RelativeToRound(r, steps[i].OuterSize), 4),9}  {NumberText.Exponent(r.EstimatedRelativeError.TorsionConstant),8}");
         }
         // One line per kind of warning: the first message and how many steps carry it.
         foreach (var g in results.SelectMany((r, i) => r.Warnings.Select(x => (Step: i, x.Code, x.Message))).GroupBy(x => x.Code))
@@ -142,7 +131,7 @@ internal sealed class SweepCommand : ICommand
 
     private static void WriteCsv(TextWriter w, string key, List<Step> steps, SectionResult[] results)
     {
-        w.WriteLine($"{key},outerSize_m,torsionConstant_m4,maxShearPerTorque_per_m3,relativeToRound,estimatedRelativeErrorJ,spec");
+        w.WriteLine($"{key},outerSize_m,torsionConstant_m4,maxShearPerTorque_per_m3,relativeToRound,estimatedRelativeErrorJ,spec,peakShearUnbounded,warnings");
         for (int i = 0; i < steps.Count; i++)
         {
             var r = results[i];
@@ -150,9 +139,12 @@ internal sealed class SweepCommand : ICommand
                 steps[i].ValueText, steps[i].OuterSize.ToString("R", CultureInfo.InvariantCulture), r.TorsionConstant.ToString("R", CultureInfo.InvariantCulture),
                 r.MaxShearPerTorque.ToString("R", CultureInfo.InvariantCulture), RelativeToRound(r, steps[i].OuterSize).ToString("R", CultureInfo.InvariantCulture),
                 r.EstimatedRelativeError.TorsionConstant.ToString("R", CultureInfo.InvariantCulture),
-                "\"" + steps[i].Spec.Replace("\"", "\"\"", StringComparison.Ordinal) + "\""));
+                Quote(steps[i].Spec), double.IsPositiveInfinity(r.EstimatedRelativeError.MaxShear) ? "yes" : "no",
+                Quote(string.Join("; ", r.Warnings.Select(x => $"[{x.Code}] {x.Message}")))));
         }
     }
+
+    private static string Quote(string s) => "\"" + s.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"";
 
     private static void WriteJson(TextWriter w, string spec, string key, TemplateInfo info, List<Step> steps, SectionResult[] results)
     {

@@ -25,13 +25,16 @@ internal sealed class TemplatesCommand : ICommand
         if (args.Positional.Count == 1)
         {
             var one = ProfileTemplates.Find(args.Positional[0]) ?? throw new SectionTwistException("unknown-template",
-                $"unknown template '{args.Positional[0]}'; known templates: {string.Join(", ", ProfileTemplates.All.Select(t => t.Name))}");
+                $"unknown template '{args.Positional[0]}'{Suggest.DidYouMean(args.Positional[0], ProfileTemplates.All.SelectMany(t => t.Aliases.Prepend(t.Name)))}; known templates: {string.Join(", ", ProfileTemplates.All.Select(t => t.Name))}");
             list = [one];
         }
         if (json) WriteJson(list, context.Out);
         else WriteText(list, context.Out);
         return 0;
     }
+
+    /// <summary>Widest default text kept in its column; a longer one moves the description to the next line.</summary>
+    private const int DefaultColumn = 26;
 
     private static void WriteText(IReadOnlyList<TemplateInfo> list, TextWriter w)
     {
@@ -40,11 +43,28 @@ internal sealed class TemplatesCommand : ICommand
             w.WriteLine($"{t.Name}{(t.Aliases.Count > 0 ? " (also " + string.Join(", ", t.Aliases) + ")" : "")}: {t.Summary}");
             w.WriteLine($"  example: {t.Example}");
             w.WriteLine($"  outer size for J/J_round: {t.OuterSize}");
-            foreach (var p in t.Parameters)
-                w.WriteLine($"  {p.Key,-7} {p.UnitHint,-12} {(p.IsRequired ? "required" : "default " + p.Default),-26} {p.Description}");
+            if (t.Parameters.Count == 0) { w.WriteLine(); continue; }
+            // columns as wide as this template's entries, so no value runs into the description
+            var rows = t.Parameters.Select(p => (p.Key, Kind: p.UnitHint, Default: p.IsRequired ? "required" : "default " + p.Default, p.Description)).ToList();
+            int kw = Math.Max(3, rows.Max(r => r.Key.Length)), uw = Math.Max(4, rows.Max(r => r.Kind.Length));
+            int dw = Math.Min(DefaultColumn, Math.Max(7, rows.Max(r => r.Default.Length)));
+            string indent = new(' ', 2 + kw + 2 + uw + 2 + dw + 2);
+            w.WriteLine($"  {"key".PadRight(kw)}  {"kind".PadRight(uw)}  {"default".PadRight(dw)}  meaning");
+            foreach (var (key, kind, def, description) in rows)
+            {
+                if (def.Length <= dw) w.WriteLine($"  {key.PadRight(kw)}  {kind.PadRight(uw)}  {def.PadRight(dw)}  {description}");
+                else
+                {
+                    w.WriteLine($"  {key.PadRight(kw)}  {kind.PadRight(uw)}  {def}");
+                    w.WriteLine(indent + description);
+                }
+            }
             w.WriteLine();
         }
         w.WriteLine("Lengths: a bare number is in mm unless --unit says otherwise; write units per value: d=40mm, B=3in, t=0.25in.");
+        w.WriteLine("Angles are degrees (30 or 30deg) unless written with rad (0.5rad). Kind 'deg/deg/...' is a list of angles, one per");
+        w.WriteLine("feature, separated by '/': keyed:d=40,n=2,at=90/270 puts two keyseats at 90 and 270 deg from +x.");
+        w.WriteLine("A kind 'a|b' takes one of the words listed (series=light). Counts are whole numbers (n=2).");
     }
 
     private static void WriteJson(IReadOnlyList<TemplateInfo> list, TextWriter w)

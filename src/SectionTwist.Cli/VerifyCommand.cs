@@ -1,7 +1,7 @@
-using System.Globalization;
 using System.Text;
 using System.Text.Json;
 using SectionTwist.Torsion;
+using SectionTwist.Units;
 using SectionTwist.Verification;
 
 namespace SectionTwist.Cli;
@@ -20,11 +20,12 @@ internal sealed class VerifyCommand : ICommand
 
     public int Run(Args args, CliContext ctx)
     {
-        double accuracy = args.Double("accuracy") ?? 1e-4;
+        double accuracy = AccuracyOption.Read(args) ?? 1e-4;
         bool json = args.Flag("json");
         args.EnsureAllUsed();
-        if (!(accuracy > 0 && accuracy < 0.5)) throw new UsageException("--accuracy must lie between 0 and 0.5, e.g. 1e-4");
-        var outcomes = VerificationSuite.Run(ctx.Analysis(accuracy), ctx.Cancellation);
+        IReadOnlyList<VerificationOutcome> outcomes;
+        using (var progress = new ProgressLine(ctx, "verify"))
+            outcomes = VerificationSuite.RunReporting(ctx.Analysis(accuracy), new Sink(f => progress.Report(f, "cases")), ctx.Cancellation);
         int failed = outcomes.Count(o => !o.Passed);
         if (json) ctx.Out.WriteLine(WriteJson(outcomes, accuracy));
         else WriteTable(ctx.Out, outcomes, failed);
@@ -33,11 +34,17 @@ internal sealed class VerifyCommand : ICommand
 
     private static void WriteTable(TextWriter w, IReadOnlyList<VerificationOutcome> outcomes, int failed)
     {
-        string G(double v) => v.ToString("G6", CultureInfo.InvariantCulture);
+        string G(double v) => NumberText.Format(v, 6);
         w.WriteLine($"{"case",-40} {"computed",-13} {"reference",-13} {"rel. error",-10} {"tol.",-8} result  source");
         foreach (var o in outcomes)
-            w.WriteLine($"{o.Case.Name,-40} {G(o.Computed),-13} {G(o.Case.Reference),-13} {o.RelativeError.ToString("0.0E+0", CultureInfo.InvariantCulture),-10} {o.Tolerance.ToString("0E+0", CultureInfo.InvariantCulture),-8} {(o.Passed ? "pass" : "FAIL"),-7} {o.Case.Source}");
+            w.WriteLine($"{o.Case.Name,-40} {G(o.Computed),-13} {G(o.Case.Reference),-13} {NumberText.Exponent(o.RelativeError, 2),-10} {NumberText.Exponent(o.Tolerance, 1),-8} {(o.Passed ? "pass" : "FAIL"),-7} {o.Case.Source}");
         w.WriteLine(failed == 0 ? $"all {outcomes.Count} verification cases passed" : $"{failed} of {outcomes.Count} verification cases FAILED");
+    }
+
+    /// <summary>Reports on the calling thread.</summary>
+    private sealed class Sink(Action<double> report) : IProgress<double>
+    {
+        public void Report(double value) => report(value);
     }
 
     private static string WriteJson(IReadOnlyList<VerificationOutcome> outcomes, double accuracy)

@@ -2,6 +2,7 @@ using SectionTwist.Rendering.Drawing;
 using SectionTwist.Rendering.Report;
 using SectionTwist.Rendering.Section;
 using SectionTwist.Torsion;
+using SectionTwist.Units;
 using SectionTwist.Verification;
 
 namespace SectionTwist.Rendering.Adapters;
@@ -19,28 +20,28 @@ public static class ReportAdapters
     }
 
     /// <summary>
-    /// A chapter for one solved section: its property table (in the profile's display unit) and, when
-    /// <paramref name="picture"/> is given, the contour picture.
+    /// A chapter for one solved section: its property table in <paramref name="units"/> (null: the standard system of the
+    /// profile's length unit) and, when <paramref name="picture"/> is given, the contour picture. A sharp re-entrant corner
+    /// shows as an unbounded peak shear, never as a plain number.
     /// </summary>
-    public static ReportChapter SectionChapter(string heading, SectionResult result, ReportFigure? picture = null)
+    public static ReportChapter SectionChapter(string heading, SectionResult result, ReportFigure? picture = null, UnitSystem? units = null)
     {
         ArgumentNullException.ThrowIfNull(result);
-        var u = result.LengthUnit;
-        string s = u.Symbol;
-        double L(double m, int power) => m / Math.Pow(u.Metres, power);
+        var u = units ?? UnitSystem.For(result.LengthUnit);
         var p = result.Properties;
+        bool unbounded = double.IsPositiveInfinity(result.EstimatedRelativeError.MaxShear);
         var rows = new List<IReadOnlyList<string>>
         {
-            Row("area A", L(p.Area, 2), $"{s}²"),
-            Row("polar moment Ip (about the centroid)", L(p.PolarMoment, 4), $"{s}⁴"),
-            Row("torsion constant J", L(result.TorsionConstant, 4), $"{s}⁴"),
-            Row("J / Ip", result.TorsionConstant / p.PolarMoment, "-"),
-            Row("peak shear per unit torque", result.MaxShearPerTorque * 1e-3, "MPa per kN·m"),
-            Row("torsional section modulus T/τmax", L(result.TorsionalModulus, 3), $"{s}³"),
-            Text("peak location (x, y)", $"{NiceScale.Sig(L(result.MaxShearLocation.X, 1), 5)}, {NiceScale.Sig(L(result.MaxShearLocation.Y, 1), 5)}", s),
-            Row("estimated rel. error of J", result.EstimatedRelativeError.TorsionConstant, "-"),
-            Row("estimated rel. error of the peak", result.EstimatedRelativeError.MaxShear, "-"),
-            Text("mesh", $"{result.Mesh.Elements} elements, {result.Mesh.Nodes} nodes, min. angle {NiceScale.Sig(result.Mesh.MinAngleDeg, 3)}°", ""),
+            Row("area A", u.Area.Format(p.Area), u.Area.Symbol),
+            Row("polar moment Ip (about the centroid)", u.SecondMoment.Format(p.PolarMoment), u.SecondMoment.Symbol),
+            Row("torsion constant J", u.SecondMoment.Format(result.TorsionConstant), u.SecondMoment.Symbol),
+            Row("J / Ip", NumberText.Format(result.TorsionConstant / p.PolarMoment, 5), "-"),
+            Row("peak shear per unit torque", unbounded ? $"unbounded (sharp corner; {u.ShearPerTorque.Format(result.MaxShearPerTorque)} on this mesh)" : u.ShearPerTorque.Format(result.MaxShearPerTorque), u.ShearPerTorque.Symbol),
+            Row("torsional section modulus T/τmax", unbounded ? "0 (unbounded peak)" : u.SectionModulus.Format(result.TorsionalModulus), u.SectionModulus.Symbol),
+            Row("peak location (x, y)", $"{u.Length.Format(result.MaxShearLocation.X)}, {u.Length.Format(result.MaxShearLocation.Y)}", u.Length.Symbol),
+            Row("estimated rel. error of J", NumberText.Exponent(result.EstimatedRelativeError.TorsionConstant), "-"),
+            Row("estimated rel. error of the peak", unbounded ? "unbounded" : NumberText.Exponent(result.EstimatedRelativeError.MaxShear), "-"),
+            Row("mesh", $"{result.Mesh.Elements} elements, {result.Mesh.Nodes} nodes, min. angle {NumberText.Format(result.Mesh.MinAngleDeg, 3)}°", ""),
         };
         return new ReportChapter(heading)
         {
@@ -49,8 +50,7 @@ public static class ReportAdapters
             Paragraphs = result.Warnings.Select(w => $"Warning ({w.Code}): {w.Message}").ToList(),
         };
 
-        static IReadOnlyList<string> Row(string name, double v, string unit) => [name, NiceScale.Sig(v, 5), unit];
-        static IReadOnlyList<string> Text(string name, string v, string unit) => [name, v, unit];
+        static IReadOnlyList<string> Row(string name, string v, string unit) => [name, v, unit];
     }
 
     /// <summary>The contour picture of a section as a report figure (PNG), also usable beside the report.</summary>

@@ -71,6 +71,7 @@ public static class ShaftDiagramAdapter
                 ShearStart = Math.Abs(r.TorqueAtFrom) * kFrom,
                 ShearEnd = Math.Abs(r.TorqueAtTo) * kTo,
                 Allowable = r.ShearLimit,
+                PeakShearUnbounded = r.PeakShearUnbounded,
             });
         }
         var spread = model.Loads.OfType<DistributedTorque>().Select(t => new DiagramDistributedTorque(position[t.From], position[t.To],

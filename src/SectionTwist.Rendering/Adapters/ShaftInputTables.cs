@@ -1,13 +1,13 @@
-using System.Globalization;
-using SectionTwist.Rendering.Drawing;
 using SectionTwist.Rendering.Report;
 using SectionTwist.Shaft;
+using SectionTwist.Units;
 
 namespace SectionTwist.Rendering.Adapters;
 
 /// <summary>
-/// The input tables of a shaft report, in the units the shaft file asks for (its <c>units</c> block): stations, segments
-/// with their sections, materials, loads, supports and springs.
+/// The input tables of a shaft report in the document's display units (<see cref="ShaftDocument.Units"/>: the file's own
+/// units, or the system chosen with <c>--units</c>): stations, segments with their sections, materials, loads, supports
+/// and springs.
 /// </summary>
 internal static class ShaftInputTables
 {
@@ -24,16 +24,17 @@ internal static class ShaftInputTables
             Supports(m, result, u),
         };
         if (m.Springs.Count > 0)
-            tables.Add(new ReportTable("Springs (couplings) between stations", ["spring", "between", $"stiffness, {u.Torque.Symbol}/rad"],
-                m.Springs.Select(s => Row(s.Label, $"{s.StationA} – {s.StationB}", u.Torque.Format(s.Stiffness))).ToList()));
+            tables.Add(new ReportTable("Springs (couplings) between stations", ["spring", "between", $"stiffness, {u.RotationalStiffness.Symbol}"],
+                m.Springs.Select(s => Row(s.Label, $"{s.StationA} – {s.StationB}", u.RotationalStiffness.Format(s.Stiffness))).ToList()));
         return tables;
     }
 
-    internal static string F(double v, string format = "G5") => v.ToString(format, CultureInfo.InvariantCulture);
+    /// <summary>A plain number in the house style (.NET-like format: <c>G4</c>, <c>F2</c>).</summary>
+    internal static string F(double v, string format = "G5") => NumberText.Styled(v, format);
 
     internal static IReadOnlyList<string> Row(params string[] cells) => cells;
 
-    private static ReportTable Stations(ShaftModel m, ShaftResult r, ShaftDisplayUnits u)
+    private static ReportTable Stations(ShaftModel m, ShaftResult r, UnitSystem u)
     {
         var fixedSet = m.FixedStations.ToHashSet(StringComparer.Ordinal);
         return new ReportTable("Stations (in axis order)", ["station", $"position, {u.Length.Symbol}", "held", "note"],
@@ -41,12 +42,8 @@ internal static class ShaftInputTables
                 s.Name == r.ReferenceStation ? "reference: rotations are measured from here" : "")).ToList());
     }
 
-    private static ReportTable Segments(ShaftModel m, ShaftResult r, ShaftDisplayUnits u)
+    private static ReportTable Segments(ShaftModel m, ShaftResult r, UnitSystem u)
     {
-        string l = u.Length.Symbol;
-        double l4 = Math.Pow(u.Length.SiPerUnit, 4);
-        // peak shear per unit torque shown as stress unit per torque unit (e.g. MPa per N*m)
-        double perTorque = u.Torque.SiPerUnit / u.Stress.SiPerUnit;
         var rows = new List<IReadOnlyList<string>>();
         foreach (var s in r.Segments)
         {
@@ -54,24 +51,24 @@ internal static class ShaftInputTables
             string j, k, outer;
             if (seg.Section is { } sec)
             {
-                j = NiceScale.Sig(sec.TorsionConstant / l4, 5);
-                k = NiceScale.Sig(sec.ShearPerTorque * perTorque, 5);
+                j = u.SecondMoment.Format(sec.TorsionConstant);
+                k = sec.PeakShearUnbounded ? $"unbounded (sharp corner; {u.ShearPerTorque.Format(sec.ShearPerTorque)} on the mesh)" : u.ShearPerTorque.Format(sec.ShearPerTorque);
                 outer = sec.OuterDiameter is { } d ? u.Length.Format(d) : "–";
             }
             else
             {
                 var t = seg.Taper!;
-                j = $"{NiceScale.Sig(Math.PI * Math.Pow(t.StartDiameter, 4) / 32 / l4, 5)} … {NiceScale.Sig(Math.PI * Math.Pow(t.EndDiameter, 4) / 32 / l4, 5)}";
-                k = $"{NiceScale.Sig(16 / (Math.PI * Math.Pow(t.StartDiameter, 3)) * perTorque, 5)} … {NiceScale.Sig(16 / (Math.PI * Math.Pow(t.EndDiameter, 3)) * perTorque, 5)}";
+                j = $"{u.SecondMoment.Format(Math.PI * Math.Pow(t.StartDiameter, 4) / 32)} … {u.SecondMoment.Format(Math.PI * Math.Pow(t.EndDiameter, 4) / 32)}";
+                k = $"{u.ShearPerTorque.Format(16 / (Math.PI * Math.Pow(t.StartDiameter, 3)))} … {u.ShearPerTorque.Format(16 / (Math.PI * Math.Pow(t.EndDiameter, 3)))}";
                 outer = $"{u.Length.Format(t.StartDiameter)} … {u.Length.Format(t.EndDiameter)}";
             }
             rows.Add(Row(s.Label, $"{s.From} – {s.To}", u.Length.Format(s.Length), s.Section, outer, j, k, s.Material.Name));
         }
-        return new ReportTable("Segments and their sections", ["segment", "stations", $"length, {l}", "section", $"outer size, {l}",
-            $"torsion constant J, {l}⁴", $"peak shear per unit torque, {u.Stress.Symbol} per {u.Torque.Symbol}", "material"], rows);
+        return new ReportTable("Segments and their sections", ["segment", "stations", $"length, {u.Length.Symbol}", "section", $"outer size, {u.Length.Symbol}",
+            $"torsion constant J, {u.SecondMoment.Symbol}", $"peak shear per unit torque, {u.ShearPerTorque.Symbol}", "material"], rows);
     }
 
-    private static ReportTable Materials(ShaftModel m, ShaftDisplayUnits u)
+    private static ReportTable Materials(ShaftModel m, UnitSystem u)
     {
         var materials = m.Segments.Select(s => s.Material).Distinct().ToList();
         return new ReportTable("Materials", ["material", $"shear modulus G, {u.Modulus.Symbol}", $"allowable shear, {u.Stress.Symbol}",
@@ -80,7 +77,7 @@ internal static class ShaftInputTables
                 x.ShearYield is { } y ? u.Stress.Format(y) : "–", x.LimitBasis, x.Source)).ToList());
     }
 
-    private static ReportTable Loads(ShaftModel m, ShaftResult r, ShaftDisplayUnits u)
+    private static ReportTable Loads(ShaftModel m, ShaftResult r, UnitSystem u)
     {
         var position = r.Stations.ToDictionary(s => s.Name, s => s.Position, StringComparer.Ordinal);
         var rows = new List<IReadOnlyList<string>>();
@@ -94,23 +91,23 @@ internal static class ShaftInputTables
                 case DistributedTorque d:
                     double len = Math.Abs(position[d.To] - position[d.From]);
                     rows.Add(Row(d.Description ?? "distributed torque", $"uniform over {d.From} – {d.To}", u.Torque.Format(d.TorquePerLength * len),
-                        F(d.TorquePerLength * u.Length.SiPerUnit / u.Torque.SiPerUnit)));
+                        u.TorquePerLength.Format(d.TorquePerLength)));
                     break;
             }
         }
         return new ReportTable("Applied torques (right-hand rule about the axis; power into the shaft positive)",
-            ["load", "where", $"torque, {u.Torque.Symbol}", $"per length, {u.Torque.Symbol}/{u.Length.Symbol}"], rows);
+            ["load", "where", $"torque, {u.Torque.Symbol}", $"per length, {u.TorquePerLength.Symbol}"], rows);
     }
 
-    private static ReportTable Supports(ShaftModel m, ShaftResult r, ShaftDisplayUnits u)
+    private static ReportTable Supports(ShaftModel m, ShaftResult r, UnitSystem u)
     {
         var rows = new List<IReadOnlyList<string>>();
         if (m.FixedStations.Count == 0)
             rows.Add(Row("supports", "free shaft: no station is held against rotation; the applied torques balance"));
         else rows.Add(Row("fixed stations", string.Join(", ", m.FixedStations)));
         rows.Add(Row("rotation reference", $"station '{r.ReferenceStation}'"));
-        rows.Add(Row("twist-rate limit", m.TwistRateLimit is { } t ? $"{F(t * 180 / Math.PI, "G4")} deg/m" : "none given"));
-        rows.Add(Row("units of the tables", $"{u.Length.Symbol}, {u.Torque.Symbol}, {u.Stress.Symbol}, {u.Modulus.Symbol} (from the file)"));
+        rows.Add(Row("twist-rate limit", m.TwistRateLimit is { } t ? u.TwistRate.Text(t, 4) : "none given"));
+        rows.Add(Row("units of the tables", $"{u.Name}: {u.Length.Symbol}, {u.Torque.Symbol}, {u.Stress.Symbol}, {u.Modulus.Symbol}, {u.TwistRate.Symbol}"));
         return new ReportTable("Supports and limits", ["item", "value"], rows);
     }
 }

@@ -19,7 +19,7 @@ public sealed class ShaftSectionCatalog
 
     /// <summary>Creates an empty catalog.</summary>
     /// <param name="options">Section analysis options; null for the defaults.</param>
-    /// <param name="notes">Receives one line per section analysed and per analysis warning; may be null.</param>
+    /// <param name="notes">Receives one line per section analysed (the warnings travel with the results); may be null.</param>
     /// <param name="cancellationToken">Stops the reading and analysis of the sections.</param>
     public ShaftSectionCatalog(AnalysisOptions? options = null, Action<string>? notes = null, CancellationToken cancellationToken = default)
     {
@@ -27,6 +27,9 @@ public sealed class ShaftSectionCatalog
         _notes = notes;
         _ct = cancellationToken;
     }
+
+    /// <summary>Receives the progress of each section analysis with the section's name (for a progress display); may be null.</summary>
+    public Action<string, AnalysisProgress>? Progress { get; init; }
 
     /// <summary>The sections analysed so far, in the order the shaft file's segments first used them.</summary>
     public IReadOnlyList<AnalysedSection> Sections => _sections;
@@ -38,11 +41,12 @@ public sealed class ShaftSectionCatalog
     public SectionStiffness Resolve(SectionSource source)
     {
         ArgumentNullException.ThrowIfNull(source);
-        var (r, templateOuter) = ShaftSections.Analyze(source, _options, _notes, _ct);
+        var progress = Progress is { } report ? new ProgressSink(p => report(source.Name, p)) : null;
+        var (r, templateOuter) = ShaftSections.Analyze(source, _options, _notes, _ct, progress);
         // a template knows its outer size; a drawing's is the larger side of its bounds
         double outer = templateOuter ?? Math.Max(r.Profile.Bounds.Width, r.Profile.Bounds.Height);
         _sections.Add(new AnalysedSection(source, r, outer, LargestHole(r.Profile)));
-        return ShaftSections.Stiffness(r, source.TemplateSpec ?? Path.GetFileName(source.DxfPath), outer) with
+        return ShaftSections.Stiffness(source, r, outer) with
         {
             Bending = SectionTwist.Bending.BendingSection.FromSection(r, templateOuter),
             PolarMoment = r.PolarMoment,
@@ -56,6 +60,12 @@ public sealed class ShaftSectionCatalog
     public AnalysedSection? Find(SectionStiffness? section) =>
         section is null ? null : _sections.FirstOrDefault(a => a.Result.TorsionConstant == section.TorsionConstant
                                                                 && a.Result.MaxShearPerTorque == section.ShearPerTorque);
+
+    /// <summary>Reports on the calling thread, in order.</summary>
+    private sealed class ProgressSink(Action<AnalysisProgress> report) : IProgress<AnalysisProgress>
+    {
+        public void Report(AnalysisProgress value) => report(value);
+    }
 
     /// <summary>Largest extent of the largest hole of a single-region profile (a bore), m; 0 for none.</summary>
     private static double LargestHole(Profile p) =>

@@ -20,7 +20,11 @@ internal static class Fonts
     public static SKTypeface Typeface => Lazy.Value;
 
     /// <summary>A font of the bundled typeface at <paramref name="size"/> pixels.</summary>
-    public static SKFont Font(float size) => new(Typeface, size) { Subpixel = true, Edging = SKFontEdging.Antialias };
+    /// <remarks>
+    /// Slight hinting snaps horizontal strokes to whole pixels, so thin bars such as those of '=' stay one pixel thick
+    /// instead of smearing over two rows (which made the '=' look bold).
+    /// </remarks>
+    public static SKFont Font(float size) => new(Typeface, size) { Subpixel = true, Edging = SKFontEdging.Antialias, Hinting = SKFontHinting.Slight };
 
     private static SKTypeface Load()
     {

@@ -25,12 +25,12 @@ internal static class Ink
         return f.MeasureText(s);
     }
 
-    /// <summary>Draws text with its baseline at y.</summary>
+    /// <summary>Draws text with its baseline at y (rounded to a whole pixel, so hinted strokes land on the pixel grid).</summary>
     public static void Label(SKCanvas c, string s, float x, float y, float size, SKColor color, SKTextAlign align = SKTextAlign.Left)
     {
         using var f = Fonts.Font(size);
         using var p = new SKPaint { Color = color, IsAntialias = true };
-        c.DrawText(s, x, y, align, f, p);
+        c.DrawText(s, x, MathF.Round(y), align, f, p);
     }
 
     /// <summary>Draws text rotated 90 degrees counter-clockwise, centred on (x, y).</summary>

@@ -58,16 +58,6 @@ internal static class NiceScale
         return v.ToString("F" + decimals.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
     }
 
-    /// <summary>Formats a value to about <paramref name="digits"/> significant digits, invariant culture.</summary>
-    public static string Sig(double v, int digits = 3)
-    {
-        if (v == 0 || !double.IsFinite(v)) return v == 0 ? "0" : v.ToString(CultureInfo.InvariantCulture);
-        int mag = (int)Math.Floor(Math.Log10(Math.Abs(v)));
-        if (mag >= 6 || mag < -4) return v.ToString("E" + (digits - 1).ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
-        int decimals = Math.Max(0, digits - 1 - mag);
-        string s = Math.Round(v, decimals).ToString("F" + decimals.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
-        // trailing zeros after the point carry no information in a label
-        if (s.Contains('.', StringComparison.Ordinal)) s = s.TrimEnd('0').TrimEnd('.');
-        return s;
-    }
+    /// <summary>A value to <paramref name="digits"/> significant digits in the house style (<see cref="Units.NumberText.Format"/>).</summary>
+    public static string Sig(double v, int digits = 3) => Units.NumberText.Format(v, digits);
 }

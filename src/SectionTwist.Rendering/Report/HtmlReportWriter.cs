@@ -127,13 +127,13 @@ public static class HtmlReportWriter
     {
         h.Append("<section id=\"verification\">\n<h2>Verification</h2>\n");
         if (m.Verification.Count == 0) { h.Append("<p>No verification cases were run for this report.</p>\n</section>\n"); return; }
-        static string G(double v) => v.ToString("G6", CultureInfo.InvariantCulture);
+        static string G(double v) => Units.NumberText.Format(v, 6);
         var t = new ReportTable("Verification cases run on this build: computed value against the reference",
             ["case", "computed", "reference", "unit", "rel. error", "tolerance", "source", "result"],
             m.Verification.Select(v => (IReadOnlyList<string>)
             [
-                v.Name, G(v.Computed), G(v.Reference), v.Unit, v.RelativeError.ToString("0.0E+0", CultureInfo.InvariantCulture),
-                v.Tolerance.ToString("0E+0", CultureInfo.InvariantCulture), v.Source, v.Pass ? "pass" : "FAIL",
+                v.Name, G(v.Computed), G(v.Reference), v.Unit, Units.NumberText.Exponent(v.RelativeError, 2),
+                Units.NumberText.Exponent(v.Tolerance, 1), v.Source, v.Pass ? "pass" : "FAIL",
             ]).ToList())
         {
             AlertRows = m.Verification.Select((v, i) => (v, i)).Where(p => !p.v.Pass).Select(p => p.i).ToList(),

@@ -15,7 +15,8 @@ internal static class ReportText
         "the largest recovered value.",
         "The shaft is a chain of segments between stations. Each segment has the torsional stiffness 1/∫dx/(GJ); the station " +
         "rotations follow from the stiffness equations with the fixed supports as constraints, which also covers statically " +
-        "indeterminate shafts. The internal torque, the twist of each segment and the peak shear τ = |T|·(τ/T)section follow.",
+        "indeterminate shafts. From the rotations follow the internal torque T and the twist of each segment; the peak shear of a " +
+        "segment is |T| times its section's peak shear per unit torque, τmax = |T|·(τ/T).",
     ];
 
     public static readonly IReadOnlyList<string> DefaultAssumptions =

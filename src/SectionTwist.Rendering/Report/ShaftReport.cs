@@ -32,17 +32,18 @@ public static class ShaftReport
         ArgumentNullException.ThrowIfNull(result);
         ArgumentNullException.ThrowIfNull(verification);
         options ??= new ShaftReportOptions();
-        var unit = LengthUnit.TryParse(doc.Units.Length.Symbol, out var lu) ? lu : LengthUnit.Millimetre;
-        var data = ShaftDiagramAdapter.From(result, unit, sections);
+        var data = ShaftDiagramAdapter.From(result, null, sections) with { Units = doc.Units };
         byte[] png = ShaftDiagram.Render(data, ImageFormat.Png, DiagramWidth, DiagramHeight);
         var diagram = new ReportFigure("The shaft to scale, internal torque, rotation of the stations and peak shear along the axis " +
                                        "(dashed: allowable)", ImageFormat.Png, png, "shaft.png");
 
         var chapters = new List<ReportChapter> { ShaftResultChapter.Build(doc, result, diagram) };
         var pictures = new List<ReportFigure>();
-        var warnings = new List<string>();
+        // the result carries the section-analysis warnings (naming each section) and the unbounded peaks
+        var warnings = result.Warnings.Select(w => w.Message).ToList();
         if (result.Bending is { } bending)
         {
+            var unit = LengthUnit.TryParse(doc.Units.Length.Symbol, out var lu) ? lu : LengthUnit.Millimetre;
             chapters.Add(BendingChapter.Build(doc, result, unit));
             warnings.AddRange(bending.Warnings);
         }
@@ -51,19 +52,19 @@ public static class ShaftReport
             double torque = MaxTorqueOn(result, s);
             string file = $"section-{Slug(s.Name)}.png";
             string caption = torque > 0
-                ? $"Section '{s.Name}': shear stress magnitude in {doc.Units.Stress.Symbol} at the largest torque it carries, {doc.Units.Torque.Format(torque)} {doc.Units.Torque.Symbol}"
+                ? $"Section '{s.Name}': shear stress magnitude in {doc.Units.Stress.Symbol} at the largest torque it carries, {doc.Units.Torque.Text(torque)}"
                 : $"Section '{s.Name}': shear stress per unit torque";
             byte[] bytes = SectionPicture.Render(SectionPlotData.From(s.Result, $"{s.Name}: {s.Source.TemplateSpec ?? Path.GetFileName(s.Source.DxfPath)}"),
-                ImageFormat.Png, new SectionPlotOptions { Width = 760, Height = 560, Torque = torque > 0 ? torque : null });
+                ImageFormat.Png, new SectionPlotOptions { Width = 760, Height = 560, Torque = torque > 0 ? torque : null, Units = doc.Units });
             var figure = new ReportFigure(caption, ImageFormat.Png, bytes, file);
             pictures.Add(figure);
-            chapters.Add(ReportAdapters.SectionChapter($"Section '{s.Name}' ({s.Source.TemplateSpec ?? Path.GetFileName(s.Source.DxfPath)})", s.Result, figure));
-            warnings.AddRange(s.Result.Warnings.Select(w => $"section '{s.Name}': {w.Message}"));
+            // the section's own warnings are in the list above already (from the result); the chapter repeats them beside its picture
+            chapters.Add(ReportAdapters.SectionChapter($"Section '{s.Name}' ({s.Source.TemplateSpec ?? Path.GetFileName(s.Source.DxfPath)})", s.Result, figure, doc.Units));
         }
         if (WarpingChapter.Build(doc, result) is { } warping) chapters.Insert(1, warping);
         warnings.AddRange(result.WarpingWarnings);
         foreach (var seg in result.Segments.Where(x => x.ExceedsShearLimit || x.ExceedsTwistRateLimit))
-            warnings.Add($"segment '{seg.Label}': {ShaftResultChapter.Flags(seg)}");
+            warnings.Add($"segment '{seg.Label}': {seg.Check}");
 
         var model = new ReportModel
         {
@@ -85,7 +86,8 @@ public static class ShaftReport
     private const string SectionsMethod =
         "Where the shaft file gives a section as a round or a tube, J and the peak shear per unit torque are the exact formulas " +
         "J = π(D⁴ − d⁴)/32, τ/T = 16D/(π(D⁴ − d⁴)) (Timoshenko and Goodier, ch. 10); where it gives J and the shear factor directly, " +
-        "those values are used as given; template and drawing sections are analysed as described above, and each has its own chapter in this report (properties and contour picture).";
+        "those values are used as given; template and drawing sections are analysed as described above, and each has its own chapter in this report (properties and contour picture). " +
+        "A section with a sharp re-entrant corner has no finite peak shear; segments built from it are marked 'unbounded' and get no factor of safety.";
 
     /// <summary>Writes the report to <paramref name="path"/> (one self-contained HTML file).</summary>
     public static void Write(ShaftReportContent content, string path)
@@ -122,8 +124,9 @@ public static class ShaftReport
     {
         ArgumentNullException.ThrowIfNull(doc);
         ArgumentNullException.ThrowIfNull(result);
-        var lines = new List<string> { ShaftResultChapter.Governing(doc, result), ShaftResultChapter.TwistRate(result), ShaftResultChapter.EndToEnd(result) };
-        if (result.AnyLimitExceeded) lines.Add("At least one segment exceeds its limit (see the report).");
+        var lines = new List<string> { ShaftResultChapter.Governing(doc, result), ShaftResultChapter.TwistRate(doc, result), ShaftResultChapter.EndToEnd(result) };
+        lines.AddRange(ShaftResultChapter.Alarms(result));
+        lines.AddRange(result.Warnings.Select(w => "Warning: " + w.Message));
         return lines;
     }
 

@@ -1,4 +1,5 @@
 using SectionTwist.Rendering.Drawing;
+using SectionTwist.Units;
 using SkiaSharp;
 
 namespace SectionTwist.Rendering.Section;
@@ -31,11 +32,24 @@ public static class SectionPicture
     internal static SectionLayout Layout(SectionPlotData data, SectionPlotOptions options) =>
         SectionLayout.Create(data, options.Width, options.Height);
 
-    /// <summary>The stress scale: display value = per-unit-torque value (1/m^3) times this; and the unit text.</summary>
-    internal static (double Factor, string Unit, string Caption) StressScale(SectionPlotOptions options) =>
-        options.Torque is { } t
-            ? (t * 1e-6, "MPa", $"at T = {NiceScale.Sig(t / 1000.0, 4)} kN·m")
-            : (1e-3, "MPa", "per kN·m torque");
+    /// <summary>
+    /// The stress scale: display value = per-unit-torque value (1/m^3) times Factor; the unit of the colour bar and the
+    /// caption under it, in the display units (<see cref="SectionPlotOptions.Units"/>, else the section's own system).
+    /// </summary>
+    internal static (double Factor, string Unit, string Caption) StressScale(SectionPlotOptions options, LengthUnit sectionUnit)
+    {
+        var u = options.Units ?? UnitSystem.For(sectionUnit);
+        if (options.Torque is { } t) return (t / u.Stress.SiPerUnit, u.Stress.Symbol, $"at T = {u.Torque.Text(t, 4)}");
+        // "MPa per kN·m": the stress unit on the bar, "per kN·m" under it
+        string symbol = u.ShearPerTorque.Symbol;
+        int per = symbol.IndexOf(" per ", StringComparison.Ordinal);
+        return (1 / u.ShearPerTorque.SiPerUnit, per > 0 ? symbol[..per] : symbol, per > 0 ? $"{symbol[(per + 1)..]} of torque" : "per unit torque");
+    }
+
+    /// <summary>The length unit of the axes: that of <see cref="SectionPlotOptions.Units"/>, else the section's.</summary>
+    internal static LengthUnit AxisUnit(SectionPlotData data, SectionPlotOptions options) =>
+        options.Units is { } u && Math.Abs(u.Length.SiPerUnit - data.Unit.Metres) > 1e-15 * data.Unit.Metres
+            ? new LengthUnit(u.Length.Symbol, u.Length.Symbol, u.Length.SiPerUnit) : data.Unit;
 
     private static void Validate(SectionPlotOptions o)
     {
@@ -53,8 +67,20 @@ public static class SectionPicture
         var f = data.Field;
         double max = Math.Abs(data.PeakShearPerTorque);
         for (int i = 0; i < f.X.Count; i++) max = Math.Max(max, f.ShearMagnitude(i));
-        double top = max * Math.Abs(StressScale(options).Factor);
+        double top = max * Math.Abs(StressScale(options, data.Unit).Factor);
         return top > 0 ? top : 1;
+    }
+
+    /// <summary>
+    /// The colour bands: a round band width (1, 2 or 5 times a power of ten) near TopValue / Bands, and as many bands as
+    /// reach the top value, so every tick of the colour bar falls on a round number.
+    /// </summary>
+    internal static (int Bands, double Width) BandScale(double top, int requested)
+    {
+        double width = NiceScale.NiceNumber(top / requested, true);
+        int bands = Math.Max(1, (int)Math.Ceiling(top / width - 1e-9));
+        while (bands > 24) { width = NiceScale.NiceNumber(width * 1.5, false); bands = Math.Max(1, (int)Math.Ceiling(top / width - 1e-9)); }
+        return (bands, width);
     }
 
     /// <summary>Colour of band <paramref name="k"/> of <paramref name="bands"/> (band 0 at zero stress).</summary>
@@ -62,22 +88,23 @@ public static class SectionPicture
 
     private static void Draw(SKCanvas c, SectionPlotData data, SectionPlotOptions o, SectionLayout L, bool vector)
     {
-        var (factor, unit, caption) = StressScale(o);
-        double top = TopValue(data, o);
+        var (factor, unit, caption) = StressScale(o, data.Unit);
+        var (bands, width) = BandScale(TopValue(data, o), o.Bands);
+        var axisUnit = AxisUnit(data, o);
         Ink.Label(c, data.Title, L.Plot.Left, 28, 17, Ink.Text);
 
-        SectionAxes.Draw(c, L, data.Unit);
+        SectionAxes.Draw(c, L, axisUnit);
         c.Save();
         c.ClipRect(L.Plot);
-        FillBands(c, data, L, o.Bands, top, Math.Abs(factor), vector);
+        FillBands(c, data, L, bands, bands * width, Math.Abs(factor), vector);
         if (o.ShowMesh) DrawMesh(c, data, L);
         if (o.PhiLines > 0) DrawPhiLines(c, data, L, o.PhiLines);
         DrawOutline(c, data, L);
         DrawCentres(c, data, L);
         c.Restore();
-        SectionAxes.DrawScaleBar(c, L, data.Unit);
-        DrawPeak(c, data, L, Math.Abs(data.PeakShearPerTorque * factor), unit, o.Torque is null ? " per kN·m" : "");
-        DrawColourBar(c, L, o.Bands, top, unit, caption);
+        SectionAxes.DrawScaleBar(c, L, axisUnit, data.Field.Boundaries);
+        DrawPeak(c, data, L, Math.Abs(data.PeakShearPerTorque * factor), unit, o.Torque is null ? " " + caption.Replace(" of torque", "", StringComparison.Ordinal) : "");
+        DrawColourBar(c, L, bands, width, unit, caption);
     }
 
     private static void FillBands(SKCanvas c, SectionPlotData data, SectionLayout L, int bands, double top, double factor, bool vector)
@@ -225,30 +252,50 @@ public static class SectionPicture
         }
     }
 
+    /// <summary>
+    /// The peak: an arrow from a boxed label that stops short of the hot spot (so the colours there stay visible), the label
+    /// placed towards the middle of the plot. At a sharp corner the label says the peak is unbounded.
+    /// </summary>
     private static void DrawPeak(SKCanvas c, SectionPlotData data, SectionLayout L, double peak, string unit, string suffix)
     {
         var p = L.ToPixel(data.PeakLocation);
-        string text = $"τ max = {NiceScale.Sig(peak, 4)} {unit}{suffix}";
+        string text = data.PeakShearUnbounded
+            ? $"τ max unbounded (sharp corner); {NiceScale.Sig(peak, 3)} {unit}{suffix} on this mesh"
+            : $"τ max = {NiceScale.Sig(peak, 4)} {unit}{suffix}";
         float tw = Ink.Width(text, 13);
-        // put the label towards the middle of the plot so it stays inside
         bool leftSide = p.X > L.Plot.MidX;
         bool below = p.Y < L.Plot.MidY;
-        float lx = leftSide ? p.X - 18 - tw : p.X + 18;
-        float ly = below ? p.Y + 30 : p.Y - 20;
+        float lx = leftSide ? p.X - 40 - tw : p.X + 40;
+        float ly = below ? p.Y + 48 : p.Y - 36;
         lx = Math.Clamp(lx, L.Plot.Left + 4, Math.Max(L.Plot.Left + 4, L.Plot.Right - tw - 4));
         ly = Math.Clamp(ly, L.Plot.Top + 16, L.Plot.Bottom - 6);
-        using (var lead = Ink.Stroke(Ink.Alert, 1.5f))
-            c.DrawLine(p.X, p.Y, leftSide ? lx + tw : lx, ly - 4, lead);
-        using (var ring = Ink.Fill(SKColors.White)) c.DrawCircle(p, 8.5f, ring);
-        using (var dot = Ink.Fill(Ink.Alert)) c.DrawCircle(p, 6f, dot);
-        Ink.BoxedLabel(c, text, lx, ly, 13, Ink.Text);
+        // the arrow runs from the label's near corner to 7 px before the spot
+        var from = new SKPoint(leftSide ? lx + tw + 2 : lx - 2, below ? ly - 13 : ly + 3);
+        float dx = p.X - from.X, dy = p.Y - from.Y, len = MathF.Max(1e-3f, MathF.Sqrt(dx * dx + dy * dy));
+        float ux = dx / len, uy = dy / len;
+        var tip = new SKPoint(p.X - 7 * ux, p.Y - 7 * uy);
+        using (var halo = Ink.Stroke(SKColors.White, 4f)) c.DrawLine(from, tip, halo);
+        using (var lead = Ink.Stroke(Ink.Alert, 1.8f)) c.DrawLine(from, tip, lead);
+        using (var head = new SKPath())
+        {
+            head.MoveTo(tip);
+            head.LineTo(tip.X - 9 * ux + 4 * uy, tip.Y - 9 * uy - 4 * ux);
+            head.LineTo(tip.X - 9 * ux - 4 * uy, tip.Y - 9 * uy + 4 * ux);
+            head.Close();
+            using var fill = Ink.Fill(Ink.Alert);
+            using var edge = Ink.Stroke(SKColors.White, 1f);
+            c.DrawPath(head, edge);
+            c.DrawPath(head, fill);
+        }
+        Ink.BoxedLabel(c, text, lx, ly, 13, data.PeakShearUnbounded ? Ink.Alert : Ink.Text);
     }
 
-    private static void DrawColourBar(SKCanvas c, SectionLayout L, int bands, double top, string unit, string caption)
+    /// <summary>The colour bar: one box per band, ticks at every band boundary (round numbers), title and caption above, clear of the top tick.</summary>
+    private static void DrawColourBar(SKCanvas c, SectionLayout L, int bands, double width, string unit, string caption)
     {
         var r = L.ColourBar;
-        Ink.Label(c, $"|τ|, {unit}", r.Left - 6, r.Top - 20, 13, Ink.Text);
-        Ink.Label(c, caption, r.Left - 6, r.Top - 6, 11, Ink.Text);
+        Ink.Label(c, $"|τ|, {unit}", r.Left - 6, r.Top - 30, 13, Ink.Text);
+        Ink.Label(c, caption, r.Left - 6, r.Top - 15, 11, Ink.Text);
         float h = r.Height / bands;
         for (int k = 0; k < bands; k++)
         {
@@ -257,14 +304,14 @@ public static class SectionPicture
             c.DrawRect(band, paint);
         }
         using (var frame = Ink.Stroke(Ink.Text, 1f)) c.DrawRect(r, frame);
-        double step = top / bands;
         int every = bands > 12 ? 2 : 1;
         using var tick = Ink.Stroke(Ink.Text, 1f);
-        for (int k = 0; k <= bands; k += every)
+        for (int k = 0; k <= bands; k++)
         {
+            if (k % every != 0 && k != bands) continue; // the top tick is always labelled
             float y = r.Bottom - k * h;
             c.DrawLine(r.Right, y, r.Right + 4, y, tick);
-            Ink.Label(c, NiceScale.Sig(k * step, 3), r.Right + 7, y + 4, 11, Ink.Text);
+            Ink.Label(c, NiceScale.Format(k * width, width), r.Right + 7, y + 4, 11, Ink.Text);
         }
     }
 }

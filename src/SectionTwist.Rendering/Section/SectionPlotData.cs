@@ -15,6 +15,12 @@ namespace SectionTwist.Rendering.Section;
 /// <param name="Title">Heading drawn above the picture.</param>
 public sealed record SectionPlotData(SectionField Field, Point2 PeakLocation, double PeakShearPerTorque, LengthUnit Unit, string Title)
 {
+    /// <summary>
+    /// True when the section has a sharp re-entrant corner, so the theoretical peak is unbounded: the picture labels the
+    /// peak "unbounded" and gives the mesh value only as such.
+    /// </summary>
+    public bool PeakShearUnbounded { get; init; }
+
     /// <summary>Centroid to mark, m (null: not marked).</summary>
     public Point2? Centroid { get; init; }
 
@@ -26,8 +32,9 @@ public sealed record SectionPlotData(SectionField Field, Point2 PeakLocation, do
     {
         ArgumentNullException.ThrowIfNull(result);
         return new SectionPlotData(result.Field, result.MaxShearLocation, result.MaxShearPerTorque, result.LengthUnit,
-            title ?? "Shear stress magnitude")
+            title ?? (result.Profile.Name is { Length: > 0 } name && name != "profile" ? $"{Path.GetFileName(name)}: shear stress magnitude" : "Shear stress magnitude"))
         {
+            PeakShearUnbounded = double.IsPositiveInfinity(result.EstimatedRelativeError.MaxShear),
             Centroid = result.Properties.Centroid,
             ShearCentre = result.Warping?.ShearCentre,
         };

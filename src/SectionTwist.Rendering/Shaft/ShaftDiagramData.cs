@@ -3,7 +3,8 @@ using SectionTwist.Units;
 namespace SectionTwist.Rendering.Shaft;
 
 /// <summary>
-/// What a shaft diagram shows, in SI units (m, N*m, Pa, degrees for rotations). Signs: torques and rotations are axial
+/// What a shaft diagram shows, in SI units (m, N*m, Pa, degrees for rotations); the picture writes them in
+/// <see cref="Units"/>. Signs: torques and rotations are axial
 /// vectors by the right-hand rule about the axis from the first station to the last; the internal torque is positive when
 /// its vector points out of the cut face of the part nearer the first station.
 /// </summary>
@@ -11,8 +12,12 @@ public sealed record ShaftDiagramData
 {
     /// <summary>Heading above the diagram.</summary>
     public string Title { get; init; } = "Shaft";
-    /// <summary>Length unit for the axis labels.</summary>
+    /// <summary>Length unit for the axis labels (used when <see cref="Units"/> is null).</summary>
     public LengthUnit Unit { get; init; } = LengthUnit.Millimetre;
+    /// <summary>Display units of the axes and labels (torque, stress, length); null: the standard system of <see cref="Unit"/>.</summary>
+    public UnitSystem? Units { get; init; }
+    /// <summary>The units the picture uses: <see cref="Units"/>, else the standard system of <see cref="Unit"/>.</summary>
+    internal UnitSystem DisplayUnits => Units ?? UnitSystem.For(Unit);
     /// <summary>Stations (any order; drawn by position).</summary>
     public required IReadOnlyList<DiagramStation> Stations { get; init; }
     /// <summary>Segments between stations.</summary>
@@ -74,6 +79,8 @@ public sealed record DiagramSegment
     public required double ShearEnd { get; init; }
     /// <summary>Allowable shear stress, Pa, or null for none.</summary>
     public double? Allowable { get; init; }
+    /// <summary>True when the section's peak shear is unbounded (a sharp re-entrant corner): the shear is drawn dashed and labelled so.</summary>
+    public bool PeakShearUnbounded { get; init; }
 
     /// <summary>True when the peak shear is above the allowable.</summary>
     public bool Exceeds => Allowable is { } a && Math.Max(ShearStart, ShearEnd) > a;

@@ -1,4 +1,5 @@
 using SectionTwist.Rendering.Drawing;
+using SectionTwist.Units;
 using SkiaSharp;
 
 namespace SectionTwist.Rendering.Shaft;
@@ -58,20 +59,20 @@ internal static class ShaftSchematic
             if (st.Support == SupportKind.Fixed) Wall(c, x, y0, Math.Max(half, 10) + 12, x < mid ? -1 : 1);
             else if (st.Support == SupportKind.Bearing) Bearing(c, x, y0 + half);
             float ay = y0 - Math.Max(maxHalf, 8) - 22;
-            if (st.AppliedTorque != 0) Vector(c, x, ay, st.AppliedTorque, Load, $"{Signed(st.AppliedTorque)} N·m");
+            if (st.AppliedTorque != 0) Vector(c, x, ay, st.AppliedTorque, Load, $"{Signed(d.DisplayUnits.Torque.FromSi(st.AppliedTorque))} {d.DisplayUnits.Torque.Symbol}");
             // the reaction takes the applied torque's row when the station has none (the usual fixed end), so that it stays
             // clear of the heading when the shaft fills the band
             if (st.Support == SupportKind.Fixed && st.Reaction != 0)
-                Vector(c, x, st.AppliedTorque != 0 ? ay - 30 : ay, st.Reaction, Reaction, $"R {Signed(st.Reaction)} N·m");
+                Vector(c, x, st.AppliedTorque != 0 ? ay - 30 : ay, st.Reaction, Reaction, $"R {Signed(d.DisplayUnits.Torque.FromSi(st.Reaction))} {d.DisplayUnits.Torque.Symbol}");
         }
         float by = y0 - Math.Max(maxHalf, 8) - 22;
-        foreach (var dt in d.DistributedTorques.Where(t => t.Total != 0)) Spread(c, L.ToPixelX(Math.Min(dt.From, dt.To)), L.ToPixelX(Math.Max(dt.From, dt.To)), by, dt);
+        foreach (var dt in d.DistributedTorques.Where(t => t.Total != 0)) Spread(c, L.ToPixelX(Math.Min(dt.From, dt.To)), L.ToPixelX(Math.Max(dt.From, dt.To)), by, dt, d.DisplayUnits.Torque);
         // stations at the same place (e.g. the two halves of a coupling) share one label instead of overprinting
         foreach (var group in d.Stations.GroupBy(s => s.Position).OrderBy(g => g.Key))
             Ink.Label(c, string.Join(", ", group.Select(s => s.Name)), L.ToPixelX(group.Key), y0 + maxHalf + 30, 11, Ink.Text, SKTextAlign.Center);
     }
 
-    internal static string Signed(double v) => (v > 0 ? "+" : "") + NiceScale.Sig(v, 4);
+    internal static string Signed(double v) => (v > 0 ? "+" : "") + NumberText.Format(v, 4);
 
     private static float HalfAt(ShaftDiagramData d, double x, double vs)
     {
@@ -103,7 +104,7 @@ internal static class ShaftSchematic
     }
 
     /// <summary>A distributed torque: small double-headed vectors along the stretch under a bracket, with the total.</summary>
-    private static void Spread(SKCanvas c, float x0, float x1, float y, DiagramDistributedTorque t)
+    private static void Spread(SKCanvas c, float x0, float x1, float y, DiagramDistributedTorque t, DisplayUnit torque)
     {
         float dir = t.Total > 0 ? 1 : -1;
         int n = Math.Clamp((int)((x1 - x0) / 26), 1, 12);
@@ -123,7 +124,7 @@ internal static class ShaftSchematic
         c.DrawLine(x0, y - 7, x1, y - 7, line);
         c.DrawLine(x0, y - 7, x0, y - 3, line);
         c.DrawLine(x1, y - 7, x1, y - 3, line);
-        Ink.Label(c, $"{Signed(t.Total)} N·m spread{(t.Label is null ? "" : $" ({t.Label})")}", 0.5f * (x0 + x1), y - 12, 11, Load, SKTextAlign.Center);
+        Ink.Label(c, $"{Signed(torque.FromSi(t.Total))} {torque.Symbol} spread{(t.Label is null ? "" : $" ({t.Label})")}", 0.5f * (x0 + x1), y - 12, 11, Load, SKTextAlign.Center);
     }
 
     /// <summary>A double-headed axial vector (right-hand rule): points +x for a positive torque.</summary>

@@ -6,8 +6,9 @@ namespace SectionTwist.Rendering.Shaft;
 internal readonly record struct PlotPoint(double X, double Y);
 
 /// <summary>
-/// The polylines the three shaft plots draw, in axis order: internal torque (N*m; a vertical step at each station
-/// where the torque jumps, linear within a segment), station rotations (degrees), shear stress (MPa) per segment.
+/// The polylines the three shaft plots draw, in axis order: internal torque (display torque unit; a vertical step at each
+/// station where the torque jumps, linear within a segment), station rotations (degrees), shear stress (display stress
+/// unit) per segment.
 /// </summary>
 internal static class ShaftSeries
 {
@@ -17,6 +18,7 @@ internal static class ShaftSeries
     /// <summary>Internal torque: each segment contributes its start and end points, so jumps appear as vertical steps.</summary>
     public static IReadOnlyList<PlotPoint> Torque(ShaftDiagramData d)
     {
+        var t = d.DisplayUnits.Torque;
         var pts = new List<PlotPoint>();
         double? lastX = null;
         foreach (var s in Ordered(d))
@@ -24,8 +26,8 @@ internal static class ShaftSeries
             // a gap between segments (no shaft there) breaks the line at zero
             if (lastX is { } lx && s.From > lx + 1e-12) { pts.Add(new(lx, 0)); pts.Add(new(s.From, 0)); }
             else if (lastX is null) pts.Add(new(s.From, 0));
-            pts.Add(new(s.From, s.TorqueStart));
-            pts.Add(new(s.To, s.TorqueEnd));
+            pts.Add(new(s.From, t.FromSi(s.TorqueStart)));
+            pts.Add(new(s.To, t.FromSi(s.TorqueEnd)));
             lastX = s.To;
         }
         if (lastX is { } end) pts.Add(new(end, 0));
@@ -37,20 +39,22 @@ internal static class ShaftSeries
         d.Stations.OrderBy(s => s.Position).Select(s => new PlotPoint(s.Position, s.RotationDeg)).ToArray();
 
     /// <summary>
-    /// Shear stress, MPa, one polyline per segment (start, end, and zero where a distributed torque changes sign).
+    /// Shear stress in the display stress unit, one polyline per segment (start, end, and zero where a distributed torque
+    /// changes sign).
     /// </summary>
     public static IReadOnlyList<IReadOnlyList<PlotPoint>> Shear(ShaftDiagramData d)
     {
+        var u = d.DisplayUnits.Stress;
         var list = new List<IReadOnlyList<PlotPoint>>();
         foreach (var s in Ordered(d))
         {
-            var pts = new List<PlotPoint> { new(s.From, s.ShearStart * 1e-6) };
+            var pts = new List<PlotPoint> { new(s.From, u.FromSi(s.ShearStart)) };
             if (s.TorqueStart * s.TorqueEnd < 0)
             {
                 double t = s.TorqueStart / (s.TorqueStart - s.TorqueEnd);
                 pts.Add(new(s.From + t * (s.To - s.From), 0));
             }
-            pts.Add(new(s.To, s.ShearEnd * 1e-6));
+            pts.Add(new(s.To, u.FromSi(s.ShearEnd)));
             list.Add(pts);
         }
         return list;

@@ -78,7 +78,7 @@ public sealed class ArcSegment : Segment
         double d = 2 * (ax * (by - cy) + bx * (cy - ay) + cx * (ay - by));
         double scale = Math.Max(Point2.Distance(start, through), Point2.Distance(through, end));
         if (Math.Abs(d) <= 1e-14 * scale * scale)
-            throw new SectionTwistException("bad-arc", $"arc through {start}, {through}, {end}: the three points are collinear");
+            throw new SectionTwistException("bad-arc", $"arc through {start}, {through}, {end}: the three points are collinear; move the through point off the line, or write a straight line instead");
         double a2 = ax * ax + ay * ay, b2 = bx * bx + by * by, c2 = cx * cx + cy * cy;
         var center = new Point2((a2 * (by - cy) + b2 * (cy - ay) + c2 * (ay - by)) / d, (a2 * (cx - bx) + b2 * (ax - cx) + c2 * (bx - ax)) / d);
         double r = Point2.Distance(center, start);

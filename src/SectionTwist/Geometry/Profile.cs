@@ -87,6 +87,12 @@ public sealed class Profile
     public IEnumerable<Loop> Loops => Regions.SelectMany(r => r.Loops);
 
     /// <summary>
+    /// Cautions from the source that built the profile (e.g. a template default quoted from memory of a standard);
+    /// empty for most profiles. An analysis repeats them among its warnings.
+    /// </summary>
+    public IReadOnlyList<ProfileWarning> Warnings { get; init; } = [];
+
+    /// <summary>
     /// Largest distance, metres, between the outline and the drawn curves it stands for where those could not be kept
     /// exactly (splines and bent ellipses replaced by arcs); 0 when the outline is the drawn geometry. The analysis adds
     /// its effect on J to the error estimate.
@@ -97,8 +103,8 @@ public sealed class Profile
     public SectionProperties Properties => _properties ??= SectionProperties.Compute(this);
 
     /// <summary>The profile moved by a similarity transform.</summary>
-    public Profile Transformed(Similarity2 t) => new(Regions.Select(r => r.Transformed(t)), Unit, Name) { CurveTolerance = CurveTolerance * t.Scale };
+    public Profile Transformed(Similarity2 t) => new(Regions.Select(r => r.Transformed(t)), Unit, Name) { CurveTolerance = CurveTolerance * t.Scale, Warnings = Warnings };
 
     /// <summary>The same profile under another name or display unit.</summary>
-    public Profile With(string? name = null, LengthUnit? unit = null) => new(Regions, unit ?? Unit, name ?? Name) { CurveTolerance = CurveTolerance };
+    public Profile With(string? name = null, LengthUnit? unit = null) => new(Regions, unit ?? Unit, name ?? Name) { CurveTolerance = CurveTolerance, Warnings = Warnings };
 }

@@ -19,8 +19,23 @@ public sealed record SectionProperties(double Area, Point2 Centroid, double Ixx,
     /// <summary>Smaller principal second moment, m^4.</summary>
     public double I2 => 0.5 * (Ixx + Iyy) - Math.Sqrt(0.25 * (Ixx - Iyy) * (Ixx - Iyy) + Ixy * Ixy);
 
-    /// <summary>Angle from the x axis to the principal axis about which the second moment is <see cref="I1"/>, radians, in (-pi/2, pi/2].</summary>
-    public double PrincipalAngle => 0.5 * Math.Atan2(-2 * Ixy, Ixx - Iyy);
+    /// <summary>
+    /// Angle from the x axis to the principal axis about which the second moment is <see cref="I1"/>, radians, in
+    /// (-pi/2, pi/2]; 0 when <see cref="HasPrincipalAxes"/> is false (every centroidal axis is then principal).
+    /// </summary>
+    public double PrincipalAngle => HasPrincipalAxes ? 0.5 * Math.Atan2(0.0 - 2 * Ixy, Ixx - Iyy) : 0; // 0.0 - x: no -0, so pi/2 not -pi/2
+
+    /// <summary>
+    /// False when I1 = I2 to the accuracy of the computation (a circle, a square, a regular polygon, ...): then no axis is
+    /// singled out and a principal angle would be round-off.
+    /// </summary>
+    public bool HasPrincipalAxes => I1 - I2 > PrincipalTolerance * (Math.Abs(Ixx) + Math.Abs(Iyy));
+
+    /// <summary>Relative difference of I1 and I2 below which they count as equal (round-off of the boundary integrals).</summary>
+    internal const double PrincipalTolerance = 1e-10;
+
+    /// <summary>Relative size below which a centroid coordinate (of the part size) or Ixy (of Ixx + Iyy) is round-off and set to 0.</summary>
+    internal const double RoundOff = 1e-12;
 
     internal static SectionProperties Compute(Profile profile)
     {
@@ -35,6 +50,9 @@ public sealed record SectionProperties(double Area, Point2 Centroid, double Ixx,
         if (!(a > 0)) throw new SectionTwistException("zero-area", $"{profile.Name}: the profile has no area");
         double xc = m.Sy / a, yc = m.Sx / a;
         double ixx = m.Ixx - a * yc * yc, iyy = m.Iyy - a * xc * xc, ixy = m.Ixy - a * xc * yc;
-        return new SectionProperties(a, new Point2(o.X + xc, o.Y + yc), ixx, iyy, ixy);
+        // zero in exact arithmetic (a symmetric section) is printed as zero, not as 1e-16 of the part size
+        double size = Math.Max(profile.Bounds.Width, profile.Bounds.Height);
+        var centroid = new Point2(Units.NumberText.Clean(o.X + xc, size, RoundOff), Units.NumberText.Clean(o.Y + yc, size, RoundOff));
+        return new SectionProperties(a, centroid, ixx, iyy, Units.NumberText.Clean(ixy, Math.Abs(ixx) + Math.Abs(iyy), RoundOff));
     }
 }

@@ -39,8 +39,32 @@ public static class ProfileSources
         if (File.Exists(source))
             throw new SectionTwistException("unknown-source",
                 $"{source}: no profile source reads '{Path.GetExtension(source)}' files; known: {string.Join(", ", All.SelectMany(s => s.Extensions).Distinct())}");
-        throw new SectionTwistException("unknown-source",
-            $"'{source}' is neither a readable file nor a template spec like keyed:d=40; run 'sectiontwist templates' for the list");
+        throw NotFound(source);
+    }
+
+    /// <summary>
+    /// Why <paramref name="source"/> could not be loaded, told apart: a folder, a spec with an unknown template name (with
+    /// the nearest one), a path to a missing file (with the nearest file name), or a bare word (with the nearest template).
+    /// </summary>
+    private static SectionTwistException NotFound(string source)
+    {
+        string text = source.Trim();
+        var templates = Profiles.ProfileTemplates.All.SelectMany(t => t.Aliases.Prepend(t.Name)).ToList();
+        if (Directory.Exists(text))
+            return new("not-a-file", $"'{source}' is a folder; give a drawing (.dxf), a point list (.csv, .pts) or a template spec such as keyed:d=40");
+        int colon = text.IndexOf(':', StringComparison.Ordinal);
+        bool path = text.Contains('/', StringComparison.Ordinal) || text.Contains('\\', StringComparison.Ordinal) || colon == 1;
+        if (colon > 0 && !path)
+        {
+            string name = text[..colon].Trim();
+            return new("unknown-template",
+                $"'{source}': unknown template '{name}'{Suggest.DidYouMean(name, templates)}; run 'sectiontwist templates' for the list");
+        }
+        if (path || Path.HasExtension(text))
+            return new("file-not-found", FileHints.Missing(text, "file") + "; check the path and the file name");
+        string near = Suggest.DidYouMean(text, templates, "; did you mean the template ", " (written NAME:key=value, e.g. keyed:d=40)?");
+        return new("unknown-source",
+            $"'{source}': no such file here and not a template spec (NAME:key=value, e.g. keyed:d=40){near}; run 'sectiontwist templates' for the templates");
     }
 
     /// <summary>

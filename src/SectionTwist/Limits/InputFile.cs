@@ -10,7 +10,7 @@ internal static class InputFile
     {
         var fi = new FileInfo(path);
         if (Directory.Exists(path)) throw new SectionTwistException("file-not-found", $"{path}: is a folder, not a {what}; give the file's path");
-        if (!fi.Exists) throw new SectionTwistException("file-not-found", $"{path}: no such {(what == "shaft file" ? what : "file")}; check the path");
+        if (!fi.Exists) throw new SectionTwistException("file-not-found", FileHints.Missing(path, what) + "; check the path and the file name");
         using var fs = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1, FileOptions.SequentialScan);
         long declared = fs.CanSeek ? fs.Length : -1;
         if (declared > maxBytes) throw TooLarge(path, declared, maxBytes, what);

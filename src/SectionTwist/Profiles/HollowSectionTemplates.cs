@@ -5,7 +5,7 @@ namespace SectionTwist.Profiles;
 
 /// <summary>
 /// Rectangular and square hollow sections, H (along y) by B (along x), wall t, outer and inner corner radii.
-/// Default radii: hot-finished (EN 10210-2) ro = 1.5 t, ri = t (shared/REFERENCES.md, from memory there);
+/// Default radii: hot-finished (EN 10210-2) ro = 1.5 t, ri = t (docs/references.md, from memory there);
 /// cold-formed (EN 10219-2, from memory): t &lt;= 6 mm: ro = 2 t, ri = t; 6 &lt; t &lt;= 10 mm: ro = 2.5 t, ri = 1.5 t;
 /// t &gt; 10 mm: ro = 3 t, ri = 2 t.
 /// </summary>

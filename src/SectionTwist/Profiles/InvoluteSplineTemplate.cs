@@ -46,6 +46,11 @@ internal static class InvoluteSplineTemplate
     {
         var (m, z, alpha, da, df) = Sizes(a);
         double r = a.LengthOrZero("r", 0.2 * m);
+        if (!a.Has("Da") || !a.Has("Df"))
+            a.DefaultFromMemory(!a.Has("Da") ? "Da" : "Df", $"{(a.Has("Da") ? "minor diameter" : a.Has("Df") ? "major diameter" : "major and minor diameters")} of ISO 4156 for {alpha * 180 / Math.PI:G4} deg ({(a.Has("Da") ? "" : "Da = " + a.Show(da))}{(a.Has("Da") || a.Has("Df") ? "" : ", ")}{(a.Has("Df") ? "" : "Df = " + a.Show(df))}),", "give Da= and Df= explicitly");
+        if (!a.Has("r"))
+            a.Warnings.Add(new ProfileWarning("default-no-source",
+                $"{a.Spec}: r: the root fillet {a.Show(r)} (0.2 m) is common practice with no standard behind it; a smaller real fillet raises the peak shear; give r= from your drawing"));
         double rp = m * z / 2, rb = rp * Math.Cos(alpha), ra = da / 2, rf = df / 2;
         if (ra <= rf) throw a.Error("Da", $"major diameter {a.Show(da)} is not larger than the minor diameter {a.Show(df)}");
         if (ra <= rb) throw a.Error("Da", $"major diameter {a.Show(da)} lies inside the base circle {a.Show(2 * rb)}: no involute flank; use a larger Da");

@@ -1,8 +1,10 @@
 namespace SectionTwist.Profiles;
 
 /// <summary>
-/// Straight-sided splines, ISO 14: N x d x D with tooth width B, mm, light and medium series. Rows marked in
-/// shared/REFERENCES.md are confirmed there; the others are from memory of the standard (marked <c>Memory</c>).
+/// Straight-sided splines, ISO 14: N x d x D with tooth width B, mm, light and medium series. Nine rows are checked
+/// against a copy of the standard's table; the others are from memory of the standard (marked <c>Memory</c>, and a
+/// template that takes a default from such a row warns). The root fillet defaults (<see cref="RootFillet"/>) are from
+/// memory as well.
 /// </summary>
 internal static class Iso14Table
 {
@@ -24,6 +26,13 @@ internal static class Iso14Table
         new("medium", 10, 72, 82, 12, true), new("medium", 10, 82, 92, 12, false), new("medium", 10, 92, 102, 14, true),
         new("medium", 10, 102, 112, 16, true), new("medium", 10, 112, 125, 18, true),
     ];
+
+    /// <summary>
+    /// Default root fillet radius (mm) of a straight-sided spline shaft by major diameter D (mm), from memory of the
+    /// r column of the ISO 14 tables: 0.2 up to D = 26, 0.3 up to 46, 0.4 up to 72, 0.5 above. A smaller real fillet
+    /// gives a higher peak shear, hence the warning that goes with it.
+    /// </summary>
+    public static double RootFillet(double dMajorMm) => dMajorMm <= 26 + 1e-9 ? 0.2 : dMajorMm <= 46 + 1e-9 ? 0.3 : dMajorMm <= 72 + 1e-9 ? 0.4 : 0.5;
 
     /// <summary>Rows matching the given values (null = any), sizes in mm.</summary>
     public static IEnumerable<Row> Find(string? series, int? n, double? d, double? dMajor) =>

@@ -67,7 +67,7 @@ public static class ProfileTemplates
             throw new SectionTwistException("out-of-scope",
                 $"{specText}: a shaft with a cross hole is a 3D stress problem, outside a cross-section (Saint-Venant) analysis; analyse the plain section (e.g. circle:d=...) and apply a stress-concentration factor from a handbook for the hole");
         return FindDefinition(name) ?? throw new SectionTwistException("unknown-template",
-            $"{specText}: unknown template '{name}'; known templates: {string.Join(", ", Definitions.Select(d => d.Info.Name))} (run 'sectiontwist templates' for their parameters)");
+            $"{specText}: unknown template '{name}'{Suggest.DidYouMean(name, Definitions.SelectMany(d => d.Info.Aliases.Prepend(d.Info.Name)))}; known templates: {string.Join(", ", Definitions.Select(d => d.Info.Name))} (run 'sectiontwist templates' for their parameters)");
     }
 
     /// <summary>Builds the profile, its outer size (m) and its template description.</summary>
@@ -100,7 +100,7 @@ public static class ProfileTemplates
             args = new TemplateArguments(specText, def.Info, items, unit);
             regions = def.Build(args);
         }
-        var profile = new Profile(regions, args.DisplayUnit, specText);
+        var profile = new Profile(regions, args.DisplayUnit, specText) { Warnings = args.Warnings.ToArray() };
         return (profile, def.OuterSize(args, regions), def.Info, args);
     }
 }

@@ -7,7 +7,8 @@ namespace SectionTwist.Profiles;
 /// <summary>
 /// Straight-sided (parallel-key) spline shaft N x d x D, tooth width B: a core of minor diameter d with N parallel-sided
 /// teeth reaching the major diameter D, root fillet r between flank and core. ISO 14 light and medium rows by name
-/// (<c>spline:series=light,N=8,d=32</c>) or as <c>iso14:8x32x36</c>.
+/// (<c>spline:series=light,N=8,d=32</c>) or as <c>iso14:8x32x36</c>. The root fillet defaults to
+/// <see cref="Iso14Table.RootFillet"/> (from memory, with a warning); r=0 gives sharp roots (a singular peak shear).
 /// </summary>
 internal static class StraightSplineTemplate
 {
@@ -17,7 +18,7 @@ internal static class StraightSplineTemplate
                 new TemplateParameter("d", ParameterKind.Length, "minor (root) diameter"),
                 new TemplateParameter("D", ParameterKind.Length, "major (tip) diameter", "ISO 14 row"),
                 new TemplateParameter("B", ParameterKind.Length, "tooth width", "ISO 14 row"),
-                new TemplateParameter("r", ParameterKind.Length, "root fillet radius, flank to core", "0"),
+                new TemplateParameter("r", ParameterKind.Length, "root fillet radius, flank to core (0 = sharp)", "ISO 14 by D (memory)"),
                 new TemplateParameter("series", ParameterKind.Choice, "ISO 14 series for the defaults", "any", ["light", "medium"])),
             "D = D (major diameter)", "spline:series=light,N=8,d=32", ["iso14"]),
         Build,
@@ -55,6 +56,10 @@ internal static class StraightSplineTemplate
             if (rows.Count > 1 && (n is null || dMajor is null))
                 throw a.Error("series", $"d={a.Show(d)} is in both ISO 14 series ({string.Join(", ", rows.Select(r => string.Create(CultureInfo.InvariantCulture, $"{r.Series} {r.N}x{r.D1}x{r.D2}")))}); add series=light or series=medium, or give N and D");
             row = rows[0];
+            if (row.Value.Memory)
+                a.DefaultFromMemory(n is null ? "N" : dMajor is null ? "D" : "B",
+                    string.Create(CultureInfo.InvariantCulture, $"ISO 14 {row.Value.Series} row {row.Value.N} x {row.Value.D1} x {row.Value.D2}, B = {row.Value.B} mm,"),
+                    "give N, D and B explicitly");
         }
         return (n ?? row!.Value.N, d, dMajor ?? row!.Value.D2 * 1e-3, a.Length("B", (row?.B ?? 0) * 1e-3));
     }
@@ -62,7 +67,6 @@ internal static class StraightSplineTemplate
     private static Region[] Build(TemplateArguments a)
     {
         var (n, dMinor, dMajor, b) = Resolve(a);
-        double r = a.LengthOrZero("r", 0);
         if (n < 2) throw a.Error("N", $"{n} teeth: use at least 2");
         if (dMajor <= dMinor) throw a.Error("D", $"major diameter {a.Show(dMajor)} is not larger than the minor diameter {a.Show(dMinor)}; use D > d");
         if (b >= dMinor) throw a.Error("B", $"tooth width {a.Show(b)} is not less than the minor diameter {a.Show(dMinor)}");
@@ -72,8 +76,11 @@ internal static class StraightSplineTemplate
             throw a.Error("B", $"{n} teeth of width {a.Show(b)} overlap on the {a.Show(dMinor)} core; use fewer teeth or a narrower B");
         double xr = Math.Sqrt(rf * rf - b * b / 4), xt = Math.Sqrt(ra * ra - b * b / 4);
         double gapChord = 2 * rf * Math.Sin(Math.PI / n - halfRoot);
+        double r = a.Has("r") ? a.LengthOrZero("r", 0) : Iso14Table.RootFillet(dMajor * 1000) * 1e-3;
         if (r > 0 && (r >= xt - xr || 2 * r >= gapChord))
-            throw a.Error("r", $"root fillet {a.Show(r)} does not fit a tooth of height {a.Show(xt - xr)} and a gap of {a.Show(gapChord)}; use a smaller r");
+            throw a.Error("r", $"{(a.Has("r") ? "" : "the default ")}root fillet {a.Show(r)} does not fit a tooth of height {a.Show(xt - xr)} and a gap of {a.Show(gapChord)}; use a smaller r");
+        if (!a.Has("r"))
+            a.DefaultFromMemory("r", $"root fillet {a.Show(r)} (ISO 14 by the major diameter {a.Show(dMajor)}; a smaller real fillet raises the peak shear),");
         var o = new Outline(a.Spec);
         for (int k = 0; k < n; k++)
         {

@@ -23,7 +23,7 @@ internal sealed class TemplateArguments
             if (info.Find(key) is null)
             {
                 string near = info.Parameters.FirstOrDefault(p => string.Equals(p.Key, key, StringComparison.OrdinalIgnoreCase)) is { } p
-                    ? $" (keys are case-sensitive: did you mean '{p.Key}'?)" : "";
+                    ? $" (keys are case-sensitive: did you mean '{p.Key}'?)" : Suggest.DidYouMean(key, info.Parameters.Select(q => q.Key));
                 throw new SectionTwistException("unknown-key",
                     $"{spec}: template '{info.Name}' has no key '{key}'{near}; its keys are {string.Join(", ", info.Parameters.Select(q => q.Key))}");
             }
@@ -56,6 +56,20 @@ internal sealed class TemplateArguments
 
     /// <summary>The unit for display: the first explicit one, else the default.</summary>
     public LengthUnit DisplayUnit => FirstExplicitUnit ?? DefaultUnit;
+
+    /// <summary>Cautions raised while building (e.g. a default quoted from memory of a standard), in order.</summary>
+    public List<Geometry.ProfileWarning> Warnings { get; } = [];
+
+    /// <summary>
+    /// Records that a value quoted from memory of a standard (not checked against the standard's text) supplied the
+    /// default of <paramref name="key"/>: <paramref name="what"/> names the value, the remedy is appended.
+    /// </summary>
+    public void DefaultFromMemory(string key, string what) => DefaultFromMemory(key, what, $"give {key}= explicitly");
+
+    /// <summary>As <see cref="DefaultFromMemory(string, string)"/> with the given remedy (e.g. several keys to give).</summary>
+    public void DefaultFromMemory(string key, string what, string remedy) =>
+        Warnings.Add(new Geometry.ProfileWarning("default-from-memory",
+            $"{Spec}: {key}: default {what} quoted from memory of the standard (not checked against its text); compare it with the standard or your drawing, or {remedy}"));
 
     /// <summary>True when the spec gives <paramref name="key"/>.</summary>
     public bool Has(string key) => _values.ContainsKey(key);
@@ -125,7 +139,7 @@ internal sealed class TemplateArguments
         var par = _info.Find(key)!;
         string s = _values[key];
         return par.Choices.FirstOrDefault(c => string.Equals(c, s, StringComparison.OrdinalIgnoreCase))
-            ?? throw Error(key, $"'{s}' is not one of {string.Join(", ", par.Choices)}");
+            ?? throw Error(key, $"'{s}' is not one of {string.Join(", ", par.Choices)}{Suggest.DidYouMean(s, par.Choices)}");
     }
 
     private SectionTwistException Missing(string key) =>
@@ -136,11 +150,30 @@ internal sealed class TemplateArguments
         string s = _values[key];
         if (!SpecValue.TryParse(s, out var v))
             throw Error(key, $"'{s}' is not a length; write a number with an optional unit, e.g. {key}=40 or {key}=1.5in");
-        if (v.Unit.Length == 0) return DefaultUnit.ToMetres(v.Number);
+        if (v.Unit.Length == 0) return InRange(key, s, DefaultUnit.ToMetres(v.Number), true);
         if (!LengthUnit.TryParse(v.Unit, out var unit))
-            throw Error(key, $"unknown length unit '{v.Unit}' in '{s}'; use one of {string.Join(", ", LengthUnit.Known.Select(k => k.Symbol))}");
+            throw Error(key, $"unknown length unit '{v.Unit}' in '{s}'{Suggest.DidYouMean(v.Unit, LengthUnit.Known.Select(k => k.Symbol))}; use one of {string.Join(", ", LengthUnit.Known.Select(k => k.Symbol))}");
         FirstExplicitUnit ??= unit;
-        return unit.ToMetres(v.Number);
+        return InRange(key, s, unit.ToMetres(v.Number), true);
+    }
+
+    /// <summary>Largest length a template takes, m: beyond it the value is a typo or a unit mistake (1e300, 40 m for 40 mm).</summary>
+    internal const double MaxLength = 1000;
+
+    /// <summary>Smallest non-zero size a template takes, m (1 µm): below it the mesh and the area integrals lose their digits.</summary>
+    internal const double MinLength = 1e-6;
+
+    /// <summary>
+    /// A length within what a cross-section can be: |v| at most <see cref="MaxLength"/>, and (for sizes, not coordinates)
+    /// zero or at least <see cref="MinLength"/>; otherwise one line naming the key, the value and the range.
+    /// </summary>
+    private double InRange(string key, string text, double metres, bool size)
+    {
+        double a = Math.Abs(metres);
+        if (!double.IsFinite(metres) || a > MaxLength || (size && a > 0 && a < MinLength))
+            throw Error(key, $"{text} is outside the sizes a cross-section can have here (1 µm to 1 km, bare numbers in {DefaultUnit.Symbol}); check the number and its unit" +
+                (size && a > 0 && a < MinLength ? " (write 0 for a sharp corner)" : ""));
+        return metres;
     }
 
     /// <summary>Parses a length written with an optional unit (for positional values such as polygon coordinates).</summary>
@@ -148,11 +181,11 @@ internal sealed class TemplateArguments
     {
         if (!SpecValue.TryParse(s, out var v))
             throw new SectionTwistException("bad-template-parameter", $"{Spec}: {what}: '{s}' is not a number; write numbers with an optional unit, e.g. 10 or 10mm");
-        if (v.Unit.Length == 0) return DefaultUnit.ToMetres(v.Number);
+        if (v.Unit.Length == 0) return InRange(what, s, DefaultUnit.ToMetres(v.Number), false);
         if (!LengthUnit.TryParse(v.Unit, out var unit))
             throw new SectionTwistException("bad-template-parameter", $"{Spec}: {what}: unknown length unit '{v.Unit}'; use one of {string.Join(", ", LengthUnit.Known.Select(k => k.Symbol))}");
         FirstExplicitUnit ??= unit;
-        return unit.ToMetres(v.Number);
+        return InRange(what, s, unit.ToMetres(v.Number), false);
     }
 
     private double ParseAngle(string key, string s)

@@ -68,13 +68,13 @@ internal static partial class QuantityText
     public static string Examples(QuantityKind kind) => kind switch
     {
         QuantityKind.Length => "mm, m, in, ft",
-        QuantityKind.Torque => "N*m, kN*m, lbf*in, lbf*ft",
+        QuantityKind.Torque => "N*m, kN*m, N*mm, lbf*in, lbf*ft (also written Nm, N-m, kNm, lb-in, in-lb, lbf-ft, ft-lb)",
         QuantityKind.Stress or QuantityKind.Modulus => "Pa, MPa, GPa, psi, ksi",
         QuantityKind.Volume => "mm^3, cm^3, in^3",
         QuantityKind.Power => "W, kW, hp",
         QuantityKind.Speed => "rpm, rad/s",
-        QuantityKind.TorquePerLength => "N*m/m, lbf*in/in",
-        QuantityKind.RotationalStiffness => "N*m/rad, kN*m/rad, lbf*in/deg",
+        QuantityKind.TorquePerLength => "N*m/m, Nm/m, lbf*in/in",
+        QuantityKind.RotationalStiffness => "N*m/rad, kN*m/rad, Nm/rad, lbf*in/deg",
         QuantityKind.AreaMoment => "mm^4, cm^4, m^4, in^4",
         QuantityKind.ShearPerTorque => "1/mm^3, 1/m^3, 1/in^3",
         QuantityKind.TwistRate => "deg/m, deg/ft, rad/m",
@@ -97,6 +97,8 @@ internal static partial class QuantityText
 
     private static double? Si(string unit, QuantityKind kind)
     {
+        // the common torque spellings (Nm, N-m, lb-in, in-lb, ft-lb, ...) mean the units UnitsNet knows as N·m, lbf·in, ...
+        if (kind == QuantityKind.Torque && Units.UnitAliases.Torque(unit) is { } torque) unit = torque;
         Type? t = kind switch
         {
             QuantityKind.Length => typeof(Length),

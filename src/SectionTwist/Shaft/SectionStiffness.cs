@@ -21,6 +21,38 @@ public sealed record SectionStiffness(double TorsionConstant, double ShearPerTor
     public bool WarpingSensitive { get; init; }
 
     /// <summary>
+    /// True when the section's theoretical peak shear is unbounded (a sharp re-entrant corner: a keyseat floor or spline root
+    /// without radius). <see cref="ShearPerTorque"/> is then only the value on the analysis mesh, which grows without bound
+    /// under refinement: segments with this section get no factor of safety and the check <c>unbounded</c>.
+    /// </summary>
+    public bool PeakShearUnbounded { get; init; }
+
+    /// <summary>Warnings of the section analysis, each naming the section (empty for exact and given sections).</summary>
+    public IReadOnlyList<Torsion.AnalysisWarning> Warnings { get; init; } = [];
+
+    /// <summary>
+    /// The values of an analysed section: J and peak shear per unit torque, whether the peak is unbounded (a sharp
+    /// re-entrant corner: infinite estimated error of the peak), the analysis warnings, prefixed with
+    /// <paramref name="description"/> when one is given, and the warping values when the analysis solved them.
+    /// </summary>
+    /// <param name="result">The section analysis.</param>
+    /// <param name="description">Text for tables, e.g. <c>keyed d=40 mm</c>; also names the section in its warnings.</param>
+    /// <param name="outerDiameter">Outer diameter for drawings, m, or null.</param>
+    public static SectionStiffness FromAnalysis(Torsion.SectionResult result, string? description = null, double? outerDiameter = null)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        return new(result.TorsionConstant, result.MaxShearPerTorque, description, outerDiameter)
+        {
+            PeakShearUnbounded = double.IsPositiveInfinity(result.EstimatedRelativeError.MaxShear) || result.Warnings.Any(w => w.Code == "sharp-reentrant-corner"),
+            Warnings = result.Warnings.Select(w => description is null ? w : new Torsion.AnalysisWarning(w.Code, $"section '{description}': {w.Message}")).ToList().AsReadOnly(),
+            WarpingConstant = result.Warping?.WarpingConstant,
+            MaxSectorialCoordinate = result.Warping?.MaxSectorialCoordinate,
+            WarpingSensitive = result.Warping?.Classification == Warping.WarpingClass.WarpingSensitive,
+            PolarMoment = result.PolarMoment,
+        };
+    }
+
+    /// <summary>
     /// Polar second moment of area about the centroid, Ix + Iy, m^4 (not J: it sets the rotational inertia rho Ip per unit
     /// length); null when not known (a handbook section without <c>polarMoment</c>).
     /// </summary>

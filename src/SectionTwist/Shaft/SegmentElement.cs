@@ -86,6 +86,6 @@ internal sealed class SegmentElement
 
     /// <summary>A short section description for tables.</summary>
     public string Describe() => Section is not null
-        ? Section.Description ?? $"J={Section.TorsionConstant:G4} m^4"
+        ? Section.Description ?? $"J={Section.TorsionConstant:G4} m⁴"
         : $"taper d={DiameterA * 1e3:G5}..{DiameterB * 1e3:G5} mm";
 }

@@ -29,7 +29,7 @@ public sealed record SegmentResult
     public required double MaxShear { get; init; }
     /// <summary>The stress the factor of safety is measured against, Pa (allowable, or shear yield), or null.</summary>
     public required double? ShearLimit { get; init; }
-    /// <summary>ShearLimit / MaxShear; +infinity when the segment carries no torque; null without a limit.</summary>
+    /// <summary>ShearLimit / MaxShear; +infinity when the segment carries no torque; null without a limit or when the peak shear is unbounded.</summary>
     public required double? SafetyFactor { get; init; }
     /// <summary>Largest twist rate |T| / (G J) in the segment, rad/m.</summary>
     public required double MaxTwistRate { get; init; }
@@ -37,6 +37,29 @@ public sealed record SegmentResult
     public required bool ExceedsShearLimit { get; init; }
     /// <summary>True when <see cref="MaxTwistRate"/> exceeds the model's twist-rate limit.</summary>
     public required bool ExceedsTwistRateLimit { get; init; }
+
+    /// <summary>
+    /// True when the segment carries torque and its section's peak shear is unbounded (a sharp re-entrant corner):
+    /// <see cref="MaxShear"/> is then only the value on the analysis mesh, <see cref="SafetyFactor"/> is null and
+    /// <see cref="Check"/> says <c>unbounded</c>.
+    /// </summary>
+    public bool PeakShearUnbounded { get; init; }
+
+    /// <summary>
+    /// The check as every output writes it: <c>ok</c>, or the problems joined by commas: <c>unbounded</c> (peak shear at a
+    /// sharp corner), <c>shear over allowable</c> (or <c>over yield</c>), <c>twist rate over limit</c>.
+    /// </summary>
+    public string Check
+    {
+        get
+        {
+            var flags = new List<string>(3);
+            if (PeakShearUnbounded) flags.Add("unbounded");
+            if (ExceedsShearLimit) flags.Add($"shear over {Material.LimitBasis}");
+            if (ExceedsTwistRateLimit) flags.Add("twist rate over limit");
+            return flags.Count == 0 ? "ok" : string.Join(", ", flags);
+        }
+    }
 
     /// <summary>The internal torque of largest magnitude in the segment, N*m.</summary>
     public double InternalTorque => Math.Abs(TorqueAtTo) > Math.Abs(TorqueAtFrom) ? TorqueAtTo : TorqueAtFrom;

@@ -1,3 +1,5 @@
+using SectionTwist.Torsion;
+
 namespace SectionTwist.Shaft;
 
 /// <summary>
@@ -40,13 +42,17 @@ internal sealed class ShaftAnalysis(ShaftModel model)
         foreach (int c in constrained) isFixed[c] = true;
 
         double phiRef = phi[layout.Reference];
+        // rotations and reactions that are zero in exact arithmetic print as zero, not as round-off (1e-16 of the largest)
+        double phiScale = 0, scale = 0;
+        foreach (var v in phi) phiScale = Math.Max(phiScale, Math.Abs(v - phiRef));
+        foreach (var v in f) scale += Math.Abs(v);
         var stations = new StationResult[n];
         var applied = new double[n];
         foreach (var (s, t, _) in layout.PointLoads) applied[s] += t;
         for (int i = 0; i < n; i++)
         {
             var st = layout.Stations[i];
-            stations[i] = new StationResult(st.Name, st.Position, phi[i] - phiRef, applied[i], Array.IndexOf(layout.Fixed, i) >= 0);
+            stations[i] = new StationResult(st.Name, st.Position, Units.NumberText.Clean(phi[i] - phiRef, phiScale), applied[i], Array.IndexOf(layout.Fixed, i) >= 0);
         }
 
         var reactions = new List<SupportReaction>();
@@ -54,18 +60,18 @@ internal sealed class ShaftAnalysis(ShaftModel model)
         {
             double r = -f[i];
             for (int j = 0; j < n; j++) r += k[i * n + j] * phi[j];
-            reactions.Add(new SupportReaction(layout.Stations[i].Name, r));
+            reactions.Add(new SupportReaction(layout.Stations[i].Name, Units.NumberText.Clean(r, scale, TorqueRoundOff)));
         }
 
         ShaftModelGuard.CheckSolution(k, f, phi, n, isFixed, free ? null : reactions);
-        double scale = 0;
-        foreach (var v in f) scale += Math.Abs(v);
-        var segments = BuildSegments(layout, phi, scale);
+        var segmentWarnings = new List<AnalysisWarning>();
+        var segments = BuildSegments(layout, phi, scale, phiScale, segmentWarnings);
         var springs = layout.Springs.Select(s => new SpringResult(s.Spring.Label, layout.Stations[s.A].Name, layout.Stations[s.B].Name,
-            s.Spring.Stiffness * (phi[s.B] - phi[s.A]), phi[s.B] - phi[s.A])).ToArray();
+            Units.NumberText.Clean(s.Spring.Stiffness * (phi[s.B] - phi[s.A]), scale, TorqueRoundOff), Units.NumberText.Clean(phi[s.B] - phi[s.A], phiScale))).ToArray();
 
-        var governing = segments.Where(s => s.ShearLimit is not null && s.MaxShear > 0)
-            .OrderByDescending(s => s.MaxShear / s.ShearLimit!.Value).FirstOrDefault();
+        // a loaded segment with an unbounded peak shear governs: no factor of safety can be given for it
+        var governing = segments.FirstOrDefault(s => s.PeakShearUnbounded)
+            ?? segments.Where(s => s.ShearLimit is not null && s.MaxShear > 0).OrderByDescending(s => s.MaxShear / s.ShearLimit!.Value).FirstOrDefault();
         var governingTwist = segments.Where(s => s.MaxTwistRate > 0).OrderByDescending(s => s.MaxTwistRate).FirstOrDefault();
         var result = new ShaftResult
         {
@@ -78,10 +84,31 @@ internal sealed class ShaftAnalysis(ShaftModel model)
             ReferenceStation = layout.Stations[layout.Reference].Name,
             GoverningSegment = governing,
             GoverningTwistSegment = governingTwist,
+            Warnings = Warnings(layout, segmentWarnings).AsReadOnly(),
         };
         ShaftModelGuard.CheckFinite(result);
         return result;
     }
+
+    /// <summary>Relative size (of the total applied torque) below which an internal torque, reaction or spring torque is round-off.</summary>
+    private const double TorqueRoundOff = 1e-10;
+
+    /// <summary>The sections' analysis warnings, once per section, then the warnings of the segments.</summary>
+    private static List<AnalysisWarning> Warnings(ShaftLayout layout, List<AnalysisWarning> segmentWarnings)
+    {
+        var list = new List<AnalysisWarning>();
+        var seen = new HashSet<string>(StringComparer.Ordinal);
+        foreach (var seg in layout.Segments)
+            foreach (var w in seg.Section?.Warnings ?? [])
+                if (seen.Add(w.Message)) list.Add(w);
+        list.AddRange(segmentWarnings);
+        return list;
+    }
+
+    private static AnalysisWarning Unbounded(SegmentResult s, SectionStiffness section) => new("unbounded-peak-shear",
+        $"segment '{s.Label}' ({s.From}-{s.To}): the peak shear is unbounded at a sharp re-entrant corner of its section " +
+        $"'{section.Description}' (the {s.MaxShear / 1e6:G4} MPa on the analysis mesh grows with refinement), so no factor of safety is given; " +
+        "model the real fillet radius (r= on the keyseat and spline templates)");
 
     /// <summary>A shaft with no support must carry torques that sum to zero, else it would spin up (a loose shaft).</summary>
     private static void CheckBalance(ShaftLayout layout, double[] f)
@@ -93,10 +120,10 @@ internal sealed class ShaftAnalysis(ShaftModel model)
             .Concat(layout.Elements.Where(e => e.Distributed != 0)
                 .Select(e => (What: $"distributed torque on {layout.Stations[e.A].Name}-{layout.Stations[e.B].Name}", T: e.Distributed * e.Length)))
             .ToArray();
-        string list = string.Join(", ", contributions.Select(c => $"{c.What} {ShaftLayout.Num(c.T)} N*m"));
+        string list = string.Join(", ", contributions.Select(c => $"{c.What} {ShaftLayout.Num(c.T)} N·m"));
         throw new SectionTwistException("loose-shaft",
-            $"loose shaft: there is no fixed support and the applied torques do not balance: net torque {ShaftLayout.Num(net)} N*m about the axis ({list}); " +
-            $"add a fixed support where the torque is reacted (for example the drum, brake or motor station), or add the missing balancing torque of {ShaftLayout.Num(-net)} N*m");
+            $"loose shaft: there is no fixed support and the applied torques do not balance: net torque {ShaftLayout.Num(net)} N·m about the axis ({list}); " +
+            $"add a fixed support where the torque is reacted (for example the drum, brake or motor station), or add the missing balancing torque of {ShaftLayout.Num(-net)} N·m");
     }
 
     private static double[] SolveReduced(ShaftLayout layout, double[] k, double[] f, int n, int[] constrained)
@@ -129,11 +156,11 @@ internal sealed class ShaftAnalysis(ShaftModel model)
     }
 
     /// <summary>Builds the segment results; internal torques below 1e-10 of the total applied torque are round-off and reported as 0.</summary>
-    private static SegmentResult[] BuildSegments(ShaftLayout layout, double[] phi, double scale)
+    private static SegmentResult[] BuildSegments(ShaftLayout layout, double[] phi, double scale, double phiScale, List<AnalysisWarning> warnings)
     {
-        double Clean(double t) => Math.Abs(t) <= 1e-10 * scale ? 0 : t;
+        double Clean(double t) => Units.NumberText.Clean(t, scale, TorqueRoundOff);
         double? limit = layout.Model.TwistRateLimit;
-        var list = new List<(double Pos, SegmentResult R)>();
+        var list = new List<(double Pos, SegmentResult R, SectionStiffness? Section)>();
         for (int i = 0; i < layout.Elements.Count; i++)
         {
             var e = layout.Elements[i];
@@ -143,7 +170,9 @@ internal sealed class ShaftAnalysis(ShaftModel model)
             double tau = e.MaxShear(ta);
             double rate = e.MaxTwistRate(ta);
             double? lim = seg.Material.LimitShear;
-            double? sf = lim is null ? null : tau > 0 ? lim.Value / tau : double.PositiveInfinity;
+            // a sharp re-entrant corner: the mesh value is no bound on the stress, so there is no factor of safety to give
+            bool unbounded = tau > 0 && seg.Section is { PeakShearUnbounded: true };
+            double? sf = lim is null || unbounded ? null : tau > 0 ? lim.Value / tau : double.PositiveInfinity;
             list.Add((layout.Stations[e.A].Position, new SegmentResult
             {
                 Label = seg.Label,
@@ -155,15 +184,18 @@ internal sealed class ShaftAnalysis(ShaftModel model)
                 Stiffness = e.Stiffness,
                 TorqueAtFrom = ta,
                 TorqueAtTo = tb,
-                Twist = phi[e.B] - phi[e.A],
+                Twist = Units.NumberText.Clean(phi[e.B] - phi[e.A], phiScale),
                 MaxShear = tau,
                 ShearLimit = lim,
                 SafetyFactor = sf,
                 MaxTwistRate = rate,
                 ExceedsShearLimit = lim is not null && tau > lim.Value,
+                PeakShearUnbounded = unbounded,
                 ExceedsTwistRateLimit = limit is not null && rate > limit.Value,
-            }));
+            }, seg.Section));
         }
-        return [.. list.OrderBy(p => p.Pos).Select(p => p.R)];
+        var sorted = list.OrderBy(p => p.Pos).ToList();
+        foreach (var (_, r, section) in sorted) if (r.PeakShearUnbounded) warnings.Add(Unbounded(r, section!));
+        return [.. sorted.Select(p => p.R)];
     }
 }

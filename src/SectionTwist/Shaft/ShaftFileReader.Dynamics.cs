@@ -63,14 +63,14 @@ internal sealed partial class ShaftFileReader
         {
             if (n is not YamlScalarNode s || string.IsNullOrEmpty(s.Value)) throw _file.Error(n, key, $"expected a station name, found {YamlMap.Describe(n)}");
             if (stationShaft.ContainsKey(s.Value)) return s.Value;
-            string? near = YamlMap.Nearest(s.Value, stationShaft.Keys);
+            string? near = Suggest.Nearest(s.Value, stationShaft.Keys);
             throw _file.Error(n, key, $"no station named '{s.Value}' in any shaft{(near is null ? "" : $"; did you mean '{near}'?")}; fix the name or add the station");
         }
         string ShaftRef(YamlNode n, string key)
         {
             string v = n is YamlScalarNode { Value: { } s } ? s : throw _file.Error(n, key, "expected a shaft name");
             if (shafts.Any(x => x.Name == v)) return v;
-            string? near = YamlMap.Nearest(v, shafts.Select(x => x.Name));
+            string? near = Suggest.Nearest(v, shafts.Select(x => x.Name));
             throw _file.Error(n, key, $"no shaft named '{v}'{(near is null ? "" : $"; did you mean '{near}'?")} (shafts: {string.Join(", ", shafts.Select(x => x.Name))})");
         }
 

@@ -1,3 +1,4 @@
+using SectionTwist.Units;
 using YamlDotNet.RepresentationModel;
 
 namespace SectionTwist.Shaft;
@@ -11,22 +12,32 @@ internal sealed partial class ShaftFileReader
         ("stress", QuantityKind.Stress), ("power", QuantityKind.Power), ("speed", QuantityKind.Speed),
     ];
 
-    private ShaftDisplayUnits ReadUnits(YamlNode? node)
+    /// <summary>
+    /// The units block: defaults for plain numbers, and the display units of the results (the standard system of the
+    /// length unit, with the torque, stress, modulus, power and speed units the block names, spelled the one printed way).
+    /// </summary>
+    private UnitSystem ReadUnits(YamlNode? node)
     {
-        var d = ShaftDisplayUnits.Default;
-        if (node is null) return d;
+        var system = UnitSystem.SiMillimetre;
+        if (node is null) return system;
         var m = new YamlMap(_file, node, "units", [.. UnitKeys.Select(u => u.Key)]);
-        var found = new Dictionary<string, DisplayUnit>();
         foreach (var (key, kind) in UnitKeys)
         {
             if (m.String(key) is not { } symbol) continue;
             double f = QuantityText.UnitFactor(symbol, kind)
                 ?? throw _file.Error(m.Get(key)!, key, $"'{YamlGuard.Short(symbol)}' is not a {key} unit; use one of {QuantityText.Examples(kind)}");
             _file.SetDefault(kind, symbol, f);
-            found[key] = new DisplayUnit(symbol, f);
         }
-        return new ShaftDisplayUnits(found.GetValueOrDefault("length", d.Length), found.GetValueOrDefault("torque", d.Torque),
-            found.GetValueOrDefault("stress", d.Stress), found.GetValueOrDefault("modulus", d.Modulus));
+        // lengths first: they pick the system (in, ft: US; m: SI-m; else SI-mm), then the named units replace its own
+        if (m.String("length") is { } len)
+            system = UnitSystem.For(LengthUnit.TryParse(len, out var lu) ? lu : new LengthUnit(DisplayUnit.Spell(len), DisplayUnit.Spell(len), QuantityText.UnitFactor(len, QuantityKind.Length)!.Value));
+        foreach (var (key, measure) in new[] { ("torque", Measure.Torque), ("stress", Measure.Stress), ("modulus", Measure.Modulus), ("power", Measure.Power), ("speed", Measure.Speed) })
+        {
+            if (m.String(key) is not { } symbol) continue;
+            var kind = UnitKeys.First(u => u.Key == key).Kind;
+            system = system.With(measure, new DisplayUnit(DisplayUnit.Spell(symbol), QuantityText.UnitFactor(symbol, kind)!.Value));
+        }
+        return system;
     }
 
     private Dictionary<string, Material> ReadMaterials(YamlNode? node)
@@ -45,7 +56,7 @@ internal sealed partial class ShaftFileReader
                 string key = m.String("library")!;
                 if (!ShaftMaterials.TryGet(key, out var found))
                 {
-                    string? near = YamlMap.Nearest(key, ShaftMaterials.All.Keys);
+                    string? near = Suggest.Nearest(key, ShaftMaterials.All.Keys);
                     throw _file.Error(ln, "library", $"unknown library material '{YamlGuard.Short(key)}'{(near is null ? "" : $"; did you mean '{near}'?")} (library: {YamlMap.Names(ShaftMaterials.All.Keys)})");
                 }
                 lib = found;
@@ -114,7 +125,7 @@ internal sealed partial class ShaftFileReader
         if (materials.TryGetValue(key, out var m)) return m;
         if (ShaftMaterials.TryGet(key, out var lib)) return lib;
         var all = materials.Keys.Concat(ShaftMaterials.All.Keys).ToArray();
-        string? near = YamlMap.Nearest(key, all);
+        string? near = Suggest.Nearest(key, all);
         throw _file.Error(node, "material", $"unknown material '{YamlGuard.Short(key)}'{(near is null ? "" : $"; did you mean '{near}'?")} (file: {(materials.Count == 0 ? "none" : YamlMap.Names(materials.Keys))}; library: {YamlMap.Names(ShaftMaterials.All.Keys)}); define it under 'materials:'");
     }
 

@@ -18,6 +18,7 @@ internal sealed partial class ShaftFileReader
     private readonly Dictionary<string, double> _stations = new(StringComparer.Ordinal);
     private readonly List<Station> _stationList = [];
     private readonly List<(string A, string B)> _segmentEnds = [];
+    private readonly Dictionary<string, YamlNode> _stationNodes = new(StringComparer.Ordinal);
 
     public ShaftFileReader(string fileName, string baseDirectory, Func<SectionSource, SectionStiffness>? resolver)
     {
@@ -33,6 +34,9 @@ internal sealed partial class ShaftFileReader
         try { stream.Load(new StringReader(text)); }
         catch (YamlException e)
         {
+            // the scanner places a tab in the indentation at the start of the enclosing block (often 1:1): name the tab's own line
+            if (TabIndentation(text) is { } tab)
+                throw new SectionTwistException("shaft-file", $"{_file.FileName}:{tab.Line}:{tab.Column}: a tab in the indentation; YAML indents with spaces only: replace the tab with spaces");
             throw new SectionTwistException("shaft-file", $"{_file.FileName}:{e.Start.Line}:{e.Start.Column}: not valid YAML: {FirstLine(e.InnerException?.Message ?? e.Message)}; check the indentation and quoting there");
         }
         catch (InvalidOperationException)
@@ -58,6 +62,7 @@ internal sealed partial class ShaftFileReader
         var loads = root.Get("loads") is { } ln ? ReadLoads(ln) : [];
         var fixedStations = root.Get("supports") is { } sn ? ReadSupports(sn) : [];
         var springs = root.Get("springs") is { } spn ? ReadSprings(spn) : [];
+        CheckJoined(springs);
         string? reference = root.Get("reference") is { } rn ? StationName(rn, "reference") : null;
         double? limit = root.Quantity("twistLimit", QuantityKind.TwistRate);
         if (limit is <= 0) throw _file.Error(root.Get("twistLimit")!, "twistLimit", "the twist-rate limit must be positive, e.g. '0.25 deg/m'");
@@ -76,6 +81,18 @@ internal sealed partial class ShaftFileReader
             Warping = root.Get("warping") is { } wn ? ReadWarping(wn) : null,
         };
         return new ShaftDocument(path, model, units) { Dynamics = root.Get("dynamics") is { } dn ? ReadDynamics(dn, model, materials, sections) : null };
+    }
+
+    /// <summary>Line and column (1-based) of the first tab in a line's leading white space, or null.</summary>
+    internal static (int Line, int Column)? TabIndentation(string text)
+    {
+        var lines = text.Split('\n');
+        for (int i = 0; i < lines.Length; i++)
+        {
+            for (int j = 0; j < lines[i].Length && lines[i][j] is ' ' or '\t'; j++)
+                if (lines[i][j] == '\t') return (i + 1, j + 1);
+        }
+        return null;
     }
 
     private static (long Line, long Column) LastGoodPosition(string text)
@@ -128,7 +145,15 @@ internal sealed partial class ShaftFileReader
                 if (ShaftValueRange.Check(QuantityKind.Length, x) is { } far)
                     throw _file.Error(m.Get("after")!, "after", $"station '{YamlGuard.Short(name)}' ends up at {Si(x)} m, which {far}");
             }
+            if (previous is { } before && x < before)
+            {
+                var last = _stationList[^1];
+                throw _file.Error(m.KeyNode(m.Has("at") ? "at" : "after"), m.Has("at") ? "at" : "after",
+                    $"station '{YamlGuard.Short(name)}' at {Len(x)} comes before the previous station '{last.Name}' at {Len(before)} " +
+                    $"(line {_stationNodes[last.Name].Start.Line}); list the stations in order along the axis, or correct the position");
+            }
             _stations[name] = x;
+            _stationNodes[name] = item;
             _stationList.Add(new Station(name, x));
             previous = x;
         }
@@ -141,7 +166,7 @@ internal sealed partial class ShaftFileReader
         if (node is not YamlScalarNode s || string.IsNullOrEmpty(s.Value))
             throw _file.Error(node, key, $"expected a station name, found {YamlMap.Describe(node)}");
         if (_stations.ContainsKey(s.Value)) return s.Value;
-        string? near = YamlMap.Nearest(s.Value, _stations.Keys);
+        string? near = Suggest.Nearest(s.Value, _stations.Keys);
         throw _file.Error(node, key, $"no station named '{YamlGuard.Short(s.Value)}'{(near is null ? "" : $"; did you mean '{near}'?")} (stations: {YamlMap.Names(_stations.Keys)}); add it under 'stations:' or fix the name");
     }
 
@@ -169,7 +194,7 @@ internal sealed partial class ShaftFileReader
                     string key = ss.Value ?? "";
                     if (!sections.TryGetValue(key, out var entry))
                     {
-                        string? near = YamlMap.Nearest(key, sections.Keys);
+                        string? near = Suggest.Nearest(key, sections.Keys);
                         throw _file.Error(sn, "section", $"no section named '{YamlGuard.Short(key)}'{(near is null ? "" : $"; did you mean '{near}'?")} (sections: {(sections.Count == 0 ? "none" : YamlMap.Names(sections.Keys))}); define it under 'sections:' or write it inline, e.g. 'section: {{round: 40 mm}}'");
                     }
                     section = entry.Get();
@@ -184,9 +209,41 @@ internal sealed partial class ShaftFileReader
                 seg = new ShaftSegment(from, to, new RoundTaper(a, b), material) { Name = name };
             }
             _segmentEnds.Add((from, to));
+            _segmentNodes.Add(item);
             list.Add(seg);
         }
+        CheckOverlaps(list);
         return list;
+    }
+
+    private readonly List<YamlNode> _segmentNodes = [];
+
+    /// <summary>Two segments over the same stretch of the axis: named with both lines (the model would only say "overlap").</summary>
+    private void CheckOverlaps(List<ShaftSegment> segments)
+    {
+        var spans = segments.Select((s, i) => (Lo: Math.Min(_stations[s.From], _stations[s.To]), Hi: Math.Max(_stations[s.From], _stations[s.To]), Index: i))
+            .OrderBy(x => x.Lo).ThenBy(x => x.Index).ToList();
+        for (int k = 1; k < spans.Count; k++)
+        {
+            var (prev, cur) = (spans[k - 1], spans[k]);
+            if (cur.Lo >= prev.Hi - 1e-12 * Math.Max(1, Math.Abs(prev.Hi))) continue;
+            var (a, b) = cur.Index > prev.Index ? (prev, cur) : (cur, prev);
+            throw _file.Error(_segmentNodes[b.Index], "segments",
+                $"segment {segments[b.Index].Label} overlaps segment {segments[a.Index].Label} (line {_segmentNodes[a.Index].Start.Line}) between " +
+                $"{Len(Math.Max(a.Lo, b.Lo))} and {Len(Math.Min(a.Hi, b.Hi))}; each length of shaft belongs to one segment: join consecutive stations");
+        }
+    }
+
+    /// <summary>A station that no segment or spring touches has no rotation to compute: named with its line.</summary>
+    private void CheckJoined(List<TorsionalSpring> springs)
+    {
+        var joined = new HashSet<string>(StringComparer.Ordinal);
+        foreach (var (a, b) in _segmentEnds) { joined.Add(a); joined.Add(b); }
+        foreach (var sp in springs) { joined.Add(sp.StationA); joined.Add(sp.StationB); }
+        foreach (var st in _stationList)
+            if (!joined.Contains(st.Name))
+                throw _file.Error(_stationNodes[st.Name], "stations",
+                    $"station '{st.Name}' is joined to no segment or spring, so its rotation is undetermined; connect it with a segment or spring, or remove it");
     }
 
     private (double, double) ReadTaper(YamlNode node)
@@ -280,4 +337,11 @@ internal sealed partial class ShaftFileReader
     }
 
     private static string Si(double v) => v.ToString("G6", CultureInfo.InvariantCulture);
+
+    /// <summary>A length (m) in the file's length unit for messages, e.g. <c>120 mm</c> (mm when the file names none).</summary>
+    private string Len(double metres)
+    {
+        var (symbol, factor) = _file.Default(QuantityKind.Length) ?? ("mm", 1e-3);
+        return $"{Units.NumberText.Format(metres / factor, 6)} {Units.DisplayUnit.Spell(symbol)}";
+    }
 }

@@ -103,7 +103,7 @@ internal sealed class ShaftLayout
             int a = Index(sp.StationA, where), b = Index(sp.StationB, where);
             if (a == b) throw new SectionTwistException("bad-spring", $"{where}: both ends are station '{sp.StationA}'; a spring joins two different stations");
             if (!(sp.Stiffness > 0) || !double.IsFinite(sp.Stiffness))
-                throw new SectionTwistException("bad-spring", $"{where}: stiffness {sp.Stiffness} N*m/rad must be positive");
+                throw new SectionTwistException("bad-spring", $"{where}: stiffness {sp.Stiffness} N·m/rad must be positive");
             Springs.Add((a, b, sp));
         }
 

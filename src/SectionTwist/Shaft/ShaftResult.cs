@@ -19,10 +19,20 @@ public sealed record ShaftResult
     public required IReadOnlyList<SpringResult> Springs { get; init; }
     /// <summary>The station whose rotation is zero.</summary>
     public required string ReferenceStation { get; init; }
-    /// <summary>The segment with the lowest factor of safety (highest shear utilisation); null when no segment has a shear limit or all carry zero torque.</summary>
+    /// <summary>
+    /// The segment with the lowest factor of safety (highest shear utilisation), or a loaded segment whose peak shear is
+    /// unbounded (those come first); null when no loaded segment has a shear limit or an unbounded peak.
+    /// </summary>
     public required SegmentResult? GoverningSegment { get; init; }
     /// <summary>The segment with the highest twist rate.</summary>
     public required SegmentResult? GoverningTwistSegment { get; init; }
+    /// <summary>
+    /// Warnings about the result: section-analysis warnings (each names its section) and one per loaded segment whose peak
+    /// shear is unbounded. Every output form (text, JSON, CSV, report) carries them.
+    /// </summary>
+    public IReadOnlyList<Torsion.AnalysisWarning> Warnings { get; init; } = [];
+    /// <summary>True when some loaded segment's peak shear is unbounded (see <see cref="SegmentResult.PeakShearUnbounded"/>).</summary>
+    public bool AnyPeakShearUnbounded => Segments.Any(s => s.PeakShearUnbounded);
     /// <summary>Non-uniform torsion with restrained warping (when <see cref="ShaftModel.Warping"/> restrains a station), else null.</summary>
     public WarpingTorsion.WarpingMemberResult? Warping { get; init; }
     /// <summary>Warnings about warping: open sections solved with free warping, and the cautions of the warping analysis.</summary>

@@ -1,34 +1,81 @@
 using System.Globalization;
 using System.Text;
+using SectionTwist.Units;
 
 namespace SectionTwist.Shaft;
 
-/// <summary>CSV tables of a shaft result in SI units (the unit is part of each column name), written with <see cref="AtomicFile"/>.</summary>
+/// <summary>
+/// CSV tables of a shaft result in a <see cref="UnitSystem"/> (the unit is part of each column name, in ASCII, e.g.
+/// <c>torque_at_from_N*m</c> becomes <c>torque_at_from_Nm</c>), written with <see cref="AtomicFile"/>: stations.csv,
+/// segments.csv (with the <c>check</c> column), warnings.csv, and bending.csv (SI) when the model has bending. Numbers keep
+/// full precision.
+/// </summary>
 internal static class ShaftResultCsv
 {
-    public static string Stations(ShaftResult r)
+    public static string Stations(ShaftResult r, UnitSystem u)
     {
-        var sb = new StringBuilder("name,position_m,rotation_rad,rotation_deg,applied_torque_Nm,fixed\n");
+        var sb = new StringBuilder($"name,{Col("position", u.Length)},rotation_rad,rotation_deg,{Col("applied_torque", u.Torque)},fixed\n");
         foreach (var s in r.Stations)
-            sb.Append(CultureInfo.InvariantCulture, $"{Text(s.Name)},{N(s.Position)},{N(s.Rotation)},{N(s.Rotation * 180 / Math.PI)},{N(s.AppliedTorque)},{(s.IsFixed ? "yes" : "no")}\n");
+            sb.Append(CultureInfo.InvariantCulture, $"{Text(s.Name)},{N(u.Length.FromSi(s.Position))},{N(s.Rotation)},{N(s.Rotation * 180 / Math.PI)},{N(u.Torque.FromSi(s.AppliedTorque))},{(s.IsFixed ? "yes" : "no")}\n");
         return sb.ToString();
     }
 
-    public static string Segments(ShaftResult r)
+    public static string Segments(ShaftResult r, UnitSystem u)
     {
-        var sb = new StringBuilder("name,from,to,length_m,section,material,torque_at_from_Nm,torque_at_to_Nm,twist_rad,max_shear_Pa,shear_limit_Pa,safety_factor,max_twist_rate_rad_per_m,exceeds_shear_limit,exceeds_twist_limit\n");
+        var sb = new StringBuilder(
+            $"name,from,to,{Col("length", u.Length)},section,material,{Col("torque_at_from", u.Torque)},{Col("torque_at_to", u.Torque)},twist_rad," +
+            $"{Col("max_shear", u.Stress)},{Col("shear_limit", u.Stress)},safety_factor,{Col("max_twist_rate", u.TwistRate)},exceeds_shear_limit,exceeds_twist_limit,peak_shear_unbounded,check\n");
         foreach (var s in r.Segments)
             sb.Append(CultureInfo.InvariantCulture,
-                $"{Text(s.Label)},{Text(s.From)},{Text(s.To)},{N(s.Length)},{Text(s.Section)},{Text(s.Material.Name)},{N(s.TorqueAtFrom)},{N(s.TorqueAtTo)},{N(s.Twist)},{N(s.MaxShear)},{N(s.ShearLimit)},{N(s.SafetyFactor)},{N(s.MaxTwistRate)},{(s.ExceedsShearLimit ? "yes" : "no")},{(s.ExceedsTwistRateLimit ? "yes" : "no")}\n");
+                $"{Text(s.Label)},{Text(s.From)},{Text(s.To)},{N(u.Length.FromSi(s.Length))},{Text(s.Section)},{Text(s.Material.Name)},{N(u.Torque.FromSi(s.TorqueAtFrom))},{N(u.Torque.FromSi(s.TorqueAtTo))},{N(s.Twist)}," +
+                $"{(s.PeakShearUnbounded ? "" : N(u.Stress.FromSi(s.MaxShear)))},{N(s.ShearLimit is { } l ? u.Stress.FromSi(l) : null)},{N(s.SafetyFactor)},{N(u.TwistRate.FromSi(s.MaxTwistRate))}," +
+                $"{(s.ExceedsShearLimit ? "yes" : "no")},{(s.ExceedsTwistRateLimit ? "yes" : "no")},{(s.PeakShearUnbounded ? "yes" : "no")},{Text(s.Check)}\n");
         return sb.ToString();
     }
 
-    /// <summary>Writes stations.csv and segments.csv into <paramref name="directory"/>.</summary>
-    public static void WriteAll(ShaftResult r, string directory)
+    /// <summary>One row per warning: its code and message (header only when there is none).</summary>
+    public static string Warnings(ShaftResult r)
     {
-        AtomicFile.WriteText(Path.Combine(directory, "stations.csv"), Stations(r));
-        AtomicFile.WriteText(Path.Combine(directory, "segments.csv"), Segments(r));
-        if (r.Bending is { } b) AtomicFile.WriteText(Path.Combine(directory, "bending.csv"), Bending.BendingCsv.Samples(b));
+        var sb = new StringBuilder("code,message\n");
+        foreach (var w in r.Warnings) sb.Append(CultureInfo.InvariantCulture, $"{Text(w.Code)},{Text(w.Message)}\n");
+        foreach (var w in r.WarpingWarnings) sb.Append(CultureInfo.InvariantCulture, $"warping,{Text(w)}\n");
+        return sb.ToString();
+    }
+
+    /// <summary>
+    /// Writes stations.csv, segments.csv and warnings.csv (and bending.csv when the model has bending) into
+    /// <paramref name="directory"/>; returns the files written.
+    /// </summary>
+    public static IReadOnlyList<string> WriteAll(ShaftResult r, string directory, UnitSystem units)
+    {
+        var files = new List<string>();
+        void Put(string name, string text)
+        {
+            string path = Path.Combine(directory, name);
+            AtomicFile.WriteText(path, text);
+            files.Add(path);
+        }
+        Put("stations.csv", Stations(r, units));
+        Put("segments.csv", Segments(r, units));
+        Put("warnings.csv", Warnings(r));
+        if (r.Bending is { } b) Put("bending.csv", Bending.BendingCsv.Samples(b));
+        return files;
+    }
+
+    /// <summary>A column name with its unit in ASCII: <c>max_shear_MPa</c>, <c>max_twist_rate_deg_per_m</c>, <c>torque_at_to_Nm</c>, <c>applied_torque_lbf_in</c>.</summary>
+    internal static string Col(string name, DisplayUnit unit)
+    {
+        var b = new StringBuilder(name).Append('_');
+        string a = unit.Ascii;
+        for (int i = 0; i < a.Length; i++)
+        {
+            char c = a[i];
+            if (char.IsAsciiLetterOrDigit(c)) b.Append(c);
+            else if (c == '/') b.Append("_per_");
+            else if (c == '*') b.Append(i > 0 && a[i - 1] == 'N' ? "" : "_"); // N*m -> Nm (the usual spelling), lbf*in -> lbf_in
+            else if (c == ' ') b.Append('_');
+        }
+        return b.ToString();
     }
 
     internal static string N(double? v) => v is { } x ? double.IsFinite(x) ? x.ToString("R", CultureInfo.InvariantCulture) : double.IsPositiveInfinity(x) ? "inf" : "" : "";

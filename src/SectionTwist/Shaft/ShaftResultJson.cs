@@ -5,7 +5,8 @@ namespace SectionTwist.Shaft;
 
 /// <summary>
 /// The JSON form of a shaft result, in SI base units (m, N*m, Pa, rad; twist rates rad/m), camelCase keys.
-/// Non-finite numbers (an infinite factor of safety of an unloaded segment) are written as null.
+/// Non-finite numbers (an infinite factor of safety of an unloaded segment) are written as null, and so is the peak shear of
+/// a segment whose peak is unbounded (a sharp re-entrant corner). The analysis warnings are in <c>warnings</c>.
 /// </summary>
 internal static class ShaftResultJson
 {
@@ -42,6 +43,7 @@ internal static class ShaftResultJson
         referenceStation = r.ReferenceStation,
         twistRateLimit = r.TwistRateLimit,
         anyLimitExceeded = r.AnyLimitExceeded,
+        anyPeakShearUnbounded = r.AnyPeakShearUnbounded,
         governingSegment = r.GoverningSegment?.Label,
         governingTwistSegment = r.GoverningTwistSegment?.Label,
         endToEndTwist = r.EndToEndTwist,
@@ -61,16 +63,20 @@ internal static class ShaftResultJson
             torqueAtFrom = s.TorqueAtFrom,
             torqueAtTo = s.TorqueAtTo,
             twist = s.Twist,
-            maxShear = s.MaxShear,
+            // a sharp re-entrant corner: the mesh value is no bound on the stress, so no number is given
+            maxShear = s.PeakShearUnbounded ? (double?)null : s.MaxShear,
+            peakShearUnbounded = s.PeakShearUnbounded,
             shearLimit = s.ShearLimit,
             shearLimitBasis = s.Material.LimitBasis,
             safetyFactor = Num(s.SafetyFactor),
             maxTwistRate = s.MaxTwistRate,
             exceedsShearLimit = s.ExceedsShearLimit,
             exceedsTwistRateLimit = s.ExceedsTwistRateLimit,
+            check = s.Check,
         }),
         reactions = r.Reactions.Select(x => new { station = x.Station, torque = x.Torque }),
         springs = r.Springs.Select(x => new { name = x.Label, stationA = x.StationA, stationB = x.StationB, torque = x.Torque, windup = x.Windup }),
+        warnings = r.Warnings.Select(x => new { code = x.Code, message = x.Message }),
         warpingWarnings = r.WarpingWarnings,
         warping = r.Warping is not { } w ? null : new
         {

@@ -15,7 +15,7 @@ public static class ShaftSections
 {
     /// <summary>Creates a resolver for <see cref="ShaftFile.Load"/>.</summary>
     /// <param name="options">Section analysis options; null for the defaults.</param>
-    /// <param name="notes">Receives one line per analysed section and per analysis warning (e.g. a sharp re-entrant corner); may be null.</param>
+    /// <param name="notes">Receives one line per analysed section (the analysis warnings travel with the result, <see cref="SectionStiffness.Warnings"/>); may be null.</param>
     /// <param name="cancellationToken">Stops the reading and analysis of the sections.</param>
     public static Func<SectionSource, SectionStiffness> CreateResolver(AnalysisOptions? options = null, Action<string>? notes = null, CancellationToken cancellationToken = default) =>
         source => Resolve(source, options, notes, cancellationToken);
@@ -28,27 +28,27 @@ public static class ShaftSections
     public static SectionStiffness Resolve(SectionSource source, AnalysisOptions? options = null, Action<string>? notes = null, CancellationToken cancellationToken = default)
     {
         var (r, outer) = Analyze(source, options, notes, cancellationToken);
-        return Stiffness(r, source.TemplateSpec ?? Path.GetFileName(source.DxfPath), outer) with
+        return Stiffness(source, r, outer) with
         {
             Bending = SectionTwist.Bending.BendingSection.FromSection(r, outer),
             PolarMoment = r.PolarMoment,
         };
     }
 
-    /// <summary>The shaft-model values of an analysed section, with its warping values when they were solved.</summary>
-    internal static SectionStiffness Stiffness(SectionResult r, string? description, double? outer) =>
-        new(r.TorsionConstant, r.MaxShearPerTorque, description, outer)
-        {
-            WarpingConstant = r.Warping?.WarpingConstant,
-            MaxSectorialCoordinate = r.Warping?.MaxSectorialCoordinate,
-            WarpingSensitive = r.Warping?.Classification == Warping.WarpingClass.WarpingSensitive,
-        };
+    /// <summary>
+    /// The shaft's view of a solved section: J, peak shear per unit torque, description, outer size, whether the peak is
+    /// unbounded (a sharp re-entrant corner), the analysis warnings (each prefixed with the section's name) and the warping
+    /// values when they were solved.
+    /// </summary>
+    internal static SectionStiffness Stiffness(SectionSource source, SectionResult r, double? outer) =>
+        SectionStiffness.FromAnalysis(r, source.Name, outer) with { Description = source.TemplateSpec ?? Path.GetFileName(source.DxfPath) };
 
     /// <summary>
     /// Builds and analyses one section and returns the full result with the template's outer size (null for a DXF outline),
     /// for callers that keep the solved field (the report's pictures).
     /// </summary>
-    internal static (SectionResult Result, double? OuterSize) Analyze(SectionSource source, AnalysisOptions? options, Action<string>? notes, CancellationToken ct = default)
+    internal static (SectionResult Result, double? OuterSize) Analyze(SectionSource source, AnalysisOptions? options, Action<string>? notes,
+        CancellationToken ct = default, IProgress<AnalysisProgress>? progress = null)
     {
         ArgumentNullException.ThrowIfNull(source);
         Geometry.Profile profile;
@@ -87,12 +87,13 @@ public static class ShaftSections
         else throw new SectionTwistException("bad-section", $"{source.Location}: section '{source.Name}' names neither a template nor a DXF file");
 
         // open-looking sections also get their warping function (restrained-warping check of the shaft)
-        var r = SectionAnalyzer.Analyze(profile, (options ?? AnalysisOptions.Default) with { WarpingIfOpen = true }, ct);
-        notes?.Invoke($"section '{source.Name}' ({source.TemplateSpec ?? Path.GetFileName(source.DxfPath)}): J = {r.TorsionConstant:G5} m^4, " +
-                      $"peak shear per unit torque {r.MaxShearPerTorque:G5} 1/m^3 ({r.Mesh.Elements} elements)");
-        foreach (var w in r.Warnings) notes?.Invoke($"section '{source.Name}': warning: {w.Message}");
+        var r = SectionAnalyzer.Analyze(profile, (options ?? AnalysisOptions.Default) with { WarpingIfOpen = true }, ct, progress);
+        // the values and the warnings go into the results (tables, JSON, CSV, report); the note only says what was done
+        notes?.Invoke($"section '{source.Name}' ({source.TemplateSpec ?? Path.GetFileName(source.DxfPath)}): analysed, {r.Mesh.Elements} elements" +
+                      (r.Warnings.Count > 0 ? $", {r.Warnings.Count} warning(s) (listed with the results)" : ""));
         if (r.Warping is { Classification: Warping.WarpingClass.WarpingSensitive } wr)
-            notes?.Invoke($"section '{source.Name}': open thin-walled, warping constant Iw = {wr.WarpingConstant:G5} m^6, warping length for steel {wr.SteelWarpingLength:G4} m");
+            notes?.Invoke($"section '{source.Name}': open thin-walled, warping constant Iw = {Units.NumberText.Format(wr.WarpingConstant, 5)} m⁶, " +
+                          $"warping length for steel {Units.NumberText.Format(wr.SteelWarpingLength, 4)} m");
         return (r, outer);
     }
 }

@@ -82,6 +82,9 @@ internal static class YamlGuard
         }
         catch (YamlException e)
         {
+            // the scanner places a tab in the indentation at the start of the enclosing block (often 1:1): name the tab's own line
+            if ((e.InnerException?.Message ?? e.Message).Contains("tab", StringComparison.OrdinalIgnoreCase) && ShaftFileReader.TabIndentation(text) is { } tab)
+                throw new SectionTwistException("shaft-file", $"{file}:{tab.Line}:{tab.Column}: a tab in the indentation; YAML indents with spaces only: replace the tab with spaces");
             var at = e.Start.Line > 0 ? e.Start : last;
             throw new SectionTwistException("shaft-file", $"{file}:{Math.Max(1, at.Line)}:{Math.Max(1, at.Column)}: not valid YAML: {FirstLine(e.InnerException?.Message ?? e.Message)}; check the indentation and quoting there");
         }

@@ -20,7 +20,7 @@ internal sealed class YamlMap
             string key = k is YamlScalarNode s ? s.Value ?? "" : "";
             if (!allowed.Contains(key, StringComparer.Ordinal))
             {
-                string? near = Nearest(key, allowed);
+                string? near = Suggest.Nearest(key, allowed);
                 throw file.Error(k, key, $"unknown key in {what}{(near is null ? "" : $"; did you mean '{near}'?")} (allowed: {string.Join(", ", allowed)})");
             }
             _entries[key] = (k, v);
@@ -68,33 +68,5 @@ internal sealed class YamlMap
         var list = names.ToList();
         string shown = string.Join(", ", list.Take(12).Select(n => YamlGuard.Short(n, 30)));
         return list.Count <= 12 ? shown : $"{shown}, ... ({list.Count} in all)";
-    }
-
-    /// <summary>The allowed word nearest to <paramref name="word"/> by edit distance (at most 3, case-insensitive), or null.</summary>
-    internal static string? Nearest(string word, IEnumerable<string> candidates)
-    {
-        string? best = null;
-        int bestD = int.MaxValue;
-        foreach (var c in candidates)
-        {
-            int d = Distance(word.ToLowerInvariant(), c.ToLowerInvariant());
-            if (d < bestD) { bestD = d; best = c; }
-        }
-        return bestD <= Math.Max(2, Math.Min(3, word.Length / 2)) ? best : null;
-    }
-
-    private static int Distance(string a, string b)
-    {
-        var prev = new int[b.Length + 1];
-        var cur = new int[b.Length + 1];
-        for (int j = 0; j <= b.Length; j++) prev[j] = j;
-        for (int i = 1; i <= a.Length; i++)
-        {
-            cur[0] = i;
-            for (int j = 1; j <= b.Length; j++)
-                cur[j] = Math.Min(Math.Min(cur[j - 1] + 1, prev[j] + 1), prev[j - 1] + (a[i - 1] == b[j - 1] ? 0 : 1));
-            (prev, cur) = (cur, prev);
-        }
-        return prev[b.Length];
     }
 }

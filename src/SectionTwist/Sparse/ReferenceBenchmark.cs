@@ -56,7 +56,7 @@ internal static class ReferenceBenchmark
             f.Solve(b, x);
             tSolve = sw.Elapsed.TotalSeconds;
             method = "cholesky";
-            detail = $"nnz(L) {s.NonZerosL:N0}, flops {s.Flops:E2}";
+            detail = $"nnz(L) {s.NonZerosL:N0}, flops {Units.NumberText.Exponent(s.Flops, 3)}";
         }
         else
         {

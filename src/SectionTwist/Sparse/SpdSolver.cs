@@ -3,22 +3,26 @@ namespace SectionTwist.Sparse;
 /// <summary>
 /// Entry point for symmetric positive definite systems: a sparse Cholesky factorization with a fill-reducing
 /// ordering (<see cref="SymbolicCholesky"/>) up to <see cref="IterativeThreshold"/> unknowns, conjugate gradients
-/// preconditioned by smoothed-aggregation multigrid (<see cref="AmgCgSolver"/>) above it.
+/// preconditioned by smoothed-aggregation multigrid (<see cref="AmgCgSolver"/>) above it, falling back to the
+/// Cholesky factorization when the iteration stalls short of both its tolerance and the attainable floor.
 /// </summary>
 internal static class SpdSolver
 {
     /// <summary>Unknowns above which <see cref="Create(CscMatrix, CancellationToken)"/> uses multigrid-CG.</summary>
     public static int IterativeThreshold { get; set; } = 200_000;
 
+    /// <summary>Relative residual asked of the iterative solver when the caller names none.</summary>
+    public const double DefaultTolerance = 1e-11;
+
     /// <summary>Prepares a solver for <paramref name="a"/> (full symmetric storage).</summary>
     public static ISpdSolver Create(CscMatrix a, CancellationToken cancellationToken = default)
-        => Create(a, null, cancellationToken);
+        => Create(a, DefaultTolerance, cancellationToken);
 
-    /// <summary>Prepares a solver, optionally with node coordinates for the ordering.</summary>
-    public static ISpdSolver Create(CscMatrix a, double[]? coordinates, CancellationToken cancellationToken = default)
+    /// <summary>Prepares a solver whose iterative branch aims at the relative residual <paramref name="tolerance"/>.</summary>
+    public static ISpdSolver Create(CscMatrix a, double tolerance, CancellationToken cancellationToken = default)
         => a.N > IterativeThreshold
-            ? AmgCgSolver.Create(a, 1e-11, cancellationToken)
-            : CreateDirect(a, cancellationToken, coordinates);
+            ? new IterativeWithFallback(a, AmgCgSolver.Create(a, tolerance, cancellationToken), cancellationToken)
+            : CreateDirect(a, cancellationToken);
 
     /// <summary>Sparse Cholesky regardless of size.</summary>
     public static ISpdSolver CreateDirect(CscMatrix a, CancellationToken cancellationToken = default, double[]? coordinates = null)
@@ -38,4 +42,28 @@ internal static class SpdSolver
     /// see the solver notes).
     /// </summary>
     public const double SupernodalFlopsPerNonzero = 40;
+
+    /// <summary>Multigrid-CG first; the sparse Cholesky factorization when it stalls.</summary>
+    internal sealed class IterativeWithFallback(CscMatrix a, AmgCgSolver iterative, CancellationToken ct) : ISpdSolver
+    {
+        private ISpdSolver? _direct;
+
+        /// <summary>The iterative solver.</summary>
+        public AmgCgSolver Iterative => iterative;
+
+        /// <summary>True once a stalled iteration made the solver factorize the matrix.</summary>
+        public bool UsedFallback => _direct is not null;
+
+        /// <inheritdoc/>
+        public void Solve(ReadOnlySpan<double> b, Span<double> x)
+        {
+            if (_direct is null)
+            {
+                iterative.Solve(b, x);
+                if (iterative.LastOutcome.Converged) return;
+            }
+            _direct ??= CreateDirect(a, ct);
+            _direct.Solve(b, x);
+        }
+    }
 }

@@ -52,19 +52,47 @@ internal static class AdaptiveSizing
     }
 
     /// <summary>
+    /// Largest turn of the boundary tangent (radians) over one edge near the peak shear for the peak to count as
+    /// resolved: 15 deg. Coarser, the smoothed boundary peak on a fillet is not yet in its asymptotic range (its
+    /// coarse-to-fine change can be smaller than its remaining error); from 15 deg per edge on, three-mesh sequences
+    /// show orders of 2 to 4 (docs/verification.md).
+    /// </summary>
+    public const double PeakEdgeTurn = 15 * Math.PI / 180;
+
+    /// <summary>True when every boundary edge within 3 % of the peak shear turns by at most <see cref="PeakEdgeTurn"/>.</summary>
+    public static bool PeakResolved(TorsionSolution sol)
+    {
+        foreach (var be in PeakEdges(sol))
+            if (Turn(be) > PeakEdgeTurn * (1 + 1e-9)) return false;
+        return true;
+    }
+
+    private static IEnumerable<MeshBoundaryEdge> PeakEdges(TorsionSolution sol) =>
+        sol.Mesh.BoundaryEdges.Where(be => Math.Abs(sol.BoundaryFlux[be.Mid]) >= 0.97 * sol.MaxGradient);
+
+    /// <summary>Angle between the curve's tangents at the two ends of the edge (0 on straight edges).</summary>
+    private static double Turn(MeshBoundaryEdge be)
+    {
+        Point2 t0 = be.Curve.DerivativeAt(be.T0), t1 = be.Curve.DerivativeAt(be.T1);
+        return Math.Abs(Math.Atan2(Point2.Cross(t0, t1), Point2.Dot(t0, t1)));
+    }
+
+    /// <summary>
     /// Size sources at the boundary edges whose shear is within 3 % of the peak: the new size is the edge length times
-    /// <paramref name="factor"/> (at most 200 sources, evenly picked).
+    /// <paramref name="factor"/>, and small enough that a curved edge turns by at most 0.8 <see cref="PeakEdgeTurn"/>
+    /// (at most 200 sources, evenly picked).
     /// </summary>
     public static IReadOnlyList<(Point2 Where, double Size)> PeakSources(TorsionSolution sol, double factor)
     {
         var mesh = sol.Mesh;
         var list = new List<(Point2, double)>();
-        foreach (var be in mesh.BoundaryEdges)
+        foreach (var be in PeakEdges(sol))
         {
-            double q = Math.Abs(sol.BoundaryFlux[be.Mid]);
-            if (!(q >= 0.97 * sol.MaxGradient)) continue;
             double len = Point2.Distance(mesh.Node(be.A), mesh.Node(be.Mid)) + Point2.Distance(mesh.Node(be.Mid), mesh.Node(be.B));
-            list.Add((mesh.Node(be.Mid), factor * len));
+            double turn = Turn(be);
+            double size = factor * len;
+            if (turn > 0.8 * PeakEdgeTurn) size = Math.Min(size, len * 0.8 * PeakEdgeTurn / turn);
+            list.Add((mesh.Node(be.Mid), size));
         }
         if (list.Count <= 200) return list;
         int step = (list.Count + 199) / 200;

@@ -12,8 +12,11 @@ namespace SectionTwist.Torsion;
 /// </summary>
 internal static class TorsionSolver
 {
-    /// <summary>Solves on <paramref name="mesh"/>; <paramref name="holeArea"/> gives the exact area enclosed by each loop (used for holes).</summary>
-    public static TorsionSolution Solve(Mesh mesh, double[] holeArea, CancellationToken ct = default)
+    /// <summary>
+    /// Solves on <paramref name="mesh"/>; <paramref name="holeArea"/> gives the exact area enclosed by each loop (used for
+    /// holes); <paramref name="tolerance"/> is the relative residual asked of an iterative linear solve.
+    /// </summary>
+    public static TorsionSolution Solve(Mesh mesh, double[] holeArea, CancellationToken ct = default, double tolerance = SpdSolver.DefaultTolerance)
     {
         int nNodes = mesh.NodeCount, nEl = mesh.ElementCount;
         var loops = mesh.Loops;
@@ -55,7 +58,7 @@ internal static class TorsionSolver
         }
         var k = trip.ToCsc();
         var u = new double[n];
-        if (n > 0) SpdSolver.Create(k, ct).Solve(f, u);
+        if (n > 0) SpdSolver.Create(k, tolerance, ct).Solve(f, u);
         double residual = n > 0 ? k.RelativeResidual(u, f) : 0;
 
         var phi = new double[nNodes];

@@ -75,12 +75,17 @@ public static class VerificationSuite
     /// Runs every case at the given accuracy (default 1e-4); cases sharing a profile share one analysis. At an accuracy
     /// finer than 1e-4 the tolerances tighten: J to the accuracy itself, the peak shear to 1e-3.
     /// </summary>
-    public static IReadOnlyList<VerificationOutcome> Run(AnalysisOptions? options = null, CancellationToken cancellationToken = default)
+    public static IReadOnlyList<VerificationOutcome> Run(AnalysisOptions? options = null, CancellationToken cancellationToken = default) =>
+        RunReporting(options, null, cancellationToken);
+
+    /// <summary>As <see cref="Run"/>, reporting before each case and at the end the fraction of the cases done (0 to 1).</summary>
+    public static IReadOnlyList<VerificationOutcome> RunReporting(AnalysisOptions? options, IProgress<double>? progress, CancellationToken cancellationToken = default)
     {
         var results = new Dictionary<Func<Profile>, SectionResult>();
         var outcomes = new List<VerificationOutcome>();
         foreach (var c in Cases)
         {
+            progress?.Report((double)outcomes.Count / Cases.Count);
             if (!results.TryGetValue(c.Build, out var r))
                 results[c.Build] = r = SectionAnalyzer.Analyze(c.Build(), options, cancellationToken);
             double v = c.Quantity == VerifiedQuantity.TorsionConstant ? r.TorsionConstant : r.MaxShearPerTorque;
@@ -89,6 +94,7 @@ public static class VerificationSuite
             double tol = acc >= 1e-4 ? c.Tolerance : c.Quantity == VerifiedQuantity.TorsionConstant ? Math.Max(acc, 1e-10) : Math.Min(c.Tolerance, 1e-3);
             outcomes.Add(new VerificationOutcome(c, v, Math.Abs(v - c.Reference) / Math.Abs(c.Reference), est, tol));
         }
+        progress?.Report(1);
         return outcomes;
     }
 }

@@ -4,6 +4,7 @@ using SectionTwist.Import.Dxf;
 using SectionTwist.Profiles;
 using SectionTwist.Shaft;
 using SectionTwist.Torsion;
+using SectionTwist.Units;
 using SectionTwist.Verification;
 
 namespace SectionTwist.Tests.Api;
@@ -169,11 +170,30 @@ public partial class ApiDocsTests
     }
 
     [Fact]
+    public void Shaft_summary_in_US_units_converts_the_torque_and_flags_the_sharp_keyseat()
+    {
+        // T = P / omega = 2200 W / (90 rpm) = 233.4 N*m; 1 lbf*in = 4.4482216152605 N x 0.0254 m exactly (the international
+        // pound-force and inch), so T = 2066 lbf*in. The keyed body (keyed:d=40,r=0, no floor radius) has a sharp re-entrant
+        // corner: its peak shear is unbounded (Timoshenko and Goodier, sec. 113; docs/references.md), so the summary says so.
+        var res = ApiExamples.TwoStepShaft();
+        string s = ApiExamples.ShaftSummary(res, UnitSystem.US);
+        double lbfIn = 2200 / (90 * 2 * Math.PI / 60) / (4.4482216152605 * 0.0254);
+        Assert.Contains($"T = {NumberText.Format(Math.Sign(res.Segments[0].InternalTorque) * lbfIn, 5)} lbf·in", s, StringComparison.Ordinal);
+        Assert.Contains("psi", s, StringComparison.Ordinal);
+        Assert.Contains("deg/ft", s, StringComparison.Ordinal);
+        Assert.Contains("peak shear unbounded", s, StringComparison.Ordinal);
+        Assert.Contains("check unbounded", s, StringComparison.Ordinal);
+        Assert.Contains("warning [sharp-reentrant-corner]: section 'keyed d=40 mm'", s, StringComparison.Ordinal);
+        Assert.Contains("warning [unbounded-peak-shear]", s, StringComparison.Ordinal);
+        Assert.Null(res.Segments[1].SafetyFactor);
+    }
+
+    [Fact]
     public void Own_source_bar_matches_the_rectangle_series()
     {
         // 60 x 10 bar: J = beta a b^3 from the series of Timoshenko and Goodier, sec. 109.
         var r = ApiExamples.AnalyseWithOwnSource();
-        var (beta, _) = VerificationSuite.RectangleSeries(0.060, 0.010);
+        var (beta, _) = SectionTwist.Tests.References.Published.Rectangle(0.060, 0.010);
         Tol.Rel(beta * 0.060 * Math.Pow(0.010, 3), r.TorsionConstant, 2e-4);
         Assert.Equal("bar:60x10", r.Profile.Name);
     }

@@ -132,8 +132,8 @@ public static class ApiExamples
     {
         Material steel = ShaftMaterials.All["steel-1045-cd"];
         SectionStiffness journal = SectionStiffness.Round(0.030);           // d = 30 mm, exact
-        SectionResult keyed = SectionAnalyzer.Analyze(ProfileTemplates.Create("keyed:d=40"));
-        var body = new SectionStiffness(keyed.TorsionConstant, keyed.MaxShearPerTorque, "keyed d=40 mm", 0.040);
+        SectionResult keyed = SectionAnalyzer.Analyze(ProfileTemplates.Create("keyed:d=40,r=0")); // r=0: a sharp keyseat floor
+        SectionStiffness body = SectionStiffness.FromAnalysis(keyed, "keyed d=40 mm", 0.040); // J, peak shear, warnings
         var model = new ShaftModel
         {
             Title = "drum shaft",
@@ -150,6 +150,18 @@ public static class ApiExamples
         ShaftResult result = ShaftSolver.Solve(model);
         // result.EndToEndTwist in rad, result.Segments[i].MaxShear in Pa, result.Reactions[0].Torque in N*m.
         return result;
+    }
+
+    // --- docs/api.md: "Showing results in a unit system" ---
+    public static string ShaftSummary(ShaftResult result, UnitSystem units)
+    {
+        var lines = new List<string>();
+        foreach (SegmentResult s in result.Segments)
+            lines.Add($"{s.Label}: T = {units.Torque.Text(s.InternalTorque)}, " +
+                      $"peak shear {(s.PeakShearUnbounded ? "unbounded" : units.Stress.Text(s.MaxShear, 4))}, " +
+                      $"twist rate {units.TwistRate.Text(s.MaxTwistRate, 4)}, check {s.Check}");
+        lines.AddRange(result.Warnings.Select(w => $"warning [{w.Code}]: {w.Message}"));
+        return string.Join(Environment.NewLine, lines);
     }
 
     // --- docs/api.md: "Your own profile source" ---

@@ -42,7 +42,7 @@ public sealed class JsonSchemaTests : IDisposable
     public void Section_json_with_warnings_and_an_unbounded_shear_estimate_matches_its_schema()
     {
         // A sharp keyseat: the peak-shear error estimate is infinite (written as null) and warnings are present.
-        var n = ValidOutput("section", "section", "keyed:d=40", "--accuracy", "1e-3", "--json");
+        var n = ValidOutput("section", "section", "keyed:d=40,r=0", "--accuracy", "1e-3", "--json");
         Assert.Null(n["estimatedRelativeError"]!["maxShear"]);
         Assert.NotEmpty(n["warnings"]!.AsArray());
     }
@@ -129,6 +129,28 @@ public sealed class JsonSchemaTests : IDisposable
     {
         var n = ValidOutput("shaft", "shaft", Path.Combine(RepoPaths.SampleProfiles, "winch-shaft.yaml"), "--json");
         Assert.Equal("motor", (string?)n["referenceStation"]);
+    }
+
+    [Fact]
+    public void Shaft_json_with_an_unbounded_peak_and_warnings_matches_its_schema()
+    {
+        // A sharp keyseat (keyed:d=50,r=0, no floor radius) in a loaded segment: maxShear and safetyFactor null, warnings present.
+        string yaml = """
+            units: {length: mm, torque: N*m}
+            stations:
+              - {name: A, at: 0}
+              - {name: B, at: 100}
+            segments:
+              - {from: A, to: B, section: {template: "keyed:d=50,r=0"}, material: steel-1045-cd}
+            loads:
+              - {at: B, torque: 300}
+            supports: {fixed: [A]}
+            """;
+        string path = Path.Combine(_dir, "sharp.yaml");
+        File.WriteAllText(path, yaml);
+        var n = ValidOutput("shaft", "shaft", path, "--json");
+        Assert.Null(n["segments"]![0]!["maxShear"]);
+        Assert.NotEmpty(n["warnings"]!.AsArray());
     }
 
     [Fact]

@@ -11,7 +11,8 @@ internal static class CliRunner
     public static (int Code, string Out, string Err) Run(bool terminal, params string[] args)
     {
         var o = new StringWriter(); var e = new StringWriter();
-        int code = Program.Run(args, new CliContext(o, e, terminal));
+        // on a "terminal" the progress line shows at once, so tests see it
+        int code = Program.Run(args, new CliContext(o, e, terminal) { ProgressDelay = TimeSpan.Zero });
         return (code, o.ToString(), e.ToString());
     }
 

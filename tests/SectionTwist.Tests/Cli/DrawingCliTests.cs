@@ -21,7 +21,7 @@ public class DrawingCliTests
 
     private static double Area(string output)
     {
-        var m = Regex.Match(output, @"area A\s+(\S+) mm\^2");
+        var m = Regex.Match(output, @"area A\s+(\S+) mm(?:\^2|²)");
         Assert.True(m.Success, output);
         return double.Parse(m.Groups[1].Value, CultureInfo.InvariantCulture);
     }

@@ -17,7 +17,7 @@ public class SectionCommandTests
     [InlineData("0,0\n10,0\n0,10\n10,10\n", "self-intersection", "crosses itself")]
     [InlineData("0,0\n10,0\n10,10\n0,10\n\n5,5\n15,5\n15,7\n5,7\n", "self-intersection", "touches or crosses")]
     [InlineData("0,0\n10,0\n20,0\n", "zero-area", "encloses no area")]
-    [InlineData("0,0\n1,0\narc, 1,1, 3,3\n", "bad-arc", "")]
+    [InlineData("0,0\n1,0\narc, 2,0, 3,0\n3,3\n", "bad-arc", "outline.csv:3: arc through (0.001, 0), (0.002, 0), (0.003, 0): the three points are collinear; move the through point off the line")]
     [InlineData("0,0\n10,zero\n10,10\n", "bad-point-list", "is not a number")]
     public void Bad_outlines_give_one_line_errors_and_exit_2(string text, string code, string fragment)
     {
@@ -29,7 +29,7 @@ public class SectionCommandTests
         Assert.Contains("error:", err, StringComparison.Ordinal);
         Assert.Contains(fragment, err, StringComparison.Ordinal);
         Assert.DoesNotContain("   at ", err, StringComparison.Ordinal);
-        _ = code;
+        Assert.Equal(code, Assert.Throws<SectionTwistException>(() => SectionTwist.Import.ProfileSources.Load(path)).Code);
     }
 
     [Fact]
@@ -96,7 +96,7 @@ public class SectionCommandTests
     [Fact]
     public void Sharp_keyseat_warns_about_the_singular_corner()
     {
-        var (exit, output, _) = CliRunner.Run("section", "keyed:d=40");
+        var (exit, output, _) = CliRunner.Run("section", "keyed:d=40,r=0");
         Assert.Equal(0, exit);
         Assert.Contains("sharp-reentrant-corner", output, StringComparison.Ordinal);
         Assert.Contains("fillet", output, StringComparison.Ordinal);

@@ -49,7 +49,7 @@ public sealed class ShaftReportCliTests : IDisposable
         string report = Path.Combine(_dir, "out", "shaft.html");
         var (code, output, err) = CliRun.Run("shaft", WriteShaft(), "--report", report);
         Assert.True(code == 0, err);
-        Assert.Contains("governing segment", output, StringComparison.Ordinal); // the tables still print
+        Assert.Contains("Governing segment (shear)", output, StringComparison.Ordinal); // the tables still print
         Assert.True(File.Exists(report));
         string html = File.ReadAllText(report);
         Assert.Contains("Shaft report: report test shaft", html, StringComparison.Ordinal);

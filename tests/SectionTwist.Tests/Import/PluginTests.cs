@@ -29,7 +29,7 @@ public sealed class PluginTests : IDisposable
     }
 
     // Square a x a: J = beta a^4 with beta from the series of Timoshenko and Goodier, sec. 109 (0.1406 for a square).
-    private static double SquareJ(double a) => VerificationSuite.RectangleSeries(a, a).Beta * Math.Pow(a, 4);
+    private static double SquareJ(double a) => SectionTwist.Tests.References.Published.Rectangle(a, a).Beta * Math.Pow(a, 4);
 
     [Fact]
     public void A_plugin_from_a_folder_loads_isolated_and_supplies_a_profile_that_analyses()

@@ -35,7 +35,7 @@ public sealed class PointListTests : IDisposable
         var b = SectionAnalyzer.Analyze(fromTemplate);
         // Both within the requested 1e-4 of the same exact value, so within 2e-4 of each other.
         Tol.Rel(b.TorsionConstant, a.TorsionConstant, 2e-4);
-        var (beta, _) = SectionTwist.Verification.VerificationSuite.RectangleSeries(0.03, 0.03);
+        var (beta, _) = SectionTwist.Tests.References.Published.Rectangle(0.03, 0.03);
         Tol.Rel(beta * Math.Pow(0.03, 4), a.TorsionConstant, 2e-4, "Timoshenko & Goodier sec. 109 series, square");
     }
 

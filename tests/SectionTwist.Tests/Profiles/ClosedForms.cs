@@ -32,6 +32,27 @@ internal static class ClosedForms
             2.0 / 3 * (G3(r, u) - yF * yF * yF * u), 2 * (G2(r, u) - yF * u * u * u / 3));
     }
 
+    /// <summary>
+    /// Material a fillet of radius r adds between a straight flank y = c and a convex core circle of radius R (the root of a
+    /// straight-sided spline tooth): corner K = (sqrt(R^2 - c^2), c); fillet centre C at distance r from the line and
+    /// R + r from the core centre; tangent points T1 = (C.x, c) and T2 = C R / (R + r). The area is the quadrilateral
+    /// K T1 C T2 minus the fillet sector at C and minus the circular segment of the core cut off by the chord K T2
+    /// (plane geometry, common practice).
+    /// </summary>
+    public static double LineCircleFilletArea(double coreRadius, double c, double r)
+    {
+        double kx = Math.Sqrt(coreRadius * coreRadius - c * c);
+        double cy = c + r, cx = Math.Sqrt((coreRadius + r) * (coreRadius + r) - cy * cy);
+        double t2x = cx * coreRadius / (coreRadius + r), t2y = cy * coreRadius / (coreRadius + r);
+        (double X, double Y)[] quad = [(kx, c), (cx, c), (cx, cy), (t2x, t2y)];
+        double shoelace = 0;
+        for (int i = 0; i < 4; i++) shoelace += quad[i].X * quad[(i + 1) % 4].Y - quad[(i + 1) % 4].X * quad[i].Y;
+        double sector = 0.5 * r * r * Math.Acos(((0) * (t2x - cx) + (-r) * (t2y - cy)) / (r * r));
+        double phi = Math.Atan2(t2y, t2x) - Math.Atan2(c, kx);
+        double segment = 0.5 * coreRadius * coreRadius * (phi - Math.Sin(phi));
+        return Math.Abs(shoelace) / 2 - sector - segment;
+    }
+
     /// <summary>Area of a fillet spandrel (square r x r minus a quarter disc).</summary>
     public static double SpandrelArea(double r) => (1 - Math.PI / 4) * r * r;
 

@@ -53,8 +53,9 @@ public class TemplateCliTests
     {
         var (code, output, err) = Run(true, "sweep", "circle:d=20", "--vary", "d=10mm:30mm:3", "--accuracy", "1e-3", "--json");
         Assert.True(code == 0, err);
-        Assert.Contains("sweep: 3/3 steps done", err, StringComparison.Ordinal); // progress on a terminal, on stderr only
-        Assert.DoesNotContain("steps done", output, StringComparison.Ordinal);
+        Assert.Contains("sweep over 3 steps (3 of 3 done): 100 %", err, StringComparison.Ordinal); // progress on a terminal, on stderr only
+        Assert.DoesNotContain("steps", output.Split('\n')[0], StringComparison.Ordinal);
+        Assert.DoesNotContain("3 of 3 done", output, StringComparison.Ordinal);
         using var doc = JsonDocument.Parse(output);
         var steps = doc.RootElement.GetProperty("steps").EnumerateArray().ToList();
         Assert.Equal(3, steps.Count);
@@ -67,18 +68,28 @@ public class TemplateCliTests
         }
     }
 
-    // Deeper keyseats remove material at the outside: J falls monotonically and stays below the plain round.
+    // Two opposite sharp keyseats 12 mm wide, 4, 6 and 8 mm deep in a 40 mm shaft (s = 1.5, 1, 0.75; x = 0.2, 0.3, 0.4,
+    // inside the fit's range): each J within 2 % of Roark's two-keyway fit (Published.KeywaysJ), the relative column
+    // J / (pi D^4 / 32) likewise, and J falls with depth.
     [Fact]
-    public void Sweep_of_keyseat_depth_lowers_J_monotonically()
+    public void Sweep_of_keyseat_depth_follows_Roark_two_keyway_fit()
     {
-        var (code, output, err) = Run("sweep", "keyed:d=40,n=2,b=12", "--vary", "t1=3:7:3", "--accuracy", "1e-3", "--csv");
+        var (code, output, err) = Run("sweep", "keyed:d=40,n=2,b=12,r=0", "--vary", "t1=4:8:3", "--accuracy", "1e-3", "--csv");
         Assert.True(code == 0, err);
         Assert.Equal("", err); // no progress display when stderr is not a terminal
         // The quoted spec (it contains commas) is the last column.
         var rows = output.Split('\n', StringSplitOptions.RemoveEmptyEntries).Skip(1).Select(l => l.Split(',')).ToList();
         Assert.StartsWith("t1,outerSize_m,torsionConstant_m4", output, StringComparison.Ordinal);
         Assert.Equal(3, rows.Count);
-        double[] rel = rows.Select(r => double.Parse(r[4], System.Globalization.CultureInfo.InvariantCulture)).ToArray();
-        Assert.True(rel[0] < 1 && rel[0] > rel[1] && rel[1] > rel[2], string.Join(" ", rel));
+        double[] depth = [0.004, 0.006, 0.008];
+        var inv = System.Globalization.CultureInfo.InvariantCulture;
+        double round = Math.PI * Math.Pow(0.040, 4) / 32;
+        for (int i = 0; i < 3; i++)
+        {
+            double roark = References.Published.KeywaysJ(2, 0.020, 0.012, depth[i]);
+            Tol.Rel(roark, double.Parse(rows[i][2], inv), 0.02, References.Published.Roark);
+            Tol.Rel(roark / round, double.Parse(rows[i][4], inv), 0.02, References.Published.Roark + ", relative to the round");
+        }
+        Assert.True(double.Parse(rows[0][2], inv) > double.Parse(rows[1][2], inv) && double.Parse(rows[1][2], inv) > double.Parse(rows[2][2], inv));
     }
 }

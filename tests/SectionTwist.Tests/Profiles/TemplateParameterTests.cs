@@ -5,7 +5,7 @@ namespace SectionTwist.Tests.Profiles;
 /// <summary>Standard-size defaults (DIN 6885-1, ISO 14, hollow-section radii) and rejection of impossible parameters.</summary>
 public class TemplateParameterTests
 {
-    // DIN 6885-1 / ISO 773 rows (shared/REFERENCES.md): shaft diameter -> keyseat width b and depth t1, mm.
+    // DIN 6885-1 / ISO 773 rows (the test copy: References/Published.Din6885): shaft diameter -> keyseat width b and depth t1, mm.
     [Theory]
     [InlineData(7, 2, 1.2)]
     [InlineData(16, 5, 3.0)]
@@ -36,13 +36,17 @@ public class TemplateParameterTests
         var e = Assert.Throws<SectionTwistException>(() => ProfileTemplates.Create("keyed:d=150"));
         Assert.Contains("DIN 6885-1 lists shafts over 6 up to 110 mm", e.Message, StringComparison.Ordinal);
         Assert.Contains("give b= and t1= explicitly", e.Message, StringComparison.Ordinal);
-        Assert.True(ProfileTemplates.Create("keyed:d=150,b=36,t1=12").Properties.Area > 0);
+        // Explicit sizes work: circle minus the keyseat strip plus two floor spandrels of the default radius, 0.70 mm for
+        // a 36 mm key (ISO 773 / DIN 6885-1 from memory, Published.KeyseatRadiusFromMemory); exact integrals (ClosedForms).
+        double radius = 0.075, r = 0.7e-3;
+        double area = Math.PI * radius * radius - ClosedForms.Keyseat(radius, 0.036, radius - 0.012).A + 2 * ClosedForms.SpandrelArea(r);
+        Tol.Rel(area, ProfileTemplates.Create("keyed:d=150,b=36,t1=12").Properties.Area, 1e-10);
     }
 
     [Fact]
     public void Iso14_rows_by_series_or_by_size()
     {
-        // REFERENCES.md: light 8x32x36 (6), medium 8x36x42 (7).
+        // ISO 14 rows checked against the standard (Published.Iso14Checked): light 8x32x36 (6), medium 8x36x42 (7).
         Tol.Rel(ProfileTemplates.Create("spline:N=8,d=32,D=36,B=6").Properties.Area, ProfileTemplates.Create("spline:series=light,d=32").Properties.Area, 1e-14);
         Tol.Rel(ProfileTemplates.Create("spline:N=8,d=36,D=42,B=7").Properties.Area, ProfileTemplates.Create("iso14:8x36x42").Properties.Area, 1e-14);
         Tol.Rel(ProfileTemplates.Create("spline:N=8,d=36,D=42,B=7").Properties.Area, ProfileTemplates.Create("spline:series=medium,N=8,d=36").Properties.Area, 1e-14);
@@ -56,7 +60,7 @@ public class TemplateParameterTests
     [Fact]
     public void Hollow_section_default_radii()
     {
-        // Hot-finished ro = 1.5 t, ri = t (REFERENCES.md, memory); cold-formed EN 10219-2 (from memory) by wall thickness.
+        // Hot-finished ro = 1.5 t, ri = t (from memory); cold-formed EN 10219-2 (from memory) by wall thickness.
         var (oh, ih) = HollowSectionTemplates.DefaultRadii(0.005, cold: false);
         Tol.Rel(0.0075, oh, 1e-14);
         Tol.Rel(0.005, ih, 1e-14);

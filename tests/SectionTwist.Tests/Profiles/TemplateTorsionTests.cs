@@ -1,4 +1,5 @@
 using SectionTwist.Profiles;
+using SectionTwist.Tests.References;
 using SectionTwist.Torsion;
 
 namespace SectionTwist.Tests.Profiles;
@@ -13,7 +14,7 @@ public class TemplateTorsionTests
 
     private static double J(string spec) => SectionAnalyzer.Analyze(ProfileTemplates.Create(spec), Coarse).TorsionConstant;
 
-    private const string Roark = "Roark's Formulas for Stress and Strain, 7th ed., Table 10.1 (fit within 2 %)";
+    private const string Roark = Published.Roark + " (fits within 2 %)";
 
     // Two opposite flats, x = h/r: C = 0.7854 - 0.4053x - 3.5810x^2 + 5.2708x^3 - 2.0772x^4 (0 <= x <= 0.8); K = 2 C r^4.
     [Theory]
@@ -21,23 +22,16 @@ public class TemplateTorsionTests
     [InlineData(0.5)]
     public void Two_flats_match_Roark(double x)
     {
-        double r = 0.020;
-        double c = 0.7854 - 0.4053 * x - 3.5810 * x * x + 5.2708 * x * x * x - 2.0772 * Math.Pow(x, 4);
         string h = (x * 20).ToString(System.Globalization.CultureInfo.InvariantCulture);
-        Tol.Rel(2 * c * Math.Pow(r, 4), J($"flats:D=40,h={h},n=2"), 0.02, Roark);
+        Tol.Rel(Published.TwoFlatsJ(0.020, x * 0.020), J($"flats:D=40,h={h},n=2"), 0.02, Roark);
     }
 
     // Four flats, x = h/r <= 0.293: C = 0.7854 - 0.7x - 7.7982x^2 + 14.578x^3.
     [Fact]
-    public void Four_flats_match_Roark()
-    {
-        double r = 0.020, x = 0.2;
-        double c = 0.7854 - 0.7 * x - 7.7982 * x * x + 14.578 * x * x * x;
-        Tol.Rel(2 * c * Math.Pow(r, 4), J("flats:D=40,h=4,n=4"), 0.02, Roark);
-    }
+    public void Four_flats_match_Roark() => Tol.Rel(Published.FourFlatsJ(0.020, 0.004), J("flats:D=40,h=4,n=4"), 0.02, Roark);
 
     // Keyways: half-width a, depth b from the outer radius, s = a/b, x = b/r; C = 0.7854 + C2 x + C3 x^2 + C4 x^3.
-    // Sharp keyseat corners: the peak shear is singular there, so only J is compared.
+    // The fit is for sharp keyways (r=0): the peak shear is singular there, so only J is compared.
     [Theory]
     [InlineData(2, 12.0, 6.0)]  // s = 1, x = 0.3
     [InlineData(2, 10.0, 8.0)]  // s = 0.625, x = 0.4
@@ -45,26 +39,11 @@ public class TemplateTorsionTests
     [InlineData(4, 8.0, 5.0)]   // s = 0.8, x = 0.25
     public void Keyways_match_Roark(int n, double width, double depth)
     {
-        double r = 0.020, s = width / 2 / depth, x = depth / 20;
-        double c2, c3, c4;
-        if (n == 2)
-        {
-            c2 = -0.0795 + 0.1286 * s - 0.1169 * s * s;
-            c3 = -1.4126 - 3.8589 * s + 1.3292 * s * s;
-            c4 = 0.7098 + 4.1936 * s - 1.1053 * s * s;
-        }
-        else
-        {
-            c2 = -0.1496 + 0.2773 * s - 0.211 * s * s;
-            c3 = -2.9138 - 8.2354 * s + 2.5782 * s * s;
-            c4 = 2.2991 + 12.097 * s - 2.2838 * s * s;
-        }
-        double c = 0.7854 + c2 * x + c3 * x * x + c4 * x * x * x;
-        string spec = string.Create(System.Globalization.CultureInfo.InvariantCulture, $"keyed:d=40,n={n},b={width},t1={depth}");
-        Tol.Rel(2 * c * Math.Pow(r, 4), J(spec), 0.02, Roark);
+        string spec = string.Create(System.Globalization.CultureInfo.InvariantCulture, $"keyed:d=40,n={n},b={width},t1={depth},r=0");
+        Tol.Rel(Published.KeywaysJ(n, 0.020, width * 1e-3, depth * 1e-3), J(spec), 0.02, Roark);
     }
 
-    /// <summary>EN 10210-2 / EN 10219-2 torsion constant formula for a rectangular hollow section (shared/REFERENCES.md).</summary>
+    /// <summary>EN 10210-2 / EN 10219-2 torsion constant formula for a rectangular hollow section (EN 10210-2 / EN 10219-2, the standards' It formula).</summary>
     private static double En10210It(double b, double h, double t, double ro, double ri)
     {
         double rc = (ro + ri) / 2;
@@ -74,7 +53,7 @@ public class TemplateTorsionTests
         return t * t * t * p / 3 + 2 * k * ah;
     }
 
-    // EN 10210-2 tabulated It (cm^4): 40x2.6: 14.0; 60x4: 72.5; 80x5: 217 (REFERENCES.md). The formula reproduces
+    // EN 10210-2 tabulated It (cm^4): 40x2.6: 14.0; 60x4: 72.5; 80x5: 217 (EN 10210-2 tables). The formula reproduces
     // them (rounding of the table: 1 %); the exact Saint-Venant J of the rounded section is 2-3 % above the formula,
     // so the FE value is compared with the formula within 3 % (the standard's formula is itself approximate).
     [Theory]
@@ -92,15 +71,6 @@ public class TemplateTorsionTests
         Assert.True(j >= formula * 0.995, $"exact J {j:G5} should not fall below the thin-wall formula {formula:G5}");
     }
 
-    /// <summary>Rectangle a x b (a >= b): beta from the series of Timoshenko and Goodier, ch. 10 (REFERENCES.md).</summary>
-    private static double RectangleJ(double a, double b)
-    {
-        double sum = 0;
-        for (int n = 1; n < 200; n += 2) sum += Math.Tanh(n * Math.PI * a / (2 * b)) / Math.Pow(n, 5);
-        double beta = (1 - 192 / Math.Pow(Math.PI, 5) * (b / a) * sum) / 3;
-        return beta * a * b * b * b;
-    }
-
     [Theory]
     [InlineData("rect:b=60,h=20", 0.060, 0.020)]
     [InlineData("rect:b=20,h=20", 0.020, 0.020)]
@@ -108,6 +78,6 @@ public class TemplateTorsionTests
     [InlineData("flat:b=80,t=4", 0.080, 0.004)]
     public void Rectangle_and_flat_bar_match_the_series(string spec, double a, double b)
     {
-        Tol.Rel(RectangleJ(a, b), J(spec), 3e-3, "Saint-Venant series, Timoshenko and Goodier ch. 10");
+        Tol.Rel(Published.RectangleJ(a, b), J(spec), 3e-3, Published.RectangleSource);
     }
 }

@@ -24,22 +24,31 @@ public class AdapterTests
     }
 
     [Fact]
-    public void Section_plot_hook_writes_a_png_of_the_default_size_with_the_marker_at_the_peak()
+    public void Section_plot_hook_writes_a_png_of_the_default_size_with_the_marker_beside_the_peak()
     {
         var r = RectangleResult();
         string path = Path.Combine(Path.GetTempPath(), $"st-plot-{Guid.NewGuid():N}.png");
         try
         {
-            SectionTwist.Cli.SectionPlotHook.Write(r, path, 1000);
+            SectionTwist.Cli.SectionPlotHook.Write(r, path, 1000, "rect:b=60,h=30", null);
             using var bmp = SKBitmap.Decode(path);
             var o = new SectionPlotOptions { Torque = 1000 };
             Assert.Equal((o.Width, o.Height), (bmp.Width, bmp.Height));
             var at = SectionPicture.Layout(SectionPlotData.From(r), o).ToPixel(r.MaxShearLocation);
+            // the hot spot itself stays visible (issue 11: the marker sat on it) ...
             var px = bmp.GetPixel((int)Math.Round(at.X), (int)Math.Round(at.Y));
-            Assert.True(px.Red > 200 && px.Green < 60, $"marker pixel {px}");
+            Assert.False(IsAlert(px), $"the peak pixel is covered by the marker: {px}");
+            // ... and the arrow's red tip is close beside it
+            bool near = false;
+            for (int dx = -20; dx <= 20; dx++)
+                for (int dy = -20; dy <= 20; dy++)
+                    near |= dx * dx + dy * dy <= 400 && IsAlert(bmp.GetPixel((int)Math.Round(at.X) + dx, (int)Math.Round(at.Y) + dy));
+            Assert.True(near, "no marker within 20 px of the peak");
         }
         finally { File.Delete(path); }
     }
+
+    private static bool IsAlert(SKColor c) => c.Red > 200 && c.Green < 60 && c.Blue < 90;
 
     [Fact]
     public void Section_chapter_lists_J_in_the_display_unit()

@@ -65,7 +65,8 @@ public class SectionPictureTests
     [Fact]
     public void Peak_marker_is_drawn_where_the_result_puts_the_peak()
     {
-        // two renders with the peak on opposite long sides: the marker colour follows the given location
+        // two renders with the peak on opposite long sides: the arrow follows the given location and stops beside the hot
+        // spot, which stays visible (issue 11: the marker used to cover it)
         foreach (double side in new[] { -1.0, 1.0 })
         {
             var (data, _) = Rectangle(new Point2(0, side * HalfShort));
@@ -74,9 +75,22 @@ public class SectionPictureTests
             var L = SectionPicture.Layout(data, o);
             var at = L.ToPixel(0, side * HalfShort);
             var other = L.ToPixel(0, -side * HalfShort);
-            Assert.True(ColourDistance(bmp.GetPixel((int)Math.Round(at.X), (int)Math.Round(at.Y)), Ink.Alert) < 12);
-            Assert.True(ColourDistance(bmp.GetPixel((int)Math.Round(other.X), (int)Math.Round(other.Y) - (int)side * 3), Ink.Alert) > 100);
+            Assert.True(ColourDistance(bmp.GetPixel((int)Math.Round(at.X), (int)Math.Round(at.Y)), Ink.Alert) > 100, "the hot spot is covered");
+            Assert.True(AlertWithin(bmp, at, 20), "no arrow tip within 20 px of the peak");
+            Assert.False(AlertWithin(bmp, other, 12), "a marker at the other side");
         }
+    }
+
+    private static bool AlertWithin(SKBitmap bmp, SKPoint p, int radius)
+    {
+        for (int dx = -radius; dx <= radius; dx++)
+            for (int dy = -radius; dy <= radius; dy++)
+            {
+                int x = (int)Math.Round(p.X) + dx, y = (int)Math.Round(p.Y) + dy;
+                if (dx * dx + dy * dy <= radius * radius && x >= 0 && y >= 0 && x < bmp.Width && y < bmp.Height && ColourDistance(bmp.GetPixel(x, y), Ink.Alert) < 40)
+                    return true;
+            }
+        return false;
     }
 
     [Fact]

@@ -18,8 +18,8 @@ public class ShaftChecksTests
     {
         var e = Assert.Throws<SectionTwistException>(() => ShaftSolver.Solve(Free(new PointTorque("in", 300) { Description = "motor" }, new PointTorque("out", -250))));
         Assert.Equal("loose-shaft", e.Code);
-        Assert.Contains("net torque 50 N*m", e.Message, StringComparison.Ordinal);
-        Assert.Contains("motor at 'in' 300 N*m", e.Message, StringComparison.Ordinal);
+        Assert.Contains("net torque 50 N·m", e.Message, StringComparison.Ordinal);
+        Assert.Contains("motor at 'in' 300 N·m", e.Message, StringComparison.Ordinal);
         Assert.Contains("add a fixed support", e.Message, StringComparison.Ordinal);
     }
 

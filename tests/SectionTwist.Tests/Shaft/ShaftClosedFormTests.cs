@@ -42,7 +42,7 @@ public class ShaftClosedFormTests
     }
 
     // Two segments fixed at both ends, torque T at the joint: T1 = T k1 / (k1 + k2), k_i = G_i J_i / L_i
-    // (shared/REFERENCES.md; Gere and Goodno, statically indeterminate torsional members).
+    // (docs/references.md; Gere and Goodno, statically indeterminate torsional members).
     [Fact]
     public void Two_segments_fixed_at_both_ends_share_torque_by_stiffness()
     {
@@ -61,7 +61,7 @@ public class ShaftClosedFormTests
         Tol.Abs(0, Reaction(r, "A") + Reaction(r, "C") + t, 1e-9, "statics");
     }
 
-    // Philpot, Mechanics of Materials, worked example (shared/REFERENCES.md): both ends fixed, 1000 N*m at B;
+    // Philpot, Mechanics of Materials, worked example (docs/references.md): both ends fixed, 1000 N*m at B;
     // hollow 50/40 mm x 1500 mm, G = 75 GPa; solid 50 mm x 1000 mm, G = 40 GPa.
     // Internal torques 424.63 and -575.37 N*m, shear 29.30 and 23.44 MPa, rotation at B 0.02344 rad, to 4 significant figures.
     [Fact]
@@ -88,12 +88,12 @@ public class ShaftClosedFormTests
         Tol.Rel(-575.37, s2.InternalTorque, 2e-5, "Philpot example, 5 figures");
     }
 
-    // Philpot, Mechanics of Materials, worked example (shared/REFERENCES.md): brass cantilever 32 mm x 1800 mm,
+    // Philpot, Mechanics of Materials, worked example (docs/references.md): brass cantilever 32 mm x 1800 mm,
     // G = 37 GPa, 50 N*m at the free end: twist 0.02363 rad.
     [Fact]
     public void Cantilever_worked_example_to_four_significant_figures()
     {
-        var brass = new Material("brass", 37e9, null, null, "shared/REFERENCES.md");
+        var brass = new Material("brass", 37e9, null, null, "docs/references.md");
         var r = ShaftSolver.Solve(new ShaftModel
         {
             Stations = Stations(("A", 0), ("B", 1.8)),

@@ -38,7 +38,7 @@ public sealed class ShaftCommandTests : IDisposable
         var (code, _, err) = Run("shaft", Write(ShaftFileTests.Good.Replace("supports: {fixed: [A]}", "supports: free", StringComparison.Ordinal)));
         Assert.Equal(2, code);
         Assert.Contains("design.yaml: loose shaft", err, StringComparison.Ordinal);
-        Assert.Contains("net torque 100 N*m", err, StringComparison.Ordinal);
+        Assert.Contains("net torque 100 N·m", err, StringComparison.Ordinal);
     }
 
     [Fact]
@@ -91,10 +91,13 @@ public sealed class ShaftCommandTests : IDisposable
         Assert.Contains("stations.csv", err, StringComparison.Ordinal);
         var st = File.ReadAllLines(Path.Combine(outDir, "stations.csv"));
         Assert.Equal(4, st.Length);
-        Assert.StartsWith("name,position_m,rotation_rad", st[0], StringComparison.Ordinal);
+        // the file's units (mm, N*m) unless --units says otherwise; the unit is part of each column name
+        Assert.StartsWith("name,position_mm,rotation_rad", st[0], StringComparison.Ordinal);
         var sg = File.ReadAllLines(Path.Combine(outDir, "segments.csv"));
         Assert.Equal(3, sg.Length);
-        Assert.StartsWith("A-B,A,B,0.3,", sg[1], StringComparison.Ordinal);
+        Assert.StartsWith("A-B,A,B,300,", sg[1], StringComparison.Ordinal);
+        Assert.EndsWith(",ok", sg[1], StringComparison.Ordinal);
+        Assert.Equal(["code,message"], File.ReadAllLines(Path.Combine(outDir, "warnings.csv")));
         Assert.Empty(Directory.GetFiles(outDir, "*.tmp"));
     }
 

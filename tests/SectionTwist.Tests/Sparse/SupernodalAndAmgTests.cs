@@ -84,4 +84,38 @@ public class SupernodalAndAmgTests
         cts.Cancel();
         Assert.ThrowsAny<OperationCanceledException>(() => AmgCgSolver.Create(a, 1e-10, cts.Token));
     }
+
+    // An unreachable tolerance is not an error: the iteration stops at the rounding floor of the residual,
+    // u || |b| + |A||x| || / ||b|| times the floor factor (Higham, Accuracy and Stability, sec. 3.5), and says so.
+    [Fact]
+    public void AmgCgStopsAtTheRoundingFloorInsteadOfFailing()
+    {
+        var a = ReferenceProblems.P2Laplacian(40, out _);
+        var (_, b) = SparseTestUtil.Manufactured(a);
+        var direct = new double[a.N];
+        SpdSolver.CreateDirect(a).Solve(b, direct);
+        var cg = AmgCgSolver.Create(a, 1e-30);
+        var sol = new double[a.N];
+        cg.Solve(b, sol);
+        var o = cg.LastOutcome;
+        Assert.True(o.Converged, o.ToString());
+        Assert.True(o.Floor > 0 && o.RelativeResidual <= o.Floor, o.ToString());
+        Assert.True(o.Floor < 1e-12, o.ToString());
+        Assert.True(SparseTestUtil.RelativeError(sol, direct) < 1e-9);
+    }
+
+    // A stalled iteration (here: cut off after 2 iterations) hands the system to the sparse Cholesky factorization.
+    [Fact]
+    public void StalledIterationFallsBackToCholesky()
+    {
+        var a = ReferenceProblems.P2Laplacian(40, out _);
+        var (x, b) = SparseTestUtil.Manufactured(a);
+        var solver = new SpdSolver.IterativeWithFallback(a, AmgCgSolver.Create(a, 1e-10, default, maxIterations: 2), default);
+        var sol = new double[a.N];
+        solver.Solve(b, sol);
+        Assert.False(solver.Iterative.LastOutcome.Converged);
+        Assert.True(solver.UsedFallback);
+        Assert.True(a.RelativeResidual(sol, b) <= 1e-12, $"residual {a.RelativeResidual(sol, b)}");
+        Assert.True(SparseTestUtil.RelativeError(sol, x) < 1e-8);
+    }
 }

@@ -1,6 +1,7 @@
+using System.Globalization;
 using SectionTwist.Geometry;
+using SectionTwist.Tests.References;
 using SectionTwist.Torsion;
-using SectionTwist.Verification;
 
 namespace SectionTwist.Tests.Torsion;
 
@@ -9,92 +10,77 @@ public class SectionAnalyzerTests
 {
     private static Profile P(Loop outer, params Loop[] holes) => new([new Region(outer, holes)]);
 
-    // Solid circle: J = pi d^4 / 32, tau = 16 T / (pi d^3) (Timoshenko and Goodier, ch. 10, exact).
-    [Theory]
-    [InlineData(1e-4, 1e-4, 5e-3)]
-    [InlineData(1e-6, 1e-6, 1e-3)]
-    public void Circle_matches_exact(double accuracy, double tolJ, double tolT)
+    /// <summary>
+    /// The exact cases (Timoshenko and Goodier, 3rd ed., ch. 10, and the rectangle series of sec. 109; the test's own
+    /// copies in <see cref="Published"/>), named like the built-in verification cases of the same sections.
+    /// </summary>
+    internal static IEnumerable<(string Name, Profile Profile, double J, double Tau)> ExactCases()
     {
-        double d = 0.04;
-        var r = SectionAnalyzer.Analyze(P(LoopBuilder.Circle(default, d / 2)), new AnalysisOptions { Accuracy = accuracy });
-        Tol.Rel(Math.PI * Math.Pow(d, 4) / 32, r.TorsionConstant, tolJ, "circle, exact");
-        Tol.Rel(16 / (Math.PI * d * d * d), r.MaxShearPerTorque, tolT, "circle, exact");
-        Assert.True(r.EstimatedRelativeError.TorsionConstant <= accuracy, $"estimate {r.EstimatedRelativeError.TorsionConstant}");
-        Assert.Empty(r.Warnings);
-    }
-
-    // Hollow circle: J = pi (D^4 - d^4) / 32, tau = 16 T D / (pi (D^4 - d^4)) (Timoshenko and Goodier, ch. 10).
-    [Theory]
-    [InlineData(1e-4, 1e-4, 5e-3)]
-    [InlineData(1e-6, 1e-6, 1e-3)]
-    public void Hollow_circle_matches_exact(double accuracy, double tolJ, double tolT)
-    {
-        double D = 0.05, d = 0.036;
-        var r = SectionAnalyzer.Analyze(P(LoopBuilder.Circle(default, D / 2), LoopBuilder.Circle(new Point2(0, 0), d / 2)),
-            new AnalysisOptions { Accuracy = accuracy });
-        double j = Math.PI * (Math.Pow(D, 4) - Math.Pow(d, 4)) / 32;
-        Tol.Rel(j, r.TorsionConstant, tolJ, "hollow circle, exact");
-        Tol.Rel(16 * D / (Math.PI * (Math.Pow(D, 4) - Math.Pow(d, 4))), r.MaxShearPerTorque, tolT, "hollow circle, exact");
-        Tol.Abs(D / 2, r.MaxShearLocation.Length, 1e-3 * D, "peak on the outer surface");
-    }
-
-    // Ellipse a >= b: J = pi a^3 b^3 / (a^2 + b^2), tau = 2 T / (pi a b^2) at the ends of the minor axis
-    // (Timoshenko and Goodier, sec. 105, exact).
-    [Theory]
-    [InlineData(2.0, 1e-4, 1e-4, 5e-3)]
-    [InlineData(4.0, 1e-4, 1e-4, 5e-3)]
-    [InlineData(2.0, 1e-6, 1e-6, 1e-3)]
-    [InlineData(4.0, 1e-6, 1e-6, 1e-3)]
-    public void Ellipse_matches_exact(double ratio, double accuracy, double tolJ, double tolT)
-    {
-        double a = 0.02, b = a / ratio;
-        var r = SectionAnalyzer.Analyze(P(new Loop([EllipticalArcSegment.Full(default, a, b)])), new AnalysisOptions { Accuracy = accuracy });
-        Tol.Rel(Math.PI * Math.Pow(a * b, 3) / (a * a + b * b), r.TorsionConstant, tolJ, "ellipse, exact");
-        Tol.Rel(2 / (Math.PI * a * b * b), r.MaxShearPerTorque, tolT, "ellipse, exact");
-        Tol.Abs(b, Math.Abs(r.MaxShearLocation.Y), 2e-3 * a, "peak at the end of the minor axis");
-    }
-
-    // Equilateral triangle side a: J = sqrt(3) a^4 / 80, tau = 20 T / a^3 at mid-side (Timoshenko and Goodier, sec. 106).
-    [Theory]
-    [InlineData(1e-4, 1e-4, 5e-3)]
-    [InlineData(1e-6, 1e-6, 1e-3)]
-    public void Equilateral_triangle_matches_exact(double accuracy, double tolJ, double tolT)
-    {
-        double s = 0.03, h = s * Math.Sqrt(3) / 2;
-        var r = SectionAnalyzer.Analyze(P(LoopBuilder.Polygon([new(-s / 2, 0), new(s / 2, 0), new(0, h)])), new AnalysisOptions { Accuracy = accuracy });
-        Tol.Rel(Math.Sqrt(3) * Math.Pow(s, 4) / 80, r.TorsionConstant, tolJ, "equilateral triangle, exact");
-        Tol.Rel(20 / (s * s * s), r.MaxShearPerTorque, tolT, "equilateral triangle, exact");
-    }
-
-    // Rectangle series (Timoshenko and Goodier sec. 109; table in Roark 7th ed. Table 10.1), evaluated here.
-    [Theory]
-    [InlineData(1.0)]
-    [InlineData(2.0)]
-    [InlineData(4.0)]
-    [InlineData(10.0)]
-    public void Rectangle_matches_series(double aspect)
-    {
-        double b = 0.01, a = aspect * b;
-        var (beta, alpha) = VerificationSuite.RectangleSeries(a, b);
-        var r = SectionAnalyzer.Analyze(P(LoopBuilder.Polygon([new(0, 0), new(a, 0), new(a, b), new(0, b)])));
-        Tol.Rel(beta * a * b * b * b, r.TorsionConstant, 1e-4, "rectangle series");
-        Tol.Rel(1 / (alpha * a * b * b), r.MaxShearPerTorque, 5e-3, "rectangle series");
-    }
-
-    [Fact]
-    public void Rectangle_series_reproduces_published_table()
-    {
-        // Roark 7th ed. Table 10.1 / REFERENCES.md: beta and alpha to 4 decimals; beta(1) = 0.140577, alpha(1) = 0.208165.
-        (double Ratio, double Beta, double Alpha)[] table = [(1, 0.1406, 0.2082), (1.5, 0.1958, 0.2310), (2, 0.2287, 0.2459), (3, 0.2633, 0.2672), (4, 0.2808, 0.2817), (10, 0.3123, 0.3123)];
-        foreach (var (ratio, beta, alpha) in table)
+        var (jc, tc) = Published.Circle(0.040);
+        yield return ("solid circle d=40mm", P(LoopBuilder.Circle(default, 0.020)), jc, tc);
+        var (jt, tt) = Published.Tube(0.050, 0.036);
+        yield return ("hollow circle 50/36mm", P(LoopBuilder.Circle(default, 0.025), LoopBuilder.Circle(default, 0.018)), jt, tt);
+        foreach (double ratio in new[] { 2.0, 4.0 })
         {
-            var (b, a) = VerificationSuite.RectangleSeries(ratio, 1);
-            Tol.Abs(beta, b, 6e-5, $"Roark Table 10.1 beta at a/b = {ratio}");
-            Tol.Abs(alpha, a, 6e-5, $"Roark Table 10.1 alpha at a/b = {ratio}");
+            double a = 0.020, b = a / ratio;
+            var (je, te) = Published.Ellipse(a, b);
+            yield return ($"ellipse {ratio.ToString(CultureInfo.InvariantCulture)}:1 a=20mm", P(new Loop([EllipticalArcSegment.Full(default, a, b)])), je, te);
         }
-        var (b1, a1) = VerificationSuite.RectangleSeries(1, 1);
-        Tol.Abs(0.140577, b1, 1e-6);
-        Tol.Abs(0.208165, a1, 1e-6);
+        double s = 0.030, h = s * Math.Sqrt(3) / 2;
+        var (jtr, ttr) = Published.EquilateralTriangle(s);
+        yield return ("equilateral triangle a=30mm", P(LoopBuilder.Polygon([new(-s / 2, 0), new(s / 2, 0), new(0, h)])), jtr, ttr);
+        foreach (double ratio in new[] { 1.0, 2.0, 4.0, 10.0 })
+        {
+            double bb = 0.010, aa = ratio * bb;
+            var (beta, alpha) = Published.Rectangle(aa, bb);
+            yield return ($"rectangle {ratio.ToString(CultureInfo.InvariantCulture)}:1 b=10mm",
+                P(LoopBuilder.Polygon([new(0, 0), new(aa, 0), new(aa, bb), new(0, bb)])), beta * aa * bb * bb * bb, 1 / (alpha * aa * bb * bb));
+        }
+    }
+
+    public static TheoryData<string, double> ExactCaseRows()
+    {
+        var rows = new TheoryData<string, double>();
+        foreach (var c in ExactCases()) { rows.Add(c.Name, 1e-4); rows.Add(c.Name, 1e-6); }
+        return rows;
+    }
+
+    // At the default accuracy J is within 1e-4 and the peak shear within 0.5 %; at 1e-6 within 1e-6 and 0.1 %. The
+    // reported estimates bound the true errors and meet the requested accuracy. The errors printed in
+    // docs/verification.md for the same sections must be within a factor of 10 of those measured here (or both below
+    // 1e-9, where rounding rules), so the table follows the build.
+    [Theory]
+    [MemberData(nameof(ExactCaseRows))]
+    public void Exact_solutions_are_met_within_the_promise_and_the_estimate(string name, double accuracy)
+    {
+        var (_, profile, j, tau) = ExactCases().Single(c => c.Name == name);
+        var r = SectionAnalyzer.Analyze(profile, new AnalysisOptions { Accuracy = accuracy });
+        string source = name.StartsWith("rectangle", StringComparison.Ordinal) ? Published.RectangleSource : Published.TimoshenkoGoodier;
+        Tol.Rel(j, r.TorsionConstant, accuracy, $"{name}: {source}");
+        Tol.Rel(tau, r.MaxShearPerTorque, accuracy >= 1e-4 ? 5e-3 : 1e-3, $"{name}: {source}");
+        double ej = Tol.RelErr(j, r.TorsionConstant), et = Tol.RelErr(tau, r.MaxShearPerTorque);
+        Assert.True(ej <= r.EstimatedRelativeError.TorsionConstant, $"{name} at {accuracy}: J error {ej:E2} above the estimate {r.EstimatedRelativeError.TorsionConstant:E2}");
+        Assert.True(et <= r.EstimatedRelativeError.MaxShear, $"{name} at {accuracy}: peak shear error {et:E2} above the estimate {r.EstimatedRelativeError.MaxShear:E2}");
+        Assert.True(r.EstimatedRelativeError.TorsionConstant <= accuracy, $"{name}: estimate {r.EstimatedRelativeError.TorsionConstant:E2} above the requested {accuracy:E0}");
+        Assert.Empty(r.Warnings);
+        var doc = ReferenceValueTests.DocRows();
+        foreach (var (suffix, err) in new[] { (" J", ej), (" peak shear", et) })
+        {
+            var row = doc.Single(d => d.Name == name + suffix);
+            double printed = accuracy == 1e-4 ? row.Err4 : row.Err6;
+            Assert.True((printed <= 1e-9 && err <= 1e-9) || (printed <= 10 * err && err <= 10 * printed),
+                $"docs/verification.md prints {printed:E1} for {name + suffix} at {accuracy}; this build measures {err:E1}: update the table");
+        }
+    }
+
+    // Where the peak lies: on the outer surface of a tube; at the ends of the minor axis of an ellipse (sec. 105).
+    [Fact]
+    public void Peak_shear_lies_where_the_exact_solutions_put_it()
+    {
+        var tube = ExactCases().Single(c => c.Name.StartsWith("hollow", StringComparison.Ordinal));
+        Tol.Abs(0.025, SectionAnalyzer.Analyze(tube.Profile).MaxShearLocation.Length, 1e-3 * 0.05, "tube: outer surface");
+        var ellipse = ExactCases().Single(c => c.Name.StartsWith("ellipse 2:1", StringComparison.Ordinal));
+        Tol.Abs(0.010, Math.Abs(SectionAnalyzer.Analyze(ellipse.Profile).MaxShearLocation.Y), 2e-3 * 0.020, "ellipse: end of the minor axis");
     }
 
     // Thin-walled closed section (Bredt-Batho): J = 4 A_m^2 t / perimeter_m for a thin circular tube = 2 pi r^3 t.

@@ -11,7 +11,7 @@ public class TorsionSolverTests
     public void Structured_rectangle_converges_to_series(double aspect)
     {
         double b = 0.01, a = aspect * b;
-        var (beta, alpha) = SectionTwist.Verification.VerificationSuite.RectangleSeries(a, b);
+        var (beta, alpha) = SectionTwist.Tests.References.Published.Rectangle(a, b);
         var (mesh, profile) = TestMeshes.Rectangle(a, b, (int)(24 * aspect), 24);
         var s = TorsionSolver.Solve(mesh, new double[1]);
         Assert.True(s.Residual < 1e-10);

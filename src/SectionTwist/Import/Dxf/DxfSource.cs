@@ -38,11 +38,15 @@ internal sealed class DxfSource : IProfileSource
         ShaftFileKeys = o.ShaftFileKeys,
     };
 
+    /// <summary>True when the largest gap closed is zero or round-off (a millionth of the default snap tolerance, about 1e-12 of the part).</summary>
+    internal static bool IsRoundOff(DxfImportReport r) => r.LargestGapClosed <= 1e-6 * r.SnapTolerance;
+
     internal static void Report(DxfImportReport r, Action<string>? notes)
     {
         if (notes is null) return;
         foreach (var w in r.Warnings) notes(w);
-        if (r.LargestGapClosed > 0) notes($"joined end points up to {r.LargestGapClosed:G3} {r.Unit?.Symbol ?? "drawing units"} apart");
+        // gaps of round-off size (end points that meet in exact arithmetic) are no news
+        if (!IsRoundOff(r)) notes($"joined end points up to {Units.NumberText.Format(r.LargestGapClosed, 3)} {r.Unit?.Symbol ?? "drawing units"} apart");
         if (r.DuplicatesDropped > 0) notes($"dropped {r.DuplicatesDropped} duplicate or overlapping piece(s)");
     }
 }
