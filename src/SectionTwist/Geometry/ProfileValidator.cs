@@ -67,6 +67,12 @@ public static class ProfileValidator
             for (int s = 0; s < loop.Segments.Count; s++)
             {
                 var pts = loop.Segments[s].Flatten(sag, double.PositiveInfinity);
+                // a degenerate curve (an ellipse with a 1e-104 axis, say) can trace to NaN points, which all fall into one
+                // cell of the crossing grid and make the check quadratic: refuse it at once
+                foreach (var q in pts)
+                    if (!double.IsFinite(q.X) || !double.IsFinite(q.Y))
+                        throw new SectionTwistException("bad-geometry",
+                            $"{profile.Name}: {Describe(loops[li].Region, loops[li].Hole)} segment {s + 1} traces to a point that is not a finite number (a degenerate ellipse, arc or spline?); remove or redraw that curve");
                 for (int i = 0; i + 1 < pts.Count; i++) edges.Add((pts[i], pts[i + 1], li, s, edges.Count - start, 0));
                 if (edges.Count > Limits.InputLimits.MaxOutlineEdges)
                     throw new SectionTwistException("profile-too-complex",
