@@ -48,6 +48,12 @@ public sealed class Campaign(CampaignOptions o, TextWriter log)
     }
 
     private State _state = new();
+    // counts of batches still running; merged into the state when their batch ends, so that state.json (and --resume)
+    // only ever holds whole batches
+    private readonly Dictionary<string, Dictionary<string, long>> _running = [];
+    // failures found while a worker runs are minimized after it ends: minimizing inside the read loop would stop reading
+    // the worker's output, block it on a full pipe and let its input budget run out
+    private readonly List<(string Target, long Index, Outcome Outcome)> _toMinimize = [];
     private readonly Stopwatch _clock = new();
     private double _previousSeconds;
 
@@ -61,41 +67,36 @@ public sealed class Campaign(CampaignOptions o, TextWriter log)
         foreach (var t in o.Targets) { _state.Next.TryAdd(t, 0); _state.Counts.TryAdd(t, []); }
         _clock.Start();
         long perTarget = o.Count / o.Targets.Count;
-        void RunTarget(string t)
+        var busy = new HashSet<string>();
+        // a lane takes the free target with the fewest inputs done, runs one batch of it, and repeats: the targets
+        // advance together; a lane ends when every target left is finished or taken by another lane
+        void Lane()
         {
             while (true)
             {
+                string? t;
                 long next;
-                lock (_state) next = _state.Next[t];
-                if (next >= perTarget) return;
+                lock (_state)
+                {
+                    t = o.Targets.Where(x => !busy.Contains(x) && _state.Next[x] < perTarget).OrderBy(x => _state.Next[x]).FirstOrDefault();
+                    if (t is null) return;
+                    busy.Add(t);
+                    next = _state.Next[t];
+                }
                 long end = Math.Min(perTarget, next + o.Batch);
                 while (next < end) next = RunBatch(t, next, end);
                 lock (_state)
                 {
+                    Commit(t);
                     _state.Next[t] = end;
+                    busy.Remove(t);
                     _state.Seconds = _previousSeconds + _clock.Elapsed.TotalSeconds;
                     File.WriteAllText(statePath, JsonSerializer.Serialize(_state));
                     WriteSummary(commandLine, perTarget);
                 }
             }
         }
-        if (o.Lanes <= 1)
-        {
-            // one core: the targets take turns batch by batch
-            while (o.Targets.Any(t => _state.Next[t] < perTarget))
-                foreach (var t in o.Targets)
-                {
-                    long next = _state.Next[t];
-                    if (next >= perTarget) continue;
-                    long end = Math.Min(perTarget, next + o.Batch);
-                    while (next < end) next = RunBatch(t, next, end);
-                    _state.Next[t] = end;
-                    _state.Seconds = _previousSeconds + _clock.Elapsed.TotalSeconds;
-                    File.WriteAllText(statePath, JsonSerializer.Serialize(_state));
-                    WriteSummary(commandLine, perTarget);
-                }
-        }
-        else Parallel.ForEach(o.Targets, new ParallelOptions { MaxDegreeOfParallelism = o.Lanes }, RunTarget);
+        Task.WaitAll([.. Enumerable.Range(0, Math.Max(1, o.Lanes)).Select(_ => Task.Factory.StartNew(Lane, TaskCreationOptions.LongRunning))]);
         lock (_state) WriteSummary(commandLine, perTarget);
         return _state.Counts.Values.Sum(c => c.Where(kv => Outcomes.Parse(kv.Key).IsFailure()).Sum(kv => kv.Value));
     }
@@ -151,21 +152,23 @@ public sealed class Campaign(CampaignOptions o, TextWriter log)
         }
         p.WaitForExit();
         reader.Wait(5000);
+        long resume = Math.Max(last + 1, end);
         if (current is { } c)
         {
             var outcome = killedFor ?? Outcome.Death;
             Count(target, outcome);
             Save(target, c, outcome, killedFor is null ? $"worker exit code {p.ExitCode}: {string.Join(" | ", errTail.TakeLast(3))}" : $"worker ended by the {outcome.Name()} watchdog");
-            return c + 1;
+            resume = c + 1;
         }
-        if (p.ExitCode != 0 && last + 1 < end)
+        else if (p.ExitCode != 0 && last + 1 < end)
         {
             // died between inputs (should not happen): count the next input as the culprit
             Count(target, Outcome.Death);
             Save(target, last + 1, Outcome.Death, $"worker exit code {p.ExitCode} between inputs");
-            return last + 2;
+            resume = last + 2;
         }
-        return Math.Max(last + 1, end);
+        MinimizePending(target);
+        return resume;
     }
 
     private Process StartWorker(IReadOnlyList<string> args)
@@ -185,9 +188,17 @@ public sealed class Campaign(CampaignOptions o, TextWriter log)
     {
         lock (_state)
         {
-            var c = _state.Counts[target];
+            if (!_running.TryGetValue(target, out var c)) _running[target] = c = [];
             c[outcome.Name()] = c.GetValueOrDefault(outcome.Name()) + 1;
         }
+    }
+
+    /// <summary>Adds the counts of the batch of <paramref name="target"/> that just ended to the state (call under the lock).</summary>
+    private void Commit(string target)
+    {
+        if (!_running.Remove(target, out var c)) return;
+        var s = _state.Counts[target];
+        foreach (var (k, v) in c) s[k] = s.GetValueOrDefault(k) + v;
     }
 
     private void Save(string target, long index, Outcome outcome, string message)
@@ -198,18 +209,30 @@ public sealed class Campaign(CampaignOptions o, TextWriter log)
         var input = Runner.Make(target, o.Seed, index);
         File.WriteAllBytes(path, input);
         string entry = $"{name}: {message}";
-        int failuresSaved;
-        lock (_state) failuresSaved = _state.Findings.Count(f => !f.StartsWith("slow", StringComparison.Ordinal));
-        if (outcome.IsFailure() && failuresSaved < 200)
-        {
-            var min = Minimizer.Minimize(input, candidate => Replay(target, candidate) == outcome);
-            File.WriteAllBytes(Path.Combine(o.Out, "findings", name + ".min" + t.Extension), min);
-            entry += $" (minimized {input.Length} -> {min.Length} bytes)";
-        }
         lock (_state)
         {
+            if (outcome.IsFailure() && _toMinimize.Count(x => x.Target == target) < 20) _toMinimize.Add((target, index, outcome));
             if (_state.Findings.Count < 2000) _state.Findings.Add(entry);
             log.WriteLine(entry);
+        }
+    }
+
+    /// <summary>Minimizes the failures this target's last worker found (bounded replays each), saving NAME.min.EXT beside them.</summary>
+    private void MinimizePending(string target)
+    {
+        List<(string Target, long Index, Outcome Outcome)> mine;
+        lock (_state)
+        {
+            mine = _toMinimize.Where(x => x.Target == target).ToList();
+            _toMinimize.RemoveAll(x => x.Target == target);
+        }
+        var t = FuzzTarget.Get(target);
+        foreach (var (_, index, outcome) in mine)
+        {
+            var input = Runner.Make(target, o.Seed, index);
+            var min = Minimizer.Minimize(input, candidate => Replay(target, candidate) == outcome);
+            File.WriteAllBytes(Path.Combine(o.Out, "findings", $"{outcome.Name()}-{target}-{index}.min{t.Extension}"), min);
+            lock (_state) log.WriteLine($"{outcome.Name()}-{target}-{index}: minimized {input.Length} -> {min.Length} bytes");
         }
     }
 

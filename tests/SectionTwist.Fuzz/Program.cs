@@ -55,6 +55,7 @@ public static class Program
                         Targets = opt.TryGetValue("targets", out var ts) ? ts.Split(',') : ["dxf", "points", "shaft"],
                         Resume = opt.ContainsKey("resume"),
                         Lanes = (int)L("lanes", 1),
+                        GraceSeconds = (int)L("grace-s", 10),
                     };
                     long failures = new Campaign(o, Console.Out).Run("SectionTwist.Fuzz " + string.Join(' ', args));
                     Console.WriteLine($"done: {failures} failing inputs; summary in {Path.Combine(o.Out, "summary.md")}");

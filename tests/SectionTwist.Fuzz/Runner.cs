@@ -19,7 +19,7 @@ public static class Runner
     }
 
     /// <summary>A seed for input <paramref name="index"/> that is the same in every process (SplitMix64 finalizer; HashCode is randomized per process).</summary>
-    internal static int Mix(int seed, string target, long index)
+    public static int Mix(int seed, string target, long index)
     {
         ulong z = (ulong)seed * 0x9E3779B97F4A7C15UL ^ (ulong)index * 0xBF58476D1CE4E5B9UL;
         foreach (char c in target) z = (z ^ c) * 0x94D049BB133111EBUL;

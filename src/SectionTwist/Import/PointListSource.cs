@@ -63,6 +63,7 @@ public sealed class PointListSource : IProfileSource
             line = line.Trim();
             if (line.Length == 0) { Finish(); continue; }
             var parts = line.Split([',', ';', ' ', '\t'], StringSplitOptions.RemoveEmptyEntries);
+            if (parts.Length == 0) throw new SectionTwistException("bad-point-list", $"{name}:{lineNo}: expected 'x, y' but found only separators");
             string head = parts[0].ToLowerInvariant();
             if (head == "unit")
             {

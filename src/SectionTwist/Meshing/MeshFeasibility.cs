@@ -52,7 +52,9 @@ internal static class MeshFeasibility
             double area = Math.Abs(region.Outer.SignedArea) - region.Holes.Sum(l => Math.Abs(l.SignedArea));
             double perimeter = region.Loops.Sum(l => l.Perimeter);
             if (!(area > 0)) continue;
-            total += area / (h * h * 0.433) + 2 * perimeter * perimeter / (4 * area) + 4 * perimeter / h;
+            // every boundary piece shorter than h grades the mesh around it: a few elements per piece at least
+            int pieces = region.Loops.Sum(l => l.Segments.Count);
+            total += area / (h * h * 0.433) + 2 * perimeter * perimeter / (4 * area) + 4 * perimeter / h + 4 * pieces;
         }
         return total;
     }

@@ -10,7 +10,7 @@ internal sealed class ShaftFileContext(string fileName)
     public string FileName { get; } = fileName;
 
     public SectionTwistException Error(YamlNode at, string key, string message) =>
-        new("shaft-file", $"{Where(at)}: {key}: {message}");
+        new("shaft-file", $"{Where(at)}: {YamlGuard.Short(key)}: {message}");
 
     public string Where(YamlNode at) => $"{FileName}:{at.Start.Line}:{at.Start.Column}";
 
@@ -40,18 +40,18 @@ internal sealed class ShaftFileContext(string fileName)
             throw Error(node, key, $"expected a value such as '12 {QuantityText.Examples(kind).Split(',')[0]}', found {YamlMap.Describe(node)}");
         string text = s.Value!;
         if (!QuantityText.TrySplit(text, out double v, out string unit))
-            throw Error(node, key, $"'{text}' is not a number with a unit; write e.g. '12 {QuantityText.Examples(kind).Split(',')[0]}'");
+            throw Error(node, key, $"'{YamlGuard.Short(text)}' is not a number with a unit; write e.g. '12 {QuantityText.Examples(kind).Split(',')[0]}'");
         double factor;
         if (unit.Length == 0)
         {
             factor = Default(kind)?.Factor ?? throw Error(node, key,
-                $"'{text}' has no unit and the file's units block gives no default for it; write the unit ({QuantityText.Examples(kind)}) or add a default under 'units:'");
+                $"'{YamlGuard.Short(text)}' has no unit and the file's units block gives no default for it; write the unit ({QuantityText.Examples(kind)}) or add a default under 'units:'");
         }
         else
         {
             factor = QuantityText.UnitFactor(unit, kind) ?? throw Error(node, key,
-                kind == QuantityKind.Number ? $"'{text}' must be a plain number without a unit"
-                    : $"'{unit}' is not a unit of this kind; use one of {QuantityText.Examples(kind)}");
+                kind == QuantityKind.Number ? $"'{YamlGuard.Short(text)}' must be a plain number without a unit"
+                    : $"'{YamlGuard.Short(unit)}' is not a unit of this kind; use one of {QuantityText.Examples(kind)}");
         }
         double si = v * factor;
         if (ShaftValueRange.Check(kind, si) is { } problem) throw Error(node, key, $"'{YamlGuard.Short(text)}' {problem}");

@@ -25,7 +25,7 @@ internal sealed partial class ShaftFileReader
         {
             if (m.String(key) is not { } symbol) continue;
             double f = QuantityText.UnitFactor(symbol, kind)
-                ?? throw _file.Error(m.Get(key)!, key, $"'{symbol}' is not a {key} unit; use one of {QuantityText.Examples(kind)}");
+                ?? throw _file.Error(m.Get(key)!, key, $"'{YamlGuard.Short(symbol)}' is not a {key} unit; use one of {QuantityText.Examples(kind)}");
             _file.SetDefault(kind, symbol, f);
         }
         // lengths first: they pick the system (in, ft: US; m: SI-m; else SI-mm), then the named units replace its own
@@ -49,7 +49,7 @@ internal sealed partial class ShaftFileReader
         foreach (var (k, v) in map.Children)
         {
             string name = ((YamlScalarNode)k).Value ?? "";
-            var m = new YamlMap(_file, v, $"material '{name}'", "name", "library", "G", "E", "poisson", "density", "allowableShear", "shearYield", "yield", "ultimate", "source");
+            var m = new YamlMap(_file, v, $"material '{YamlGuard.Short(name)}'", "name", "library", "G", "E", "poisson", "density", "allowableShear", "shearYield", "yield", "ultimate", "source");
             Material? lib = null;
             if (m.Get("library") is { } ln)
             {
@@ -57,7 +57,7 @@ internal sealed partial class ShaftFileReader
                 if (!ShaftMaterials.TryGet(key, out var found))
                 {
                     string? near = Suggest.Nearest(key, ShaftMaterials.All.Keys);
-                    throw _file.Error(ln, "library", $"unknown library material '{key}'{(near is null ? "" : $"; did you mean '{near}'?")} (library: {string.Join(", ", ShaftMaterials.All.Keys)})");
+                    throw _file.Error(ln, "library", $"unknown library material '{YamlGuard.Short(key)}'{(near is null ? "" : $"; did you mean '{near}'?")} (library: {YamlMap.Names(ShaftMaterials.All.Keys)})");
                 }
                 lib = found;
             }
@@ -65,21 +65,21 @@ internal sealed partial class ShaftFileReader
             double g;
             if (m.Has("G"))
             {
-                if (m.Has("poisson")) throw _file.Error(m.KeyNode("poisson"), "poisson", $"material '{name}': give G, or E with poisson, not G and poisson");
+                if (m.Has("poisson")) throw _file.Error(m.KeyNode("poisson"), "poisson", $"material '{YamlGuard.Short(name)}': give G, or E with poisson, not G and poisson");
                 g = m.Quantity("G", QuantityKind.Modulus)!.Value;
             }
             else if (m.Has("poisson"))
             {
-                if (!m.Has("E")) throw _file.Error(v, "E", $"material '{name}': G = E / (2 (1 + poisson)) needs both 'E' and 'poisson'");
+                if (!m.Has("E")) throw _file.Error(v, "E", $"material '{YamlGuard.Short(name)}': G = E / (2 (1 + poisson)) needs both 'E' and 'poisson'");
                 double nu = m.Quantity("poisson", QuantityKind.Number)!.Value;
                 if (!(nu > -1 && nu < 0.5)) throw _file.Error(m.Get("poisson")!, "poisson", "Poisson's ratio must lie between -1 and 0.5 (steel about 0.3)");
                 g = Material.ShearModulusFrom(e!.Value, nu);
             }
             else if (m.Has("E") && lib is null)
-                throw _file.Error(v, "poisson", $"material '{name}': G = E / (2 (1 + poisson)) needs both 'E' and 'poisson' (or give G)");
-            else g = lib?.ShearModulus ?? throw _file.Error(v, "G", $"material '{name}' needs a shear modulus: 'G', or 'E' and 'poisson', or 'library'");
+                throw _file.Error(v, "poisson", $"material '{YamlGuard.Short(name)}': G = E / (2 (1 + poisson)) needs both 'E' and 'poisson' (or give G)");
+            else g = lib?.ShearModulus ?? throw _file.Error(v, "G", $"material '{YamlGuard.Short(name)}' needs a shear modulus: 'G', or 'E' and 'poisson', or 'library'");
             if (!(g > 0)) throw _file.Error(m.Get("G") ?? v, "G", "the shear modulus must be positive");
-            if (ShaftValueRange.Check(QuantityKind.Modulus, g) is { } odd) throw _file.Error(m.Get("G") ?? m.Get("E") ?? v, "G", $"material '{name}': the shear modulus {odd}");
+            if (ShaftValueRange.Check(QuantityKind.Modulus, g) is { } odd) throw _file.Error(m.Get("G") ?? m.Get("E") ?? v, "G", $"material '{YamlGuard.Short(name)}': the shear modulus {odd}");
 
             double? allow = lib?.AllowableShear, ssy = lib?.ShearYield, sy = lib?.YieldStrength, su = lib?.UltimateStrength;
             bool strengthsGiven = m.Has("yield") || m.Has("ultimate") || m.Has("allowableShear") || m.Has("shearYield");
@@ -126,7 +126,7 @@ internal sealed partial class ShaftFileReader
         if (ShaftMaterials.TryGet(key, out var lib)) return lib;
         var all = materials.Keys.Concat(ShaftMaterials.All.Keys).ToArray();
         string? near = Suggest.Nearest(key, all);
-        throw _file.Error(node, "material", $"unknown material '{key}'{(near is null ? "" : $"; did you mean '{near}'?")} (file: {(materials.Count == 0 ? "none" : string.Join(", ", materials.Keys))}; library: {string.Join(", ", ShaftMaterials.All.Keys)}); define it under 'materials:'");
+        throw _file.Error(node, "material", $"unknown material '{YamlGuard.Short(key)}'{(near is null ? "" : $"; did you mean '{near}'?")} (file: {(materials.Count == 0 ? "none" : YamlMap.Names(materials.Keys))}; library: {YamlMap.Names(ShaftMaterials.All.Keys)}); define it under 'materials:'");
     }
 
     private Dictionary<string, (YamlNode Node, Func<SectionStiffness> Get)> ReadSections(YamlNode? node)
@@ -146,12 +146,12 @@ internal sealed partial class ShaftFileReader
     /// <summary>Checks a section definition now and returns a cached getter (template and DXF sections are analysed once, on first use).</summary>
     private Func<SectionStiffness> ReadSection(YamlNode node, string name)
     {
-        var m = new YamlMap(_file, node, $"section '{name}'", "round", "tube", "J", "shearFactor", "torsionalModulus", "polarMoment", "description", "outerDiameter", "template", "dxf",
+        var m = new YamlMap(_file, node, $"section '{YamlGuard.Short(name)}'", "round", "tube", "J", "shearFactor", "torsionalModulus", "polarMoment", "description", "outerDiameter", "template", "dxf",
             "layer", "part", "at", "window", "hatch", "fitArcs", "snap", "skipOpen", "unit");
         string[] kinds = [.. new[] { "round", "tube", "J", "template", "dxf" }.Where(m.Has)];
         if (kinds.Length != 1)
             throw _file.Error(node, kinds.Length == 0 ? "round" : kinds[1],
-                $"section '{name}' needs exactly one of 'round', 'tube', 'J' (with 'shearFactor'), 'template' or 'dxf'{(kinds.Length > 1 ? $", found {string.Join(" and ", kinds)}" : "")}");
+                $"section '{YamlGuard.Short(name)}' needs exactly one of 'round', 'tube', 'J' (with 'shearFactor'), 'template' or 'dxf'{(kinds.Length > 1 ? $", found {string.Join(" and ", kinds)}" : "")}");
         string? description = m.String("description");
         double? od = m.Has("outerDiameter") ? Diameter(m.Get("outerDiameter")!, "outerDiameter") : null;
         switch (kinds[0])
@@ -164,7 +164,7 @@ internal sealed partial class ShaftFileReader
                 }
             case "tube":
                 {
-                    var t = new YamlMap(_file, m.Get("tube")!, $"tube of section '{name}'", "outer", "inner");
+                    var t = new YamlMap(_file, m.Get("tube")!, $"tube of section '{YamlGuard.Short(name)}'", "outer", "inner");
                     double outer = Diameter(t.Require("outer", "give the outer diameter"), "outer");
                     double inner = t.Quantity("inner", QuantityKind.Length) ?? throw _file.Error(m.Get("tube")!, "inner", "give the inner diameter (0 for solid: use 'round' instead)");
                     if (!(inner >= 0 && inner < outer)) throw _file.Error(t.Get("inner")!, "inner", "the inner diameter must be at least 0 and smaller than the outer diameter");
@@ -177,7 +177,7 @@ internal sealed partial class ShaftFileReader
                     if (!(j > 0)) throw _file.Error(m.Get("J")!, "J", "the torsion constant must be positive");
                     double factor;
                     if (m.Has("shearFactor") == m.Has("torsionalModulus"))
-                        throw _file.Error(node, "shearFactor", $"section '{name}' with 'J' needs exactly one of 'shearFactor' (peak shear per unit torque, e.g. '1.2e-4 1/mm^3') or 'torsionalModulus' (T / tau_max, e.g. '12 cm^3')");
+                        throw _file.Error(node, "shearFactor", $"section '{YamlGuard.Short(name)}' with 'J' needs exactly one of 'shearFactor' (peak shear per unit torque, e.g. '1.2e-4 1/mm^3') or 'torsionalModulus' (T / tau_max, e.g. '12 cm^3')");
                     if (m.Has("shearFactor")) factor = m.Quantity("shearFactor", QuantityKind.ShearPerTorque)!.Value;
                     else
                     {

@@ -130,20 +130,20 @@ internal sealed partial class ShaftFileReader
             var m = new YamlMap(_file, item, "a station", "name", "at", "after");
             string name = m.RequireString("name", "give the station a name, e.g. 'name: A'");
             if (name.Length == 0) throw _file.Error(m.Get("name")!, "name", "the station name is empty; give it a name");
-            if (_stations.ContainsKey(name)) throw _file.Error(m.Get("name")!, "name", $"station '{name}' is defined twice; give each station a unique name");
+            if (_stations.ContainsKey(name)) throw _file.Error(m.Get("name")!, "name", $"station '{YamlGuard.Short(name)}' is defined twice; give each station a unique name");
             double x;
             if (m.Has("at") == m.Has("after"))
-                throw _file.Error(item, "at", $"station '{name}' needs exactly one of 'at' (position along the axis) or 'after' (distance from the previous station)");
+                throw _file.Error(item, "at", $"station '{YamlGuard.Short(name)}' needs exactly one of 'at' (position along the axis) or 'after' (distance from the previous station)");
             if (m.Has("at")) x = m.Quantity("at", QuantityKind.Length)!.Value;
             else
             {
                 double after = m.Quantity("after", QuantityKind.Length)!.Value;
-                if (previous is null) throw _file.Error(m.KeyNode("after"), "after", $"the first station '{name}' has no previous station; give it 'at: 0'");
+                if (previous is null) throw _file.Error(m.KeyNode("after"), "after", $"the first station '{YamlGuard.Short(name)}' has no previous station; give it 'at: 0'");
                 if (!(after > 0))
                     throw _file.Error(m.Get("after")!, "after", $"negative or zero length {Si(after)} m from the previous station; stations are listed along the axis, so 'after' must be positive (use 'at' for an absolute position)");
                 x = previous.Value + after;
                 if (ShaftValueRange.Check(QuantityKind.Length, x) is { } far)
-                    throw _file.Error(m.Get("after")!, "after", $"station '{name}' ends up at {Si(x)} m, which {far}");
+                    throw _file.Error(m.Get("after")!, "after", $"station '{YamlGuard.Short(name)}' ends up at {Si(x)} m, which {far}");
             }
             if (previous is { } before && x < before)
             {
@@ -167,7 +167,7 @@ internal sealed partial class ShaftFileReader
             throw _file.Error(node, key, $"expected a station name, found {YamlMap.Describe(node)}");
         if (_stations.ContainsKey(s.Value)) return s.Value;
         string? near = Suggest.Nearest(s.Value, _stations.Keys);
-        throw _file.Error(node, key, $"no station named '{s.Value}'{(near is null ? "" : $"; did you mean '{near}'?")} (stations: {string.Join(", ", _stations.Keys)}); add it under 'stations:' or fix the name");
+        throw _file.Error(node, key, $"no station named '{YamlGuard.Short(s.Value)}'{(near is null ? "" : $"; did you mean '{near}'?")} (stations: {YamlMap.Names(_stations.Keys)}); add it under 'stations:' or fix the name");
     }
 
     private List<ShaftSegment> ReadSegments(YamlNode node, Dictionary<string, Material> materials, Dictionary<string, (YamlNode Node, Func<SectionStiffness> Get)> sections)
@@ -195,7 +195,7 @@ internal sealed partial class ShaftFileReader
                     if (!sections.TryGetValue(key, out var entry))
                     {
                         string? near = Suggest.Nearest(key, sections.Keys);
-                        throw _file.Error(sn, "section", $"no section named '{key}'{(near is null ? "" : $"; did you mean '{near}'?")} (sections: {(sections.Count == 0 ? "none" : string.Join(", ", sections.Keys))}); define it under 'sections:' or write it inline, e.g. 'section: {{round: 40 mm}}'");
+                        throw _file.Error(sn, "section", $"no section named '{YamlGuard.Short(key)}'{(near is null ? "" : $"; did you mean '{near}'?")} (sections: {(sections.Count == 0 ? "none" : YamlMap.Names(sections.Keys))}); define it under 'sections:' or write it inline, e.g. 'section: {{round: 40 mm}}'");
                     }
                     section = entry.Get();
                 }

@@ -36,7 +36,7 @@ internal sealed class YamlMap
     public YamlNode? Get(string key) => _entries.TryGetValue(key, out var e) ? e.Value : null;
 
     public YamlNode Require(string key, string hint) =>
-        Get(key) ?? throw File.Error(Node, key, $"{What} needs '{key}'; {hint}");
+        Get(key) ?? throw File.Error(Node, key, $"{What} needs '{YamlGuard.Short(key)}'; {hint}");
 
     public string? String(string key)
     {
@@ -46,7 +46,7 @@ internal sealed class YamlMap
         throw File.Error(n, key, $"expected a single value, found {Describe(n)}");
     }
 
-    public string RequireString(string key, string hint) => String(key) ?? throw File.Error(Node, key, $"{What} needs '{key}'; {hint}");
+    public string RequireString(string key, string hint) => String(key) ?? throw File.Error(Node, key, $"{What} needs '{YamlGuard.Short(key)}'; {hint}");
 
     /// <summary>A value of <paramref name="kind"/> in SI, or null when the key is absent.</summary>
     public double? Quantity(string key, QuantityKind kind) => Get(key) is { } n ? File.Quantity(n, key, kind) : null;
@@ -61,4 +61,12 @@ internal sealed class YamlMap
         YamlScalarNode s => $"'{YamlGuard.Short(s.Value ?? "")}'",
         _ => "nothing",
     };
+
+    /// <summary>Names for a message: at most twelve, then how many there are in all.</summary>
+    internal static string Names(IEnumerable<string> names)
+    {
+        var list = names.ToList();
+        string shown = string.Join(", ", list.Take(12).Select(n => YamlGuard.Short(n, 30)));
+        return list.Count <= 12 ? shown : $"{shown}, ... ({list.Count} in all)";
+    }
 }

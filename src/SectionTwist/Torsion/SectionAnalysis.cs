@@ -56,6 +56,7 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
         var holeArea = profile.Regions.SelectMany(r => r.Loops).Select(l => Math.Abs(l.SignedArea)).ToArray();
         double size = Math.Sqrt(props.Area);
         double h = Math.Min(0.6 * size * Math.Pow(acc, 0.25), profile.Bounds.Diagonal / 8);
+        MeshFeasibility.Check(profile);
         var budget = AnalysisBudget.For(profile, options, acc, h);
         TorsionSolution? coarse = null, fine = null, pairC = null, pairF = null;
         Mesh? coarseMesh = null;
@@ -71,6 +72,13 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
             catch (SectionTwistException e) when (e.Code == "mesh-too-large")
             {
                 if (pass == 0) throw budget.Refusal();
+                warnings.Add(new AnalysisWarning("accuracy-not-reached", $"{budget.Describe()} stopped refinement; results carry the error estimate of the last pass"));
+                break;
+            }
+            if (mesh.ElementCount > budget.MaxElements)
+            {
+                // the estimate before meshing is a lower bound; the mesh itself is the measure
+                if (pass == 0) throw budget.Refusal(mesh.ElementCount);
                 warnings.Add(new AnalysisWarning("accuracy-not-reached", $"{budget.Describe()} stopped refinement; results carry the error estimate of the last pass"));
                 break;
             }

@@ -47,7 +47,7 @@ public sealed record LengthUnit(string Symbol, string Name, double Metres)
     {
         if (TryParse(text, out var u)) return u;
         throw new SectionTwistException("unknown-unit",
-            $"{where}: unknown length unit '{text}'{Suggest.DidYouMean(text, BySymbol.Keys)}; use one of {string.Join(", ", Known.Select(k => k.Symbol))}");
+            $"{where}: unknown length unit '{(text.Length > 40 ? text[..40] + "..." : text)}'{Suggest.DidYouMean(text, BySymbol.Keys)}; use one of {string.Join(", ", Known.Select(k => k.Symbol))}");
     }
 
     /// <summary>Converts a value in this unit to metres.</summary>
