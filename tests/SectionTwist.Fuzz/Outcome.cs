@@ -9,7 +9,7 @@ public enum Outcome
     CleanError,
     /// <summary>Stopped cleanly by cancellation at the per-input time budget (slow, but not a hang).</summary>
     Slow,
-    /// <summary>Any other exception: an internal error a user would see as exit 70.</summary>
+    /// <summary>Any other exception: a crash a user would see as exit 70.</summary>
     Crash,
     /// <summary>A result holding NaN or infinity.</summary>
     NonFinite,

@@ -6,7 +6,7 @@ namespace SectionTwist.Tests.Torsion;
 
 /// <summary>
 /// Every accuracy the commands accept is either reached or refused up front with the finest available (1e-8); none ends
-/// in an internal error. (That 1e-8 is reached, e.g. on hex:s=24, is measured by the benchmark runs listed in
+/// without the documented one-line message. (That 1e-8 is reached, e.g. on hex:s=24, is measured by the benchmark runs listed in
 /// docs/verification.md: a unit test cannot afford the million-element solves.)
 /// </summary>
 public class AccuracyRangeTests
