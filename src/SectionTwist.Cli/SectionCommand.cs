@@ -10,16 +10,20 @@ internal sealed class SectionCommand : ICommand
     public string Name => "section";
     public string Summary => "torsion constant J, peak shear per torque and area properties of a cross-section";
     public string Usage => $$"""
-        sectiontwist section SOURCE [--accuracy REL] [--unit U] [--units SYSTEM] [drawing options] [--json] [--warping] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR] [--plastic MATERIAL|STRESS [--plastic-plot FILE.png|svg]]
+        sectiontwist section SOURCE [SOURCE ...] [--accuracy REL] [--unit U] [--units SYSTEM] [drawing options] [--json] [--warping] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR] [--plastic MATERIAL|STRESS [--plastic-plot FILE.png|svg]]
           SOURCE      a template spec such as circle:d=40, keyed:d=40, rect:b=60,h=20, a drawing file (.dxf),
-                      a point list (.csv, .pts) or anything a plugin reads
+                      a point list (.csv, .pts) or anything a plugin reads; several SOURCEs (or a wildcard
+                      such as drawings/*.dxf) are analysed on all cores and printed as one table (batch)
           --accuracy  requested relative accuracy of J (default 1e-4)
           --unit      length unit of the input (mm, cm, m, in, ft); specs default to mm
           --units     units of the table and the plot: SI-mm, SI-m or US (default: the input's own, e.g. US for inches)
         drawing options (see 'sectiontwist inspect' to list layers and parts):
         {{DrawingOptions.Usage}}
         output options:
-          --json      print one JSON object in SI base units (m, m^2, m^4, 1/m^3); --units does not change it
+          --json      print one JSON object in SI base units (m, m^2, m^4, 1/m^3); --units does not change it;
+                      in a batch one JSON object per line and source
+          --csv       print the batch as CSV (SI base units), one row per source
+          --jobs      analyses at once in a batch (default: one per core)
           --warping   also solve the warping function: shear centre, warping constant Iw, largest sectorial
                       coordinate, warping length for steel and whether restrained warping matters
           --plot      write a shear-stress contour picture (PNG or SVG)
@@ -60,8 +64,21 @@ internal sealed class SectionCommand : ICommand
         var plasticYield = args.Option("plastic") is { } py ? PlasticCli.ParseYield(py) : ((double, string)?)null;
         string? plasticPlot = args.Option("plastic-plot");
         if (plasticPlot is not null && plasticYield is null) throw new UsageException("--plastic-plot needs --plastic MATERIAL|STRESS");
-        if (args.Positional.Count != 1) throw new UsageException(args.Positional.Count == 0 ? "give one SOURCE (a template spec or a .dxf file)" : $"give one SOURCE, not {args.Positional.Count}");
+        bool csv = args.Flag("csv");
+        int? jobs = args.Int("jobs");
+        if (args.Positional.Count == 0) throw new UsageException("give a SOURCE (a template spec or a .dxf file)");
         args.EnsureAllUsed();
+        if (SectionBatchCli.IsBatch(args.Positional, csv))
+        {
+            string? single = plot is not null ? "--plot" : dxf is not null ? "--dxf" : plasticYield is not null ? "--plastic" : warping ? "--warping" : torque is not null ? "--torque" : null;
+            if (single is not null) throw new UsageException($"{single} works on one SOURCE; run it for each source on its own");
+            if (json && csv) throw new UsageException("choose one of --json and --csv");
+            if (jobs is < 1 or > 1024) throw new UsageException($"--jobs {jobs}: give the number of analyses at once, from 1 to 1024");
+            LoadPlugins(plugins);
+            var form = json ? SectionBatchCli.Form.JsonLines : csv ? SectionBatchCli.Form.Csv : SectionBatchCli.Form.Table;
+            return SectionBatchCli.Run(ctx, SectionBatchCli.Expand(args.Positional), srcOptions with { Notes = null }, ctx.Analysis(accuracy), units, form, jobs ?? 0);
+        }
+        if (jobs is not null) throw new UsageException("--jobs applies to a batch of several SOURCEs");
         LoadPlugins(plugins);
         if (plot is not null) OutputPaths.CheckFile(plot, "--plot");
         if (dxf is not null) OutputPaths.CheckFile(dxf, "--dxf");

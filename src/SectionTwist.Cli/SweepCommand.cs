@@ -41,24 +41,15 @@ internal sealed class SweepCommand : ICommand
         var steps = BuildSteps(args.Positional[0], vary, unit);
 
         var options = context.Analysis(accuracy);
-        var results = new SectionResult[steps.Count];
         int done = 0;
         using var progress = new ProgressLine(context, $"sweep over {steps.Count} steps");
-        try
-        {
-            Parallel.For(0, steps.Count, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount, CancellationToken = context.Cancellation }, i =>
-            {
-                results[i] = SectionAnalyzer.Analyze(steps[i].Profile, options, context.Cancellation);
-                progress.Report((double)Interlocked.Increment(ref done) / steps.Count, $"{done} of {steps.Count} done");
-            });
-        }
-        catch (AggregateException e)
-        {
-            // Report the first step's failure as if it ran alone (input errors become one-line messages).
-            var first = e.InnerExceptions.FirstOrDefault(x => x is SectionTwistException)
-                        ?? e.InnerExceptions.FirstOrDefault(x => x is OperationCanceledException) ?? e.InnerExceptions[0];
-            System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(first).Throw();
-        }
+        // The library's batch entry point: all cores, the memory budget shared among the workers.
+        var items = SectionBatch.Analyze(steps.Select(s => s.Profile).ToList(), options, 0, context.Cancellation,
+            _ => progress.Report((double)Interlocked.Increment(ref done) / steps.Count, $"{done} of {steps.Count} done"));
+        // Report the first failing step as if it ran alone (input errors become one-line messages).
+        if (items.FirstOrDefault(x => x.Error is not null) is { } failed)
+            throw new SectionTwistException(failed.Error!.Code, $"sweep step {steps[failed.Index].Spec}: {failed.Error.Message}", failed.Error);
+        var results = items.Select(x => x.Result!).ToArray();
         progress.Clear();
 
         string key = vary[..vary.IndexOf('=', StringComparison.Ordinal)].Trim();

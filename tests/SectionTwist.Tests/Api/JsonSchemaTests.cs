@@ -70,6 +70,21 @@ public sealed class JsonSchemaTests : IDisposable
         Assert.Equal(2, n["steps"]!.AsArray().Count);
     }
 
+    [Fact]
+    public void Section_batch_json_lines_match_their_schema()
+    {
+        var (code, output, _) = Run("section", "circle:d=40", "keyed:d=40,r=0", "circle:d=-1", "--accuracy", "1e-3", "--json");
+        Assert.Equal(2, code);
+        var schema = JsonSchema.FromFile(Path.Combine(RepoPaths.Root, "docs", "schemas", "section-batch.schema.json"));
+        var lines = output.TrimEnd().Split('\n');
+        Assert.Equal(3, lines.Length);
+        foreach (var line in lines)
+            Assert.True(schema.Evaluate(JsonNode.Parse(line)).IsValid, $"line does not match docs/schemas/section-batch.schema.json: {line}");
+        Assert.Equal("error", (string?)JsonNode.Parse(lines[2])!["status"]);
+        // an ok line without its results, or with an error, breaks the schema
+        Assert.False(schema.Evaluate(JsonNode.Parse("{\"index\":0,\"source\":\"x\",\"status\":\"ok\"}")).IsValid);
+    }
+
     [Theory]
     [InlineData("")]
     [InlineData("keyed")]
