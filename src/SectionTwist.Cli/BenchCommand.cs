@@ -17,6 +17,7 @@ internal sealed class BenchCommand : ICommand
 
     public string Usage => """
         sectiontwist bench [--m 50,158,500] [--solver auto|direct|amg] [--sections only|skip]
+        sectiontwist bench --startup [--runs N] [--tool PATH]    |    sectiontwist bench --batch [--count N]
           Assembles the P2 Laplacian on the unit square (m x m squares, two triangles each, Dirichlet boundary
           removed: (2m-1)^2 unknowns), solves A x = A 1 and prints assembly, set-up, factor and solve times, the
           relative residual, allocated bytes and the peak working set, then the growth exponent between sizes.
@@ -26,6 +27,11 @@ internal sealed class BenchCommand : ICommand
                       and check the error against a 1e-6 reference solve, whose time is shown too (default:
                       included; 'only' skips the reference problem, 'skip' skips the sections)
           The last line accounts for the wall time: timed runs, warm-up (compiling the kernels) and reference solves.
+          --startup   instead: spawn the tool N times (default 10) on a keyed-shaft drawing and on a template spec and
+                      print the min, median and max whole-process time; --tool gives the installed tool's path
+                      (default: this tool)
+          --batch     instead: analyse N keyed-shaft variants (default 200) at the default accuracy serially and on
+                      all cores in this process and print both times and the speed-up
         """;
 
     public int Run(Args args, CliContext context)
@@ -33,7 +39,18 @@ internal sealed class BenchCommand : ICommand
         string ms = args.Option("m") ?? "50,158,500";
         string solverName = args.Option("solver") ?? "auto";
         string sections = args.Option("sections") ?? "yes";
+        bool startup = args.Flag("startup"), batch = args.Flag("batch");
+        int? runs = args.Int("runs"), count = args.Int("count");
+        string? tool = args.Option("tool");
         args.EnsureAllUsed();
+        if (startup || batch)
+        {
+            if (runs is < 1 or > 1000) throw new UsageException($"--runs {runs}: give 1 to 1000 runs");
+            if (count is < 1 or > 100_000) throw new UsageException($"--count {count}: give 1 to 100000 variants");
+            if (startup) BenchParts.Startup(context.Out, runs ?? 10, tool);
+            if (batch) BenchParts.Batch(context.Out, count ?? 200);
+            return 0;
+        }
         if (sections is not ("yes" or "only" or "skip")) throw new UsageException($"--sections: '{sections}' is not one of only, skip");
         if (sections == "only") { SectionBench.Run(context.Out, context); return 0; }
         var solver = solverName switch

@@ -8,7 +8,8 @@ namespace SectionTwist.Benchmarks;
 /// single pass with the Math.NET baseline and the ratio, <c>sheet [entities]</c> for the drawing-sheet timing
 /// (<see cref="SheetRun"/>), <c>orders [h] [specs]</c> for observed convergence orders (<see cref="Orders"/>),
 /// <c>estimates [accuracies] [reference] [name filter]</c> for the error estimates against the true errors
-/// (<see cref="EstimateSweep"/>).
+/// (<see cref="EstimateSweep"/>), <c>answer [runs]</c> for the time to an accurate answer, former against current
+/// settings (<see cref="AnswerRun"/>).
 /// </summary>
 public static class Program
 {
@@ -17,6 +18,11 @@ public static class Program
         if (args.Length > 0 && args[0] == "modes")
         {
             ModalBenchmarks.Quick();
+            return;
+        }
+        if (args.Length > 0 && args[0] == "answer")
+        {
+            AnswerRun.Run(args.Length > 1 ? int.Parse(args[1], CultureInfo.InvariantCulture) : 5);
             return;
         }
         if (args.Length > 0 && args[0] == "quick")

@@ -29,14 +29,19 @@ internal static class ConjugateGradient
     /// <param name="Converged">True when the residual met the tolerance or the floor.</param>
     internal readonly record struct Outcome(int Iterations, double RelativeResidual, double Floor, bool Converged);
 
-    /// <summary>Solves A x = b from x = 0; never throws for lack of convergence (see <see cref="Outcome.Converged"/>).</summary>
+    /// <summary>
+    /// Solves A x = b from x = 0, or from <paramref name="initial"/> when given (a good start, e.g. a coarser mesh's
+    /// solution interpolated, saves the iterations that would reduce its error); never throws for lack of convergence
+    /// (see <see cref="Outcome.Converged"/>).
+    /// </summary>
     public static Outcome Solve(Amg.CsrMatrix a, Action<double[], double[]> precondition, ReadOnlySpan<double> b, Span<double> x,
-        double tolerance, int maxIterations, CancellationToken ct)
+        double tolerance, int maxIterations, CancellationToken ct, double[]? initial = null)
     {
         int n = a.Rows;
         var bb = b.ToArray();
-        var xx = new double[n];
+        var xx = initial is null ? new double[n] : (double[])initial.Clone();
         var r = (double[])bb.Clone();
+        if (initial is not null) a.Residual(bb, xx, r);
         var z = new double[n];
         var p = new double[n];
         var q = new double[n];
@@ -46,7 +51,8 @@ internal static class ConjugateGradient
         int it = 0;
         double previous = double.PositiveInfinity, floor = 0, trueRes;
         var best = (double[])xx.Clone();
-        double bestRes = nb;
+        double bestRes = initial is null ? nb : Math.Sqrt(Dot(r, r));
+        if (bestRes <= target) { best.AsSpan().CopyTo(x); return new Outcome(0, bestRes / nb, 0, true); }
         bool converged;
         while (true)
         {

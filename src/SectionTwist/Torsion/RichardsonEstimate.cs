@@ -43,7 +43,7 @@ internal static class RichardsonEstimate
     ];
 
     /// <summary>Per-child interpolation weights: the parent's six shape functions at each of the 24 child nodes.</summary>
-    private static readonly double[] Weights = BuildWeights();
+    internal static readonly double[] Weights = BuildWeights();
 
     private static double[] BuildWeights()
     {

@@ -22,4 +22,13 @@ internal sealed class TorsionSolution
     public required Geometry.Point2 MaxGradientLocation { get; init; }
     /// <summary>Relative residual of the linear solve.</summary>
     public required double Residual { get; init; }
+
+    /// <summary>
+    /// The direct factorization of this mesh's matrix with its node-to-unknown map, kept for the solve on the uniform
+    /// refinement (<see cref="TorsionSolver.Solve"/>); null when not kept. Set to null once used so the memory is freed.
+    /// </summary>
+    public Factorization? Factor { get; set; }
+
+    /// <summary>A direct solver of the matrix and the unknown of each node (-1: fixed).</summary>
+    internal sealed record Factorization(int[] Dof, int N, Sparse.ISpdSolver Solver);
 }

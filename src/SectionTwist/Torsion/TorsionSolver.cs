@@ -12,11 +12,19 @@ namespace SectionTwist.Torsion;
 /// </summary>
 internal static class TorsionSolver
 {
+    /// <summary>Fine unknowns from which the solve on a uniform refinement uses the two-grid iteration (<see cref="TwoGridSolver"/>).</summary>
+    internal static int TwoGridThreshold { get; set; } = 20_000;
+
     /// <summary>
     /// Solves on <paramref name="mesh"/>; <paramref name="holeArea"/> gives the exact area enclosed by each loop (used for
     /// holes); <paramref name="tolerance"/> is the relative residual asked of an iterative linear solve.
+    /// <paramref name="keepFactor"/> keeps a direct factorization on the solution (<see cref="TorsionSolution.Factor"/>)
+    /// for the solve on its uniform refinement; <paramref name="parent"/> is that coarser solution when
+    /// <paramref name="mesh"/> is its refinement: the solve then iterates with the two-grid cycle from the parent's
+    /// solution interpolated instead of factorizing (the direct solver remains the fallback of a stalled iteration).
     /// </summary>
-    public static TorsionSolution Solve(Mesh mesh, double[] holeArea, CancellationToken ct = default, double tolerance = SpdSolver.DefaultTolerance)
+    public static TorsionSolution Solve(Mesh mesh, double[] holeArea, CancellationToken ct = default, double tolerance = SpdSolver.DefaultTolerance,
+        bool keepFactor = false, TorsionSolution? parent = null)
     {
         int nNodes = mesh.NodeCount, nEl = mesh.ElementCount;
         var loops = mesh.Loops;
@@ -58,7 +66,29 @@ internal static class TorsionSolver
         }
         var k = trip.ToCsc();
         var u = new double[n];
-        if (n > 0) SpdSolver.Create(k, tolerance, ct).Solve(f, u);
+        ISpdSolver? kept = null;
+        if (n > 0)
+        {
+            if (parent?.Factor is { } pf && n >= TwoGridThreshold)
+            {
+                var p = NestedProlongation.Build(parent.Mesh, pf.Dof, pf.N, mesh, dof, n, ct);
+                var tg = new TwoGridSolver(k, p, pf.Solver, tolerance, ct);
+                var uc = new double[pf.N];
+                for (int i = 0; i < parent.Mesh.NodeCount; i++) if (pf.Dof[i] >= 0) uc[pf.Dof[i]] = parent.Phi[i];
+                var x0 = new double[n];
+                tg.Prolong(uc, x0);
+                tg.Initial = x0;
+                tg.Solve(f, u);
+                LastTwoGrid = tg.LastOutcome;
+                if (!tg.LastOutcome.Converged) SpdSolver.CreateDirect(k, ct).Solve(f, u);
+            }
+            else
+            {
+                var solver = SpdSolver.Create(k, tolerance, ct);
+                solver.Solve(f, u);
+                if (keepFactor && solver is not SpdSolver.IterativeWithFallback) kept = solver;
+            }
+        }
         double residual = n > 0 ? k.RelativeResidual(u, f) : 0;
 
         var phi = new double[nNodes];
@@ -83,8 +113,12 @@ internal static class TorsionSolver
         {
             Mesh = mesh, Phi = phi, LoopValue = loopValue, J = j, RegionJ = regionJ, BoundaryFlux = flux,
             MaxGradient = maxG, MaxGradientLocation = where, Residual = residual,
+            Factor = kept is null ? null : new TorsionSolution.Factorization(dof, n, kept),
         };
     }
+
+    /// <summary>How the last two-grid solve on this thread ended (for tests and benchmarks).</summary>
+    [ThreadStatic] internal static ConjugateGradient.Outcome? LastTwoGrid;
 
     internal static void Gather(Mesh mesh, int e, Span<double> xe, Span<double> ye)
     {

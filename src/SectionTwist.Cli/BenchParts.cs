@@ -1,0 +1,99 @@
+using System.Diagnostics;
+using System.Globalization;
+using SectionTwist.Geometry;
+using SectionTwist.Import.Dxf;
+using SectionTwist.Profiles;
+using SectionTwist.Torsion;
+
+namespace SectionTwist.Cli;
+
+/// <summary>
+/// <c>bench --startup</c> (whole-process time of the tool on a drawing, min and median over N runs) and
+/// <c>bench --batch</c> (a batch of template variants serial against parallel in the same process, and the ratio).
+/// Timings are wall times of this machine as it is: on a shared or loaded machine they vary from run to run.
+/// </summary>
+internal static class BenchParts
+{
+    /// <summary>The drawing of the start-up bench: the keyed 40 mm shaft (12 x 5 keyseat, 0.4 mm fillets) of the demo.</summary>
+    internal const string StartupSpec = "keyed:d=40,r=0.4";
+
+    /// <summary>Spawns the tool <paramref name="runs"/> times on the drawing and on a template spec; prints min and median.</summary>
+    public static void Startup(TextWriter w, int runs, string? tool)
+    {
+        var inv = CultureInfo.InvariantCulture;
+        var (file, prefix) = Tool(tool);
+        string dir = Directory.CreateTempSubdirectory("sectiontwist-startup").FullName;
+        try
+        {
+            string dxf = Path.Combine(dir, "keyed-shaft.dxf");
+            var profile = ProfileTemplates.Create(StartupSpec);
+            AtomicFile.Write(dxf, s => DxfWriter.Write(profile, s, new DxfWriteOptions()));
+            w.WriteLine($"start-up: whole process (spawn to exit) of {file}{(prefix.Length > 0 ? " " + prefix : "")}, {runs} runs each, {Environment.ProcessorCount} cores");
+            w.WriteLine("  command                                    min       median    max");
+            foreach (var argv in new[] { new[] { "--version" }, new[] { "section", dxf, "--unit", "mm" }, new[] { "section", "circle:d=40" } })
+            {
+                var times = new List<double>();
+                Spawn(file, prefix, argv); // first run: disk cache
+                for (int i = 0; i < runs; i++) times.Add(Spawn(file, prefix, argv));
+                times.Sort();
+                string shown = string.Join(' ', argv.Select(a => a == dxf ? "keyed-shaft.dxf" : a));
+                w.WriteLine(string.Create(inv, $"  {shown,-40} {times[0],7:F3} s  {times[times.Count / 2],7:F3} s  {times[^1],7:F3} s"));
+            }
+        }
+        finally { Directory.Delete(dir, recursive: true); }
+    }
+
+    /// <summary>The command to spawn: the given path, else this process's own executable (the tool itself, or dotnet with the tool's dll).</summary>
+    private static (string File, string Prefix) Tool(string? tool)
+    {
+        if (tool is not null)
+        {
+            if (!File.Exists(tool)) throw new UsageException($"--tool: '{tool}' is not a file; give the path of the installed sectiontwist");
+            return tool.EndsWith(".dll", StringComparison.OrdinalIgnoreCase) ? ("dotnet", tool) : (tool, "");
+        }
+        string self = Environment.ProcessPath ?? "dotnet";
+        if (Path.GetFileNameWithoutExtension(self).Equals("dotnet", StringComparison.OrdinalIgnoreCase))
+            return (self, typeof(BenchParts).Assembly.Location);
+        return (self, "");
+    }
+
+    private static double Spawn(string file, string prefix, string[] argv)
+    {
+        var psi = new ProcessStartInfo(file) { RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false };
+        if (prefix.Length > 0) psi.ArgumentList.Add(prefix);
+        foreach (var a in argv) psi.ArgumentList.Add(a);
+        var sw = Stopwatch.StartNew();
+        using var p = Process.Start(psi) ?? throw new UsageException($"could not start {file}");
+        p.StandardOutput.ReadToEnd();
+        string err = p.StandardError.ReadToEnd();
+        p.WaitForExit();
+        double t = sw.Elapsed.TotalSeconds;
+        if (p.ExitCode != 0) throw new SectionTwistException("bench-failed", $"{file} {string.Join(' ', argv)} exited {p.ExitCode}: {err.Trim()}");
+        return t;
+    }
+
+    /// <summary>The batch variants: keyed shafts of 200 diameters from 20 to 79.7 mm (keys from the standard table).</summary>
+    internal static IReadOnlyList<Profile> Variants(int count) =>
+        Enumerable.Range(0, count).Select(i => ProfileTemplates.Create(string.Create(CultureInfo.InvariantCulture, $"keyed:d={20 + 60.0 * i / count:0.###}"))).ToList();
+
+    /// <summary>Analyses <paramref name="count"/> variants serially and on all cores at the default accuracy; prints both times and the ratio.</summary>
+    public static void Batch(TextWriter w, int count)
+    {
+        var inv = CultureInfo.InvariantCulture;
+        var profiles = Variants(count);
+        SectionBatch.Analyze(profiles.Take(2 * Environment.ProcessorCount).ToList(), null); // compile before timing
+        var sw = Stopwatch.StartNew();
+        var serial = SectionBatch.Analyze(profiles, null, maxParallelism: 1);
+        double ts = sw.Elapsed.TotalSeconds;
+        sw.Restart();
+        var parallel = SectionBatch.Analyze(profiles, null);
+        double tp = sw.Elapsed.TotalSeconds;
+        for (int i = 0; i < count; i++)
+            if (serial[i].Result?.TorsionConstant != parallel[i].Result?.TorsionConstant)
+                throw new SectionTwistException("bench-failed", $"batch item {i} differs between the serial and the parallel run");
+        w.WriteLine(string.Create(inv, $"batch: {count} keyed-shaft variants (keyed:d=20..80) at the default accuracy, same process"));
+        w.WriteLine(string.Create(inv, $"  serial (1 worker)       {ts,7:F2} s"));
+        w.WriteLine(string.Create(inv, $"  parallel ({Environment.ProcessorCount} workers)    {tp,7:F2} s"));
+        w.WriteLine(string.Create(inv, $"  speed-up                {ts / tp,7:F2}x (results identical)"));
+    }
+}
