@@ -82,18 +82,25 @@ internal static class BenchParts
         var inv = CultureInfo.InvariantCulture;
         var profiles = Variants(count);
         SectionBatch.Analyze(profiles.Take(2 * Environment.ProcessorCount).ToList(), null); // compile before timing
+        var me = Process.GetCurrentProcess();
+        double cpu0 = me.TotalProcessorTime.TotalSeconds;
         var sw = Stopwatch.StartNew();
         var serial = SectionBatch.Analyze(profiles, null, maxParallelism: 1);
         double ts = sw.Elapsed.TotalSeconds;
+        me.Refresh();
+        double cpu1 = me.TotalProcessorTime.TotalSeconds;
         sw.Restart();
         var parallel = SectionBatch.Analyze(profiles, null);
         double tp = sw.Elapsed.TotalSeconds;
+        me.Refresh();
+        double cpu2 = me.TotalProcessorTime.TotalSeconds;
         for (int i = 0; i < count; i++)
             if (serial[i].Result?.TorsionConstant != parallel[i].Result?.TorsionConstant)
                 throw new SectionTwistException("bench-failed", $"batch item {i} differs between the serial and the parallel run");
         w.WriteLine(string.Create(inv, $"batch: {count} keyed-shaft variants (keyed:d=20..80) at the default accuracy, same process"));
-        w.WriteLine(string.Create(inv, $"  serial (1 worker)       {ts,7:F2} s"));
-        w.WriteLine(string.Create(inv, $"  parallel ({Environment.ProcessorCount} workers)    {tp,7:F2} s"));
-        w.WriteLine(string.Create(inv, $"  speed-up                {ts / tp,7:F2}x (results identical)"));
+        w.WriteLine(string.Create(inv, $"  serial (1 worker)       {ts,7:F2} s wall  {cpu1 - cpu0,7:F2} s CPU"));
+        w.WriteLine(string.Create(inv, $"  parallel ({Environment.ProcessorCount} workers)    {tp,7:F2} s wall  {cpu2 - cpu1,7:F2} s CPU"));
+        w.WriteLine(string.Create(inv, $"  speed-up                {ts / tp,7:F2}x wall (results identical); CPU parallel/serial {(cpu2 - cpu1) / (cpu1 - cpu0):F2}"));
+        w.WriteLine("  (a speed-up near the worker count needs idle cores: on a loaded machine the wall ratio shows the load, the CPU ratio the overhead)");
     }
 }
