@@ -20,14 +20,22 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
     private const int MaxPasses = 6;
 
     /// <summary>
-    /// First-pass element size h = FirstMeshFactor sqrt(A) accuracy^(1/4) (the J error of 6-node elements falls as h^4 on
-    /// smooth solutions). Measured on circle, tube, rectangle, hexagon, keyed shafts (sharp and filleted), square hollow
-    /// and splined sections at 1e-4 and 1e-6 (docs/performance.md): 0.6 met the accuracy 10 to 1000 times over on the
-    /// first pass; 1.5 still meets it on the first pass for most of them, with 4 to 9 times fewer elements, and the
-    /// estimate stays above the true error on every one; 2.0 pushed the splined shaft at 1e-6 into extra passes.
-    /// Settable only so the benchmarks can time the former value side by side.
+    /// First-pass element size h = FirstMeshFactor(acc) sqrt(A) acc^(1/4) (the J error of 6-node elements falls as h^4 on
+    /// smooth solutions). The factor is <see cref="DefaultMeshFactor"/> (0.6) down to the default accuracy 1e-4 and grows
+    /// as (1e-4 / acc)^0.2 below it, up to <see cref="FineMeshFactor"/> (1.5) at 1e-6. Measured (docs/performance.md):
+    /// at 1e-6 a factor of 0.6 met the accuracy 10 to 1000 times over on the first pass, 1.5 still meets it on the first
+    /// pass for most sections with 4 to 9 times fewer elements and the estimates stay above the true errors; at the
+    /// default accuracy a coarser first mesh (1.2 or 1.5) let the peak-shear estimate of the 2:1 ellipse fall below its
+    /// true error and coarsened the shear away from the peak and the shear centre, so 0.6 is kept there.
     /// </summary>
-    internal static double FirstMeshFactor { get; set; } = 1.5;
+    internal static double FirstMeshFactor(double accuracy) =>
+        accuracy >= 1e-4 ? DefaultMeshFactor : Math.Min(FineMeshFactor, DefaultMeshFactor * Math.Pow(1e-4 / accuracy, 0.2));
+
+    /// <summary>First-mesh factor at the default accuracy and coarser.</summary>
+    internal const double DefaultMeshFactor = 0.6;
+
+    /// <summary>Largest first-mesh factor (reached at 1e-6); settable only so the benchmarks can time the former value side by side.</summary>
+    internal static double FineMeshFactor { get; set; } = 1.5;
 
     /// <summary>
     /// Factor on the Richardson error of J: the value Roache recommends for a grid-convergence estimate whose order is
@@ -65,7 +73,7 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
 
         var holeArea = profile.Regions.SelectMany(r => r.Loops).Select(l => Math.Abs(l.SignedArea)).ToArray();
         double size = Math.Sqrt(props.Area);
-        double h = Math.Min(FirstMeshFactor * size * Math.Pow(acc, 0.25), profile.Bounds.Diagonal / 8);
+        double h = Math.Min(FirstMeshFactor(acc) * size * Math.Pow(acc, 0.25), profile.Bounds.Diagonal / 8);
         MeshFeasibility.Check(profile);
         var budget = AnalysisBudget.For(profile, options, acc, h);
         TorsionSolution? coarse = null, fine = null, pairC = null, pairF = null;

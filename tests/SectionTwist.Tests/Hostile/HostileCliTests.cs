@@ -72,7 +72,7 @@ public class HostileCliTests
     [Fact]
     public void Memory_budget_refusal_names_the_options_that_help()
     {
-        var (code, output, err) = CliRunner.Run("section", "keyed:d=40,r=0.5", "--memory-budget", "16");
+        var (code, output, err) = CliRunner.Run("section", "keyed:d=40,r=0.5", "--accuracy", "1e-6", "--memory-budget", "16");
         Assert.Equal(2, code);
         Assert.Equal("", output);
         Assert.Contains("memory budget (16 MB)", err);
