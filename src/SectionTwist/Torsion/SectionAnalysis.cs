@@ -88,12 +88,13 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
             if (!options.EstimateError) { fine = coarse; break; }
             if (4L * coarseMesh.ElementCount > budget.MaxElements)
             {
+                // The first mesh cannot be refined within the budget: no error estimate is possible, so the accuracy
+                // asked for cannot be promised; refuse it (naming the finest that fits) rather than print an unchecked J.
+                if (last is null) throw budget.Refusal(coarseMesh.ElementCount);
                 // Keep the last pair of meshes with its estimate; without one the error is unknown.
-                warnings.Add(new AnalysisWarning("accuracy-not-reached", last is null
-                    ? $"{budget.Describe()} stopped the analysis before a refined solve; the error is not estimated"
-                    : $"{budget.Describe()} stopped refinement at an estimated {estJ:G2} for J; results are from the last pair of meshes"));
-                if (last is null) fine = coarse;
-                else (coarse, fine, coarseMesh) = (pairC!, pairF!, pairC!.Mesh);
+                warnings.Add(new AnalysisWarning("accuracy-not-reached",
+                    $"{budget.Describe()} stopped refinement at an estimated {estJ:G2} for J; results are from the last pair of meshes"));
+                (coarse, fine, coarseMesh) = (pairC!, pairF!, pairC!.Mesh);
                 break;
             }
             Report("refine", f0 + 0.4 * span);
