@@ -25,7 +25,7 @@ internal static class SectionBench
         var total = Stopwatch.StartNew();
         w.WriteLine();
         w.WriteLine($"time to J within 1e-4 (whole analysis after a warm-up; true error against a {NumberText.Exponent(ReferenceAccuracy, 1)} solve)");
-        w.WriteLine("  section                     time      J [mm⁴]      est. error  true error  elements  reference solve");
+        w.WriteLine($"  section                     time      J [{UnitSystem.SiMillimetre.SecondMoment.Symbol}]      est. error  true error  elements  reference solve");
         var ct = context.Cancellation;
         var warm = Stopwatch.StartNew();
         SectionAnalyzer.Analyze(ProfileSources.Load("circle:d=10"), context.Analysis(1e-3), ct);
@@ -48,7 +48,7 @@ internal static class SectionBench
             double trueErr = Math.Abs(r.TorsionConstant - refResult.TorsionConstant) / refResult.TorsionConstant;
             progress.Clear();
             w.WriteLine(string.Create(inv,
-                $"  {spec,-24} {t,7:F3}s  {r.TorsionConstant * 1e12,12:F1}  {NumberText.Exponent(r.EstimatedRelativeError.TorsionConstant),10}  {NumberText.Exponent(trueErr),10}  {r.Mesh.Elements,8:N0}  {tr,8:F1}s"));
+                $"  {spec,-24} {t,7:F3}s  {NumberText.Fixed(UnitSystem.SiMillimetre.SecondMoment.FromSi(r.TorsionConstant), 1),12}  {NumberText.Exponent(r.EstimatedRelativeError.TorsionConstant),10}  {NumberText.Exponent(trueErr),10}  {r.Mesh.Elements,8:N0}  {tr,8:F1}s"));
         }
         double wall = total.Elapsed.TotalSeconds;
         w.WriteLine(string.Create(inv,

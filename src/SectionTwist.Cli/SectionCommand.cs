@@ -84,7 +84,7 @@ internal sealed class SectionCommand : ICommand
         else
         {
             SectionText.Write(ctx.Out, result, source, units);
-            if (plastic is not null) PlasticCli.WriteText(ctx.Out, plastic, plasticYield!.Value.Item2);
+            if (plastic is not null) PlasticCli.WriteText(ctx.Out, plastic, plasticYield!.Value.Item2, units);
         }
         return 0;
     }
