@@ -63,7 +63,17 @@ internal sealed class ShaftCommand : ICommand
         }
         if (units is not null) doc = doc with { Units = units };
         ShaftResult result;
-        try { result = ShaftSolver.Solve(doc.Model); }
+        GearedShaftResult? geared = null;
+        try
+        {
+            // further shafts joined by stages: every shaft solved at its own speed, never silently dropped
+            if (doc.Dynamics is { } dyn && dyn.Drivetrain.Shafts.Count > 1)
+            {
+                geared = GearedShaftSolver.Solve(dyn.Drivetrain, context.Cancellation);
+                result = geared.Main;
+            }
+            else result = ShaftSolver.Solve(doc.Model);
+        }
         catch (SectionTwistException e) { throw new SectionTwistException(e.Code, $"{Path.GetFileName(path)}: {e.Message}", e); }
 
         context.Cancellation.ThrowIfCancellationRequested();
@@ -77,13 +87,13 @@ internal sealed class ShaftCommand : ICommand
             ShaftReport.Write(ShaftReport.Build(doc, result, sections, outcomes, CliReport.Options()), report);
             context.Err.WriteLine($"wrote {report}");
         }
-        if (json) context.Out.WriteLine(ShaftResultJson.Write(result, path));
-        else PrintTables(context.Out, doc, result, path);
+        if (json) context.Out.WriteLine(ShaftResultJson.Write(result, path, geared));
+        else PrintTables(context.Out, doc, result, path, geared);
         if (csv is not null) context.Err.WriteLine($"wrote {string.Join(", ", csvFiles)}");
         return 0;
     }
 
-    internal static void PrintTables(TextWriter w, ShaftDocument doc, ShaftResult r, string path)
+    internal static void PrintTables(TextWriter w, ShaftDocument doc, ShaftResult r, string path, GearedShaftResult? geared = null)
     {
         var u = doc.Units;
         w.WriteLine($"{doc.Model.Title ?? "shaft"} ({path}), units {u.Name}");
@@ -154,6 +164,8 @@ internal sealed class ShaftCommand : ICommand
             w.WriteLine();
         }
         ShaftWarpingText.Write(w, doc, r);
+        if (r.Overload is { } overload) ShaftOverloadText.Write(w, doc, overload);
+        if (geared is not null) ShaftBranchText.Write(w, doc, geared);
         w.WriteLine(Caution);
     }
 

@@ -16,6 +16,7 @@ public static class ShaftSolver
         ArgumentNullException.ThrowIfNull(model);
         var result = new ShaftAnalysis(model).Compute();
         result = model.Bending is null ? result : result with { Bending = Bending.ShaftBending.Solve(result) };
-        return WarpingTorsion.ShaftWarping.Attach(result);
+        result = WarpingTorsion.ShaftWarping.Attach(result);
+        return model.Overload is null ? result : result with { Overload = Plastic.OverloadCheck.Evaluate(result) };
     }
 }
