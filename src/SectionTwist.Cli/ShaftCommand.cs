@@ -33,7 +33,8 @@ internal sealed class ShaftCommand : ICommand
         "  --units SYS   units of the tables, CSV files and report: SI-mm, SI-m or US (default: the file's own 'units' block)\n" +
         "  --json        print the result as JSON in SI base units (m, N*m, Pa, rad) instead of tables; --units does not change it\n" +
         "  --csv DIR     also write DIR/stations.csv, DIR/segments.csv and DIR/warnings.csv, and DIR/bending.csv with a 'bending' block\n" +
-        "  --report OUT  also write one self-contained HTML report (inputs, tables, pictures, verification, method)\n" +
+        "  --report OUT  also write one self-contained HTML report (inputs, tables, pictures, verification, method; with a\n" +
+        "                'dynamics' block also the further shafts and the torsional modes, as 'sectiontwist modes' computes them)\n" +
         "  Exceeded limits and unbounded peaks (sharp corners) are flagged in the 'check' column, not errors; the exit code is\n" +
         "  0 when the shaft solved, 2 for bad input.";
 
@@ -84,7 +85,8 @@ internal sealed class ShaftCommand : ICommand
             using (var progress = new ProgressLine(context, "report"))
             using (progress.Pulse("verification cases"))
                 outcomes = verifying!.GetAwaiter().GetResult();
-            ShaftReport.Write(ShaftReport.Build(doc, result, sections, outcomes, CliReport.Options()), report);
+            var extras = ShaftExtras.Compute(doc, geared, path, context.Cancellation);
+            ShaftReport.Write(ShaftReport.Build(doc, result, sections, outcomes, CliReport.Options(), extras), report);
             context.Err.WriteLine($"wrote {report}");
         }
         if (json) context.Out.WriteLine(ShaftResultJson.Write(result, path, geared));
