@@ -32,7 +32,8 @@ internal sealed class ShaftCommand : ICommand
         "  reactions, the governing segment and the warnings.\n" +
         "  --units SYS   units of the tables, CSV files and report: SI-mm, SI-m or US (default: the file's own 'units' block)\n" +
         "  --json        print the result as JSON in SI base units (m, N*m, Pa, rad) instead of tables; --units does not change it\n" +
-        "  --csv DIR     also write DIR/stations.csv, DIR/segments.csv and DIR/warnings.csv, and DIR/bending.csv with a 'bending' block\n" +
+        "  --csv DIR     also write DIR/stations.csv, DIR/segments.csv and DIR/warnings.csv, DIR/bending.csv with a 'bending' block\n" +
+        "                and DIR/overload.csv with an 'overload' block\n" +
         "  --report OUT  also write one self-contained HTML report (inputs, tables, pictures, verification, method; with a\n" +
         "                'dynamics' block also the further shafts and the torsional modes, as 'sectiontwist modes' computes them)\n" +
         "  Exceeded limits and unbounded peaks (sharp corners) are flagged in the 'check' column, not errors; the exit code is\n" +
@@ -78,7 +79,7 @@ internal sealed class ShaftCommand : ICommand
         catch (SectionTwistException e) { throw new SectionTwistException(e.Code, $"{Path.GetFileName(path)}: {e.Message}", e); }
 
         context.Cancellation.ThrowIfCancellationRequested();
-        var csvFiles = csv is null ? [] : ShaftResultCsv.WriteAll(result, csv, doc.Units);
+        var csvFiles = csv is null ? [] : ShaftResultCsv.WriteAll(result, csv, doc.Units, geared);
         if (report is not null)
         {
             IReadOnlyList<Verification.VerificationOutcome> outcomes;

@@ -102,4 +102,27 @@ public class ShaftOverloadTests
         Assert.Contains(expected, e.Message, StringComparison.Ordinal);
         Assert.Matches(@"^shaft\.yaml:\d+:\d+: ", e.Message);
     }
+
+    [Fact]
+    public void Shaft_command_prints_the_overload_table_and_writes_overload_csv()
+    {
+        string dir = Path.Combine(Path.GetTempPath(), "st-overload-" + Guid.NewGuid().ToString("N"));
+        Directory.CreateDirectory(dir);
+        try
+        {
+            string path = Path.Combine(dir, "shaft.yaml");
+            System.IO.File.WriteAllText(path, File);
+            var (code, output, err) = SectionTwist.Tests.Cli.CliRunner.Run("shaft", path, "--csv", Path.Combine(dir, "csv"));
+            Assert.True(code == 0, err);
+            Assert.Contains("overload checks (fully plastic torque T_p", output, StringComparison.Ordinal);
+            Assert.Contains("!! OVER PLASTIC CAPACITY", output, StringComparison.Ordinal);
+            Assert.Contains("no strain hardening", output, StringComparison.Ordinal);
+            // solid 40 mm, tau_y 200 MPa: T_p = 2 pi r^3 tau_y / 3 = 3351 N*m (Nadai sand heap), printed to 4 digits
+            Assert.Contains(SectionTwist.Units.NumberText.Format(2 * Math.PI * 8e-6 * 200e6 / 3, 4), output, StringComparison.Ordinal);
+            var rows = System.IO.File.ReadAllLines(Path.Combine(dir, "csv", "overload.csv"));
+            Assert.StartsWith("segment,section,yield_shear_MPa,first_yield_torque_Nm", rows[0], StringComparison.Ordinal);
+            Assert.Equal(1 + 2 + 1 + 2, rows.Length);   // header; solid: stall and jam; tube: stall; bar: stall and jam
+        }
+        finally { try { Directory.Delete(dir, true); } catch (IOException) { } }
+    }
 }
