@@ -65,7 +65,7 @@ internal sealed class DemoCommand : ICommand
                 geared = GearedShaftSolver.Solve(d.Drivetrain, context.Cancellation);
                 result = geared.Main;
             }
-            else result = ShaftSolver.Solve(doc.Model);
+            else result = ShaftSolver.Solve(doc.Model, context.Cancellation);
             using (progress.Pulse("verification cases"))
                 verification = verifying.GetAwaiter().GetResult();
             progress.Report(0.9, "torsional modes, pictures and report");

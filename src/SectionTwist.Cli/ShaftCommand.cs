@@ -74,7 +74,7 @@ internal sealed class ShaftCommand : ICommand
                 geared = GearedShaftSolver.Solve(dyn.Drivetrain, context.Cancellation);
                 result = geared.Main;
             }
-            else result = ShaftSolver.Solve(doc.Model);
+            else result = ShaftSolver.Solve(doc.Model, context.Cancellation);
         }
         catch (SectionTwistException e) { throw new SectionTwistException(e.Code, $"{Path.GetFileName(path)}: {e.Message}", e); }
 

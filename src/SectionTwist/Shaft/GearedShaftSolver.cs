@@ -122,7 +122,7 @@ public static class GearedShaftSolver
             if (link.Child.Model.FixedStations.Count == 0 && Referred(link, children) is var t && t != 0)
                 loads.Add(new PointTorque(link.ParentStation, t) { Description = $"stage '{link.Stage.Label}' (shaft '{link.Child.Name}')" });
         var model = shaft.Model with { Loads = loads, TwistRateLimit = shaft.Model.TwistRateLimit ?? twistLimit };
-        try { return ShaftSolver.Solve(model); }
+        try { return ShaftSolver.Solve(model, cancellation); }
         catch (SectionTwistException e) when (from is not null)
         {
             throw new SectionTwistException(e.Code,
