@@ -144,4 +144,37 @@ public class GearedShaftTests
             """));
         Assert.StartsWith("shaft 'motor' (beyond stage 'g1'): ", dangling.Message, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void Shaft_command_prints_and_writes_every_shaft_of_a_geared_file()
+    {
+        string dir = Path.Combine(Path.GetTempPath(), "st-geared-" + Guid.NewGuid().ToString("N"));
+        Directory.CreateDirectory(dir);
+        try
+        {
+            string path = Path.Combine(dir, "geared.yaml");
+            File.WriteAllText(path, Main + """
+                loads: [{at: W, torque: 600}, {at: D, torque: -600}]
+                supports: free
+                dynamics:
+                  shafts:
+                    - name: motor
+                      stations: [{name: R, at: 0}, {name: P, after: 200}]
+                      segments: [{from: R, to: P, section: {round: 20}, material: s}]
+                      supports: {fixed: [R]}
+                  stages: [{name: g1, driving: P, driven: W, teeth: [15, 60]}]
+                  inertias: [{at: R, inertia: 0.01 kg*m^2}, {at: D, inertia: 0.5 kg*m^2}]
+                """);
+            var (code, output, err) = SectionTwist.Tests.Cli.CliRunner.Run("shaft", path);
+            Assert.True(code == 0, err);
+            Assert.Contains("shaft 'motor' beyond stage 'g1'", output, StringComparison.Ordinal);
+            Assert.Contains("reaction at 'R': -150 N·m", output, StringComparison.Ordinal);   // 600 x 15 / 60, power balance
+            var (jcode, json, jerr) = SectionTwist.Tests.Cli.CliRunner.Run("shaft", path, "--json");
+            Assert.True(jcode == 0, jerr);
+            var node = System.Text.Json.Nodes.JsonNode.Parse(json)!;
+            Tol.Rel(150, (double)node["branches"]![0]!["stageTorque"]!, 1e-12, "T_p = T_w z_p / z_w");
+            Assert.Equal("motor", (string?)node["branches"]![0]!["shaft"]);
+        }
+        finally { try { Directory.Delete(dir, true); } catch (IOException) { } }
+    }
 }
