@@ -115,6 +115,10 @@ public static class GearedShaftSolver
         double? twistLimit, CancellationToken cancellation)
     {
         cancellation.ThrowIfCancellationRequested();
+        if (from is not null && shaft.Model.Segments.Count == 0)
+            throw new SectionTwistException("stage-branch-springs-only",
+                $"shaft '{shaft.Name}' (beyond stage '{from.Stage.Label}') has springs but no segments, which the static solve of every shaft needs; " +
+                "give it its shaft segment(s) under 'dynamics: shafts', or run 'sectiontwist modes' for the dynamics alone");
         var loads = new List<ShaftLoad>(shaft.Model.Loads);
         if (from is not null && stageTorque != 0)
             loads.Add(new PointTorque(from.ChildStation, stageTorque) { Description = $"stage '{from.Stage.Label}'" });

@@ -143,6 +143,19 @@ public class GearedShaftTests
               stages: [{name: g1, driving: P, driven: W, ratio: 4}]
             """));
         Assert.StartsWith("shaft 'motor' (beyond stage 'g1'): ", dangling.Message, StringComparison.Ordinal);
+
+        // a further shaft of springs only (a coupling model) has nothing the static solve can check: refused naming it and the stage
+        var springs = Assert.Throws<SectionTwistException>(() => Solve(Main + """
+            supports: {fixed: [D]}
+            loads: [{at: W, torque: 600}]
+            dynamics:
+              shafts:
+                - name: coupling
+                  stations: [{name: X, at: 0}, {name: Y, at: 0}]
+                  springs: [{between: [X, Y], stiffness: 5 kN*m/rad}]
+              stages: [{name: g1, driving: Y, driven: W, ratio: 3}]
+            """));
+        Assert.Contains("shaft 'coupling' (beyond stage 'g1') has springs but no segments", springs.Message, StringComparison.Ordinal);
     }
 
     [Fact]
