@@ -53,7 +53,7 @@ internal sealed class ModesCommand : ICommand
         ForcedResponseResult? forced;
         try
         {
-            modes = ModalAnalysis.Solve(dyn.Drivetrain, dyn.Options);
+            modes = ModalAnalysis.Solve(dyn.Drivetrain, dyn.Options, context.Cancellation);
             resonance = dyn.Excitation is { } ex ? ResonanceCheck.Evaluate(modes, ex) : null;
             forced = dyn.Forcing is { } f ? ForcedResponse.Compute(modes, f, dyn.DampingRatio) : null;
         }
