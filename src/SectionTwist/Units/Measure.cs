@@ -36,4 +36,6 @@ public enum Measure
     Power,
     /// <summary>Rotational speed (rad/s).</summary>
     Speed,
+    /// <summary>Torsional rigidity G J of a section, e.g. the effective rigidity of a composite section (N·m²).</summary>
+    TorsionalRigidity,
 }

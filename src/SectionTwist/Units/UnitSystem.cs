@@ -22,21 +22,21 @@ public sealed class UnitSystem
 
     /// <summary>
     /// SI with millimetres (<c>SI-mm</c>): mm, mm², mm⁴, mm³, N·m, MPa, GPa, deg, deg/m, MPa per kN·m, N·m/m, N·m/rad, kW,
-    /// rpm. The default for drawings and specs in mm or cm and for shaft files in mm.
+    /// rpm, N·m². The default for drawings and specs in mm or cm and for shaft files in mm.
     /// </summary>
     public static UnitSystem SiMillimetre { get; } = new("SI-mm", Build(LengthUnit.Millimetre, new("N·m", 1), new("MPa", 1e6), new("GPa", 1e9),
-        new("deg/m", Degree), new("MPa per kN·m", 1e3), new("kW", 1e3)));
+        new("deg/m", Degree), new("MPa per kN·m", 1e3), new("kW", 1e3), new("N·m²", 1)));
 
-    /// <summary>SI with metres (<c>SI-m</c>): m, m², m⁴, m³, N·m, MPa, GPa, deg, deg/m, MPa per kN·m, N·m/m, N·m/rad, kW, rpm.</summary>
+    /// <summary>SI with metres (<c>SI-m</c>): m, m², m⁴, m³, N·m, MPa, GPa, deg, deg/m, MPa per kN·m, N·m/m, N·m/rad, kW, rpm, N·m².</summary>
     public static UnitSystem SiMetre { get; } = new("SI-m", Build(LengthUnit.Metre, new("N·m", 1), new("MPa", 1e6), new("GPa", 1e9),
-        new("deg/m", Degree), new("MPa per kN·m", 1e3), new("kW", 1e3)));
+        new("deg/m", Degree), new("MPa per kN·m", 1e3), new("kW", 1e3), new("N·m²", 1)));
 
     /// <summary>
     /// US customary (<c>US</c>): in, in², in⁴, in³, lbf·in, psi, Mpsi (10⁶ psi), deg, deg/ft, psi per lbf·in (= 1/in³),
-    /// lbf·in/in, lbf·in/rad, hp (550 ft·lbf/s), rpm.
+    /// lbf·in/in, lbf·in/rad, hp (550 ft·lbf/s), rpm, lbf·in².
     /// </summary>
     public static UnitSystem US { get; } = new("US", Build(LengthUnit.Inch, new("lbf·in", PoundForce * Inch), new("psi", Psi), new("Mpsi", 1e6 * Psi),
-        new("deg/ft", Degree / Foot), new("psi per lbf·in", 1 / (Inch * Inch * Inch)), new("hp", 745.69987158227022)));
+        new("deg/ft", Degree / Foot), new("psi per lbf·in", 1 / (Inch * Inch * Inch)), new("hp", 745.69987158227022), new("lbf·in²", PoundForce * Inch * Inch)));
 
     /// <summary>The three standard systems, in the order <c>--units</c> lists them.</summary>
     public static IReadOnlyList<UnitSystem> Standard { get; } = [SiMillimetre, SiMetre, US];
@@ -77,6 +77,9 @@ public sealed class UnitSystem
     public DisplayUnit Power => this[Measure.Power];
     /// <summary>Rotational speed.</summary>
     public DisplayUnit Speed => this[Measure.Speed];
+
+    /// <summary>The unit of <see cref="Measure.TorsionalRigidity"/>.</summary>
+    public DisplayUnit TorsionalRigidity => this[Measure.TorsionalRigidity];
 
     /// <summary>An SI value of <paramref name="measure"/> in this system, without the unit (house number style).</summary>
     public string Format(double si, Measure measure, int digits = 5) => this[measure].Format(si, digits);
@@ -155,7 +158,7 @@ public sealed class UnitSystem
     public override string ToString() => Name;
 
     private static DisplayUnit[] Build(LengthUnit length, DisplayUnit torque, DisplayUnit stress, DisplayUnit modulus, DisplayUnit twistRate,
-        DisplayUnit shearPerTorque, DisplayUnit power)
+        DisplayUnit shearPerTorque, DisplayUnit power, DisplayUnit rigidity)
     {
         var u = new DisplayUnit[Enum.GetValues<Measure>().Length];
         SetLength(u, length);
@@ -169,6 +172,7 @@ public sealed class UnitSystem
         u[(int)Measure.RotationalStiffness] = new($"{torque.Symbol}/rad", torque.SiPerUnit);
         u[(int)Measure.Power] = power;
         u[(int)Measure.Speed] = new("rpm", 2 * Math.PI / 60);
+        u[(int)Measure.TorsionalRigidity] = rigidity;
         return u;
     }
 
