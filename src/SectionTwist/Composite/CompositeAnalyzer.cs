@@ -57,7 +57,7 @@ public static class CompositeAnalyzer
             perMaterial.Add(new CompositeMaterialResult
             {
                 Material = materials[m],
-                Parts = section.Parts.Where(p => MaterialIndex(section, p) == m).Select(p => p.Name).ToArray(),
+                Parts = section.Parts.Where(p => MaterialIndex(section, p) == m).Select(p => p.Name).ToList().AsReadOnly(),
                 Area = fine.Area[m],
                 MaxShearPerTorque = pf,
                 MaxShearLocation = fine.PeakLocation[m],
@@ -72,9 +72,9 @@ public static class CompositeAnalyzer
         {
             Section = section, Reference = reference,
             TorsionalRigidity = gjRef * fine.J, EquivalentTorsionConstant = fine.J,
-            Materials = perMaterial, EstimatedRelativeError = jErr,
+            Materials = perMaterial.AsReadOnly(), EstimatedRelativeError = jErr,
             Mesh = new MeshSummary(fine.Mesh.NodeCount, fine.Mesh.ElementCount, MeshQuality.MinAngleDegrees(fine.Mesh)),
-            Warnings = warnings,
+            Warnings = warnings.AsReadOnly(),
         };
     }
 

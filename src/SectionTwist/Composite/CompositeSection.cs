@@ -17,7 +17,7 @@ public sealed class CompositeSection
     public CompositeSection(IEnumerable<CompositePart> parts, string? name = null)
     {
         ArgumentNullException.ThrowIfNull(parts);
-        Parts = parts.ToArray();
+        Parts = parts.ToList().AsReadOnly();
         Name = name ?? (Parts.Count > 0 ? Parts[0].Shape.Name : "composite");
         if (Parts.Count == 0) throw new SectionTwistException("empty-profile", $"{Name}: a composite section needs at least one part");
         foreach (var g in Parts.GroupBy(p => p.Name, StringComparer.OrdinalIgnoreCase))
@@ -72,7 +72,7 @@ public sealed class CompositeSection
             interfaces.Add((l, Math.Max(region, 0)));
         }
         Interfaces = interfaces;
-        Materials = Parts.Select(p => p.Material).DistinctBy(m => m.Name, StringComparer.OrdinalIgnoreCase).ToArray();
+        Materials = Parts.Select(p => p.Material).DistinctBy(m => m.Name, StringComparer.OrdinalIgnoreCase).ToList().AsReadOnly();
     }
 
     /// <summary>The parts as given.</summary>
