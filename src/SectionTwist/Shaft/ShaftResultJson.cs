@@ -73,6 +73,7 @@ internal static class ShaftResultJson
             exceedsShearLimit = s.ExceedsShearLimit,
             exceedsTwistRateLimit = s.ExceedsTwistRateLimit,
             check = s.Check,
+            materialChecks = s.MaterialChecks.Select(c => new { material = c.Material.Name, maxShear = c.MaxShear, shearLimit = c.Material.LimitShear, shearLimitBasis = c.Material.LimitBasis, safetyFactor = Num(c.SafetyFactor), exceedsShearLimit = c.Exceeds }),
         }),
         reactions = r.Reactions.Select(x => new { station = x.Station, torque = x.Torque }),
         springs = r.Springs.Select(x => new { name = x.Label, stationA = x.StationA, stationB = x.StationB, torque = x.Torque, windup = x.Windup }),
