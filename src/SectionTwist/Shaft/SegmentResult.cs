@@ -25,7 +25,11 @@ public sealed record SegmentResult
     public required double TorqueAtTo { get; init; }
     /// <summary>Twist phi(To) - phi(From), rad.</summary>
     public required double Twist { get; init; }
-    /// <summary>Peak shear stress anywhere in the segment, Pa (|T| times the section's peak shear per unit torque, largest along the segment).</summary>
+    /// <summary>
+    /// Peak shear stress anywhere in the segment, Pa (|T| times the section's peak shear per unit torque, largest along the
+    /// segment). For a composite section: the peak in the governing material (smallest factor of safety against its own
+    /// limit); <see cref="MaterialChecks"/> lists every material's peak.
+    /// </summary>
     public required double MaxShear { get; init; }
     /// <summary>The stress the factor of safety is measured against, Pa (allowable, or shear yield), or null.</summary>
     public required double? ShearLimit { get; init; }

@@ -187,6 +187,7 @@ internal sealed class ShaftAnalysis(ShaftModel model)
                 var governing = checks.Where(c => c.SafetyFactor is not null).MinBy(c => c.SafetyFactor!.Value);
                 lim = governing?.Material.LimitShear;
                 sf = governing?.SafetyFactor;
+                if (governing is not null) tau = governing.MaxShear; // the table compares the peak with the limit of the same material
                 exceeds = checks.Any(c => c.Exceeds);
             }
             list.Add((layout.Stations[e.A].Position, new SegmentResult
