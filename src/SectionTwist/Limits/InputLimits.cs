@@ -46,6 +46,9 @@ public static class InputLimits
     /// <summary>Most straight pieces (curves flattened finely) the outline check of a profile examines for crossings.</summary>
     public const int MaxOutlineEdges = 2_000_000;
 
+    /// <summary>Most pair tests the outline crossing check makes (a few seconds); more means pieces crowded into one place.</summary>
+    public const long MaxCrossingPairTests = 150_000_000;
+
     /// <summary>Most points of a point list.</summary>
     public const int MaxPoints = 2_000_000;
 
