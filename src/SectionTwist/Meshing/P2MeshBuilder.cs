@@ -102,7 +102,8 @@ internal static class P2MeshBuilder
     private static (int[] Zone, Point2[] Samples) Zones(Triangulation T, int[] order, double[] x, double[] y, int[] elements)
     {
         int ne = order.Length;
-        var elementOf = new Dictionary<int, int>(ne);
+        var elementOf = new int[T.TriangleCount];
+        Array.Fill(elementOf, -1);
         for (int k = 0; k < ne; k++) elementOf[order[k]] = k;
         var zone = new int[ne];
         Array.Fill(zone, -1);
@@ -126,7 +127,8 @@ internal static class P2MeshBuilder
                 {
                     int code = 3 * t + i;
                     if (T.Seg[code] >= 0 || T.N[code] < 0) continue;
-                    if (!elementOf.TryGetValue(T.N[code] / 3, out int kn) || zone[kn] >= 0) continue;
+                    int kn = elementOf[T.N[code] / 3];
+                    if (kn < 0 || zone[kn] >= 0) continue;
                     zone[kn] = z; stack.Push(kn);
                 }
             }
