@@ -75,7 +75,7 @@ internal sealed class DemoCommand : ICommand
                 ModesReport.Write(doc, modes, check, forced, modesFile, CliReport.Options());
                 files.Add(modesFile);
                 var first = modes.ElasticModes.FirstOrDefault();
-                modesLine = $"  Drivetrain: lowest torsional natural frequency {(first is null ? "-" : NumberText.Format(first.Frequency, 4))} Hz" +
+                modesLine = $"  Drivetrain: lowest torsional natural frequency {(first is null ? "-" : doc.Units.Frequency.Text(first.Frequency, 4))}" +
                             (check?.Closest is { } c ? $"; closest crossing: mode {c.Mode} with {c.Excitation} ({(c.Status == CrossingStatus.Resonance ? "in the operating range" : $"margin {NumberText.Fixed(c.Margin * 100, 0)} %")}, {ModalResultJson.Status(c.Status)})" : "") +
                             " (modes.html)";
             }

@@ -1,4 +1,3 @@
-using System.Globalization;
 using SectionTwist.Shaft;
 
 namespace SectionTwist.Rendering.Report;
@@ -10,16 +9,15 @@ internal static class WarpingChapter
     {
         if (result.Warping is not { } m) return null;
         var u = doc.Units;
-        string F(double v, string f = "G4") => v.ToString(f, CultureInfo.InvariantCulture);
         var stations = new ReportTable("Stations under restrained warping",
-            ["station", $"position [{u.Length.Symbol}]", "rotation [deg]", "rate of twist [deg/m]", $"support torque [{u.Torque.Symbol}]", "bimoment at restraint [N·m²]"],
-            m.Stations.Select(s => (IReadOnlyList<string>)[s.Name, u.Length.Format(s.Position), F(s.Rotation * 180 / Math.PI, "F4"),
-                F(s.RateOfTwist * 180 / Math.PI), u.Torque.Format(s.ReactionTorque, "G4"), F(s.ReactionBimoment)]).ToArray());
+            ["station", $"position [{u.Length.Symbol}]", $"rotation [{u.Angle.Symbol}]", $"rate of twist [{u.TwistRate.Symbol}]", $"support torque [{u.Torque.Symbol}]", $"bimoment at restraint [{u.Bimoment.Symbol}]"],
+            m.Stations.Select(s => (IReadOnlyList<string>)[s.Name, u.Length.Format(s.Position), u.Angle.Format(s.Rotation, "F4"),
+                u.TwistRate.Format(s.RateOfTwist, "G4"), u.Torque.Format(s.ReactionTorque, "G4"), u.Bimoment.Format(s.ReactionBimoment, "G4")]).ToArray());
         var segments = new ReportTable("Segments under restrained warping (largest values along each segment)",
-            ["segment", $"warping length a [{u.Length.Symbol}]", "largest rotation [deg]", "largest bimoment [N·m²]",
+            ["segment", $"warping length a [{u.Length.Symbol}]", $"largest rotation [{u.Angle.Symbol}]", $"largest bimoment [{u.Bimoment.Symbol}]",
                 $"warping normal stress [{u.Stress.Symbol}]", $"Saint-Venant shear [{u.Stress.Symbol}]"],
-            m.Segments.Select(s => (IReadOnlyList<string>)[s.Label, u.Length.Format(s.WarpingLength, "G4"), F(s.MaxRotation * 180 / Math.PI, "F4"),
-                F(s.MaxBimoment), u.Stress.Format(s.MaxWarpingNormalStress, "G4"), u.Stress.Format(s.MaxSaintVenantShear, "G4")]).ToArray());
+            m.Segments.Select(s => (IReadOnlyList<string>)[s.Label, u.Length.Format(s.WarpingLength, "G4"), u.Angle.Format(s.MaxRotation, "F4"),
+                u.Bimoment.Format(s.MaxBimoment, "G4"), u.Stress.Format(s.MaxWarpingNormalStress, "G4"), u.Stress.Format(s.MaxSaintVenantShear, "G4")]).ToArray());
         return new ReportChapter("Restrained warping (non-uniform torsion)")
         {
             Paragraphs =

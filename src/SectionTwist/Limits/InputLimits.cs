@@ -61,6 +61,9 @@ public static class InputLimits
     /// <summary>Largest section size (bounding-box diagonal), metres.</summary>
     public const double MaxSectionSize = 1e6;
 
+    /// <summary>Most holes in a section given to the plastic analysis (its time grows with the square of the holes).</summary>
+    public const int MaxPlasticHoles = 16;
+
     /// <summary>Largest ratio of segment stiffnesses in one shaft; beyond it the solve loses all digits.</summary>
     public const double MaxStiffnessRatio = 1e12;
 }

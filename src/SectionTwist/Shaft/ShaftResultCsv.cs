@@ -7,7 +7,7 @@ namespace SectionTwist.Shaft;
 /// <summary>
 /// CSV tables of a shaft result in a <see cref="UnitSystem"/> (the unit is part of each column name, in ASCII, e.g.
 /// <c>torque_at_from_N*m</c> becomes <c>torque_at_from_Nm</c>), written with <see cref="AtomicFile"/>: stations.csv,
-/// segments.csv (with the <c>check</c> column), warnings.csv, and bending.csv (SI) when the model has bending. Numbers keep
+/// segments.csv (with the <c>check</c> column), warnings.csv, and bending.csv when the model has bending. Numbers keep
 /// full precision.
 /// </summary>
 internal static class ShaftResultCsv
@@ -58,7 +58,7 @@ internal static class ShaftResultCsv
         Put("stations.csv", Stations(r, units));
         Put("segments.csv", Segments(r, units));
         Put("warnings.csv", Warnings(r));
-        if (r.Bending is { } b) Put("bending.csv", Bending.BendingCsv.Samples(b));
+        if (r.Bending is { } b) Put("bending.csv", Bending.BendingCsv.Samples(b, units));
         return files;
     }
 
