@@ -27,6 +27,15 @@ public sealed record SectionStiffness(double TorsionConstant, double ShearPerTor
     /// </summary>
     public bool PeakShearUnbounded { get; init; }
 
+    /// <summary>
+    /// A composite section's effective torsional rigidity (G J)_eff, N m^2; null for a homogeneous section. A segment
+    /// takes J = (G J)_eff / G of its own material, so its stiffness is the composite one whatever material it names.
+    /// </summary>
+    public double? TorsionalRigidity { get; init; }
+
+    /// <summary>A composite section's peak shear per unit torque in each material (each checked against its own limit); null for a homogeneous section.</summary>
+    public IReadOnlyList<MaterialShear>? MaterialShears { get; init; }
+
     /// <summary>Warnings of the section analysis, each naming the section (empty for exact and given sections).</summary>
     public IReadOnlyList<Torsion.AnalysisWarning> Warnings { get; init; } = [];
 

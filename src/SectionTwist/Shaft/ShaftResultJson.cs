@@ -128,5 +128,6 @@ internal static class ShaftResultJson
         exceedsShearLimit = s.ExceedsShearLimit,
         exceedsTwistRateLimit = s.ExceedsTwistRateLimit,
         check = s.Check,
+        materialChecks = s.MaterialChecks.Select(c => new { material = c.Material.Name, maxShear = c.MaxShear, shearLimit = c.Material.LimitShear, shearLimitBasis = c.Material.LimitBasis, safetyFactor = Num(c.SafetyFactor), exceedsShearLimit = c.Exceeds }),
     };
 }
