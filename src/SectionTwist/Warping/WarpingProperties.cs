@@ -1,5 +1,5 @@
 using SectionTwist.Geometry;
-using SectionTwist.Meshing;
+using SectionTwist.Torsion;
 
 namespace SectionTwist.Warping;
 
@@ -10,11 +10,11 @@ internal static class WarpingProperties
     /// Solves on the fine mesh (and on the coarse one for the error estimate, unless it is the same mesh); null for
     /// profiles of more than one region.
     /// </summary>
-    public static WarpingResult? Compute(Mesh coarse, Mesh fine, SectionProperties props, double j, CancellationToken ct)
+    public static WarpingResult? Compute(TorsionSolution coarse, TorsionSolution fine, SectionProperties props, double j, CancellationToken ct)
     {
-        var f = WarpingSolver.Solve(fine, props.Centroid, ct);
+        var f = WarpingSolver.Solve(fine.Mesh, props.Centroid, ct, fine.Laplacian);
         if (f is null) return null;
-        var c = ReferenceEquals(coarse, fine) ? null : WarpingSolver.Solve(coarse, props.Centroid, ct);
+        var c = ReferenceEquals(coarse.Mesh, fine.Mesh) ? null : WarpingSolver.Solve(coarse.Mesh, props.Centroid, ct, coarse.Laplacian);
         // Whole change between the meshes (not divided by 2^p - 1: the order of Iw is not known at corners), plus a
         // floor at the round-off level of the quantity's own scale.
         double size = Math.Sqrt(props.Area);
