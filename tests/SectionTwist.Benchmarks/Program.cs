@@ -20,7 +20,6 @@ public static class Program
             ModalBenchmarks.Quick();
             return;
         }
-        if (args.Length > 0 && args[0] == "scratch") { Scratch.Run(); return; }
         if (args.Length > 0 && args[0] == "warping")
         {
             WarpingRun.Run(args.Length > 1 ? double.Parse(args[1], CultureInfo.InvariantCulture) : 1e-4, args.Length > 2 ? int.Parse(args[2], CultureInfo.InvariantCulture) : 3);
