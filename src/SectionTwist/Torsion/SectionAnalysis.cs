@@ -162,7 +162,7 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
         if (options.Warping || (options.WarpingIfOpen && j < 0.5 * props.PolarMoment))
         {
             Report("warping", 0.97);
-            warping = Warping.WarpingProperties.Compute(useC, useF, props, j, ct);
+            warping = Warping.WarpingProperties.Compute(useC, useF, props, j, singular, ct);
             if (warping is null)
                 warnings.Add(new AnalysisWarning("warping-not-computed",
                     $"the profile has {profile.Regions.Count} separate parts: they warp independently and have no common shear centre; analyse each part alone for its warping properties"));

@@ -68,14 +68,16 @@ internal static class WarpingSolver
             }
         }
         var u = new double[n];
-        if (n > 0) laplacian.System(map, n, SpdSolver.DefaultTolerance, ct).Solver.Solve(f, u);
+        var solver = n > 0 ? laplacian.System(map, n, SpdSolver.DefaultTolerance, ct).Solver : null;
+        solver?.Solve(f, u);
         var psi = new double[nNodes];
         for (int i = 0; i < nNodes; i++) psi[i] = map[i] < 0 ? 0 : u[map[i]];
         double energy = 0; // integral |grad psi|^2 = f . u (Galerkin orthogonality)
         for (int i = 0; i < n; i++) energy += f[i] * u[i];
 
         // Moments of the mesh domain and of psi about (cx, cy), one pass: Trefftz conditions.
-        Integrate(mesh, cx, cy, psi, ref m);
+        var loads = new NodeLoads(nNodes);
+        Integrate(mesh, cx, cy, psi, ref m, loads);
         // second moments about the mesh domain's own centroid (it differs from the exact one by the curved-edge error)
         double xc = m.X / m.A, yc = m.Y / m.A;
         double ixx = m.Ixx - m.A * yc * yc, iyy = m.Iyy - m.A * xc * xc, ixy = m.Ixy - m.A * xc * yc;
@@ -98,8 +100,14 @@ internal static class WarpingSolver
         double a1 = -ys, b1 = xs;
         double iw = m.Psi2 + c * c * m.A + a1 * a1 * m.Iyy + b1 * b1 * m.Ixx
             + 2 * (c * m.Psi + a1 * m.PsiX + b1 * m.PsiY + c * a1 * m.X + c * b1 * m.Y + a1 * b1 * m.Ixy);
+        // warping shear: load integral(omega N_i) = the same combination of the node integrals
+        var g = new double[nNodes];
+        for (int i = 0; i < nNodes; i++) g[i] = loads.Psi[i] + c * loads.One[i] + a1 * loads.X[i] + b1 * loads.Y[i];
+        var (shear, shearAt) = solver is null ? (0.0, mesh.Node(0)) : WarpingShear.Solve(mesh, map, solver, g, ct);
         return new WarpingSolution
         {
+            MaxShearFactor = shear,
+            MaxShearFactorLocation = shearAt,
             Omega = omega,
             ShearCentre = new Point2(cx + xs, cy + ys),
             WarpingConstant = Math.Max(0, iw),
@@ -117,7 +125,7 @@ internal static class WarpingSolver
     }
 
     /// <summary>Area moments of the mesh domain and moments of the nodal field <paramref name="g"/> (P2 interpolation), about (cx, cy).</summary>
-    private static void Integrate(Mesh mesh, double cx, double cy, double[] g, ref Moments m)
+    private static void Integrate(Mesh mesh, double cx, double cy, double[] g, ref Moments m, NodeLoads loads)
     {
         Span<double> xe = stackalloc double[6];
         Span<double> ye = stackalloc double[6];
@@ -136,8 +144,23 @@ internal static class WarpingSolver
                 m.A += w; m.X += w * x; m.Y += w * y;
                 m.Ixx += w * y * y; m.Iyy += w * x * x; m.Ixy += w * x * y;
                 m.Psi += w * v; m.PsiX += w * v * x; m.PsiY += w * v * y; m.Psi2 += w * v * v;
+                for (int a = 0; a < 6; a++)
+                {
+                    int nd = mesh.Elements[6 * e + a];
+                    double wn = w * nq[a];
+                    loads.One[nd] += wn; loads.X[nd] += wn * x; loads.Y[nd] += wn * y; loads.Psi[nd] += wn * v;
+                }
             }
         }
+    }
+
+    /// <summary>Node integrals of N_i, x N_i, y N_i and psi N_i (x, y about the centroid).</summary>
+    private sealed class NodeLoads(int n)
+    {
+        public double[] One { get; } = new double[n];
+        public double[] X { get; } = new double[n];
+        public double[] Y { get; } = new double[n];
+        public double[] Psi { get; } = new double[n];
     }
 
     private struct Moments
