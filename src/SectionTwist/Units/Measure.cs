@@ -36,4 +36,6 @@ public enum Measure
     Power,
     /// <summary>Rotational speed (rad/s).</summary>
     Speed,
+    /// <summary>Bimoment of non-uniform torsion (N·m²).</summary>
+    Bimoment,
 }

@@ -25,18 +25,19 @@ public sealed class UnitSystem
     /// rpm. The default for drawings and specs in mm or cm and for shaft files in mm.
     /// </summary>
     public static UnitSystem SiMillimetre { get; } = new("SI-mm", Build(LengthUnit.Millimetre, new("N·m", 1), new("MPa", 1e6), new("GPa", 1e9),
-        new("deg/m", Degree), new("MPa per kN·m", 1e3), new("kW", 1e3)));
+        new("deg/m", Degree), new("MPa per kN·m", 1e3), new("kW", 1e3), new("N·m²", 1)));
 
     /// <summary>SI with metres (<c>SI-m</c>): m, m², m⁴, m³, N·m, MPa, GPa, deg, deg/m, MPa per kN·m, N·m/m, N·m/rad, kW, rpm.</summary>
     public static UnitSystem SiMetre { get; } = new("SI-m", Build(LengthUnit.Metre, new("N·m", 1), new("MPa", 1e6), new("GPa", 1e9),
-        new("deg/m", Degree), new("MPa per kN·m", 1e3), new("kW", 1e3)));
+        new("deg/m", Degree), new("MPa per kN·m", 1e3), new("kW", 1e3), new("N·m²", 1)));
 
     /// <summary>
     /// US customary (<c>US</c>): in, in², in⁴, in³, lbf·in, psi, Mpsi (10⁶ psi), deg, deg/ft, psi per lbf·in (= 1/in³),
     /// lbf·in/in, lbf·in/rad, hp (550 ft·lbf/s), rpm.
     /// </summary>
     public static UnitSystem US { get; } = new("US", Build(LengthUnit.Inch, new("lbf·in", PoundForce * Inch), new("psi", Psi), new("Mpsi", 1e6 * Psi),
-        new("deg/ft", Degree / Foot), new("psi per lbf·in", 1 / (Inch * Inch * Inch)), new("hp", 745.69987158227022)));
+        new("deg/ft", Degree / Foot), new("psi per lbf·in", 1 / (Inch * Inch * Inch)), new("hp", 745.69987158227022),
+        new("lbf·in²", PoundForce * Inch * Inch)));
 
     /// <summary>The three standard systems, in the order <c>--units</c> lists them.</summary>
     public static IReadOnlyList<UnitSystem> Standard { get; } = [SiMillimetre, SiMetre, US];
@@ -59,6 +60,8 @@ public sealed class UnitSystem
     public DisplayUnit WarpingConstant => this[Measure.WarpingConstant];
     /// <summary>Torques.</summary>
     public DisplayUnit Torque => this[Measure.Torque];
+    /// <summary>Bimoments (non-uniform torsion).</summary>
+    public DisplayUnit Bimoment => this[Measure.Bimoment];
     /// <summary>Stresses.</summary>
     public DisplayUnit Stress => this[Measure.Stress];
     /// <summary>Moduli G and E.</summary>
@@ -155,7 +158,7 @@ public sealed class UnitSystem
     public override string ToString() => Name;
 
     private static DisplayUnit[] Build(LengthUnit length, DisplayUnit torque, DisplayUnit stress, DisplayUnit modulus, DisplayUnit twistRate,
-        DisplayUnit shearPerTorque, DisplayUnit power)
+        DisplayUnit shearPerTorque, DisplayUnit power, DisplayUnit bimoment)
     {
         var u = new DisplayUnit[Enum.GetValues<Measure>().Length];
         SetLength(u, length);
@@ -169,6 +172,7 @@ public sealed class UnitSystem
         u[(int)Measure.RotationalStiffness] = new($"{torque.Symbol}/rad", torque.SiPerUnit);
         u[(int)Measure.Power] = power;
         u[(int)Measure.Speed] = new("rpm", 2 * Math.PI / 60);
+        u[(int)Measure.Bimoment] = bimoment;
         return u;
     }
 

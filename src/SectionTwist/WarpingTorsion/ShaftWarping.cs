@@ -33,7 +33,13 @@ internal static class ShaftWarping
             var mat = sec.WarpingConstant is > 0 ? s.Material : s.Material with { YoungsModulus = s.Material.YoungsModulus ?? 2.6 * g };
             // A section without warping gets a warping length of 1e-4 of the segment: Saint-Venant torsion to round-off.
             double iw = sec.WarpingConstant is > 0 ? sec.WarpingConstant.Value : Math.Pow(1e-4 * len, 2) * g * sec.TorsionConstant / mat.YoungsModulus!.Value;
-            return new WarpingSegment(s.From, s.To, new WarpingSection(sec.TorsionConstant, iw, sec.MaxSectorialCoordinate ?? 0, sec.ShearPerTorque, sec.Description), mat) { Name = s.Name };
+            var section = new WarpingSection(sec.TorsionConstant, iw, sec.MaxSectorialCoordinate ?? 0, sec.ShearPerTorque, sec.Description)
+            {
+                // a section without warping (round, closed) has no warping shear to speak of: its factor stays 0 silently
+                WarpingShearFactor = sec.WarpingShearFactor ?? (sec.WarpingConstant is > 0 ? 0 : double.Epsilon),
+                ShearUnbounded = sec.PeakShearUnbounded,
+            };
+            return new WarpingSegment(s.From, s.To, section, mat) { Name = s.Name };
         }).ToArray();
         var member = new WarpingMember
         {
@@ -44,6 +50,7 @@ internal static class ShaftWarping
             Warping = model.Warping,
         };
         var result = WarpingMemberSolver.Solve(member);
+        if (r.Bending is { } bending) result = WarpingBending.Combine(result, bending);
         return r with { Warping = result, WarpingWarnings = result.Warnings };
     }
 
