@@ -25,10 +25,14 @@ internal static class ShaftWarping
         if (model.Segments.Any(s => s.Section is { WarpingConstant: > 0 }) is false)
             return r with { WarpingWarnings = new[] { "warping restraints are given but no segment has a warping constant (no open section); they change nothing" } };
         if (model.Springs.Count > 0)
-            throw new SectionTwistException("warping", "restrained warping with torsional springs (couplings) between stations is not supported; model the member on each side of the coupling as its own shaft");
+        {
+            var sp = model.Springs[0];
+            throw new SectionTwistException("warping", $"spring {sp.Label} (stations {sp.StationA} and {sp.StationB}){(model.Springs.Count > 1 ? $" and {model.Springs.Count - 1} more" : "")}: " +
+                "restrained warping cannot be combined with torsional springs (couplings); model the member on each side of the coupling as its own shaft file, or state 'warping: free'");
+        }
         var segs = model.Segments.Select(s =>
         {
-            var sec = s.Section ?? throw new SectionTwistException("warping", $"segment {s.Label}: tapered segments cannot be combined with restrained warping; use prismatic segments");
+            var sec = s.Section ?? throw new SectionTwistException("warping", $"segment {s.Label} (stations {s.From} to {s.To}): a tapered segment cannot be combined with restrained warping; split it into prismatic segments of stepped sections, or state 'warping: free'");
             double g = s.Material.ShearModulus, len = Length(model, s);
             var mat = sec.WarpingConstant is > 0 ? s.Material : s.Material with { YoungsModulus = s.Material.YoungsModulus ?? 2.6 * g };
             // A section without warping gets a warping length of 1e-4 of the segment: Saint-Venant torsion to round-off.

@@ -83,6 +83,19 @@ public class ShaftWarpingTests
         Assert.Null(Solve(Beam + "warping: {A: restrained}\n").Warping!.Segments[0].MaxCombinedNormalStress);
     }
 
+    // Restrained warping with a coupling spring is refused with a message naming the spring, its stations and the remedy
+    // (the house rule for bad input; common practice, no source).
+    [Fact]
+    public void Restrained_warping_with_a_spring_names_the_spring_and_the_remedy()
+    {
+        string text = Beam.Replace("  - {name: B, after: 1200}", "  - {name: B, after: 1200}\n  - {name: C, after: 100}", StringComparison.Ordinal)
+            .Replace("  - {at: B, torque: 300}", "  - {at: C, torque: 300}", StringComparison.Ordinal)
+            + "springs:\n  - {name: coupling, between: [B, C], stiffness: 20 kN*m/rad}\nwarping: {A: restrained}\n";
+        var ex = Assert.Throws<SectionTwistException>(() => Solve(text));
+        Assert.Contains("spring coupling (stations B and C)", ex.Message, StringComparison.Ordinal);
+        Assert.Contains("warping: free", ex.Message, StringComparison.Ordinal);
+    }
+
     [Fact]
     public void A_bad_warping_value_names_the_line_and_the_remedy()
     {
