@@ -55,15 +55,17 @@ internal sealed class BenchCommand : ICommand
         w.WriteLine(string.Create(inv, $"reference problem: P2 Laplacian, unit square, {Environment.ProcessorCount} cores, {System.Numerics.Vector<double>.Count}-wide SIMD"));
         w.WriteLine("       m   unknowns        nnz  method     assembly    set-up    factor     solve  set-up+solve  rel.resid  alloc MB  peak WS MB");
         var wall = System.Diagnostics.Stopwatch.StartNew();
-        ReferenceBenchmark.Run(12, BenchSolver.Direct); // compile the kernels before timing
-        ReferenceBenchmark.Run(40, BenchSolver.AmgCg);
+        var ct = context.Cancellation;
+        ReferenceBenchmark.Run(12, BenchSolver.Direct, ct); // compile the kernels before timing
+        ReferenceBenchmark.Run(40, BenchSolver.AmgCg, ct);
         double warmUp = wall.Elapsed.TotalSeconds;
         var results = new List<BenchResult>();
         using var progress = new ProgressLine(context, "bench reference problem");
         foreach (int m in sizes)
         {
+            ct.ThrowIfCancellationRequested();
             progress.Report((double)results.Count / sizes.Count, $"m = {m}");
-            var r = ReferenceBenchmark.Run(m, solver);
+            var r = ReferenceBenchmark.Run(m, solver, ct);
             progress.Clear();
             results.Add(r);
             w.WriteLine(string.Create(inv,

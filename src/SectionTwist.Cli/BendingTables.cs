@@ -1,4 +1,3 @@
-using System.Globalization;
 using SectionTwist.Bending;
 using SectionTwist.Shaft;
 using SectionTwist.Units;
@@ -13,13 +12,14 @@ internal static class BendingTables
         "(Marin factors, stress concentrations, notch sensitivity) are estimates; keyseat ends, press fits and fretting are not resolved by a " +
         "2D section and need the applicable code (national shaft-strength standards) and testing; defer to licensed engineering practice.";
 
-    private static string F(double v, string format = "G4") => v.ToString(format, CultureInfo.InvariantCulture);
+    private static string F(double v, string format = "G4") => NumberText.Styled(v, format);
 
     private static string Sf(double? v) => v is { } x ? double.IsFinite(x) ? F(x, "F2") : "inf" : "-";
 
     public static void Print(TextWriter w, UnitSystem u, BendingResult r, bool rotating)
     {
-        string L = u.Length.Symbol, S = u.Stress.Symbol, T = u.Torque.Symbol;
+        string L = u.Length.Symbol, S = u.Stress.Symbol, T = u.Torque.Symbol, N = u.Force.Symbol;
+        string Force(double si) => u.Force.Format(si, "G4");
         w.WriteLine("BENDING WITH TORSION");
         w.WriteLine("axes: x along the shaft; looking back toward the first station Y points right and Z up; directions from +Y toward +Z" +
                     (rotating ? "; rotating shaft: each boundary point is taken at its worst angle to the bending moment" : "; sections stand as drawn"));
@@ -27,15 +27,15 @@ internal static class BendingTables
         if (r.Loads.Count > 0)
         {
             w.WriteLine("loads on the shaft");
-            var rows = new List<string[]> { new[] { "station", "kind", "Fy [N]", "Fz [N]", "axial [N]", "what" } };
-            foreach (var l in r.Loads) rows.Add([l.Station, l.Kind, F(l.ForceY), F(l.ForceZ), F(l.AxialForce), l.Description]);
+            var rows = new List<string[]> { new[] { "station", "kind", $"Fy [{N}]", $"Fz [{N}]", $"axial [{N}]", "what" } };
+            foreach (var l in r.Loads) rows.Add([l.Station, l.Kind, Force(l.ForceY), Force(l.ForceZ), Force(l.AxialForce), l.Description]);
             Table(w, rows);
             w.WriteLine();
         }
         w.WriteLine("bearings (force the bearing applies to the shaft)");
-        var br = new List<string[]> { new[] { "bearing", $"at [{L}]", "Fy [N]", "Fz [N]", "radial [N]", "axial [N]", "slope [mrad]", "limit [mrad]", "check" } };
+        var br = new List<string[]> { new[] { "bearing", $"at [{L}]", $"Fy [{N}]", $"Fz [{N}]", $"radial [{N}]", $"axial [{N}]", "slope [mrad]", "limit [mrad]", "check" } };
         foreach (var b in r.Bearings)
-            br.Add([b.Label, u.Length.Format(b.Position), F(b.ForceY), F(b.ForceZ), F(b.Force), F(b.AxialForce), F(b.Slope * 1e3, "F3"),
+            br.Add([b.Label, u.Length.Format(b.Position), Force(b.ForceY), Force(b.ForceZ), Force(b.Force), Force(b.AxialForce), F(b.Slope * 1e3, "F3"),
                 b.SlopeLimit is { } sl ? F(sl * 1e3, "F3") : "-", b.ExceedsSlopeLimit ? "!! SLOPE OVER LIMIT" : "ok"]);
         Table(w, br);
         w.WriteLine();
@@ -43,7 +43,7 @@ internal static class BendingTables
         w.WriteLine("combined stress on the real sections (worst boundary point of each segment)");
         var sr = new List<string[]> { new[] { "segment", $"max M [{T}]", $"at [{L}]", $"point x,y [{L}]", $"von Mises [{S}]", $"Tresca [{S}]", "dominant", $"S_y [{S}]", "FoS yield", "FoS fatigue (unnotched)", "check" } };
         foreach (var s in r.Segments)
-            sr.Add([s.Label, u.Torque.Format(s.MaxMoment), u.Length.Format(s.Position), $"{u.Length.Format(s.Stress.X, "G3")},{u.Length.Format(s.Stress.Y, "G3")}",
+            sr.Add([s.Label, u.Torque.Format(s.MaxMoment, "G4"), u.Length.Format(s.Position), $"{u.Length.Format(s.Stress.X, "G3")},{u.Length.Format(s.Stress.Y, "G3")}",
                 u.Stress.Format(s.Stress.VonMises, "G4"), u.Stress.Format(s.Stress.Tresca, "G4"), s.Stress.Dominant,
                 s.YieldStrength is { } sy ? u.Stress.Format(sy, "G4") + (s.StrengthBasis == "typical" ? " (typical)" : "") : "-",
                 Sf(s.SafetyFactor), Sf(s.FatigueSafetyFactor), s.ExceedsYield ? "!! OVER YIELD" : s.FatigueSafetyFactor < 1 ? "!! FATIGUE" : s.SafetyFactor is null ? "no yield strength" : s.FatigueSafetyFactor is null ? "ok (yield)" : "ok (yield, unnotched fatigue)"]);
@@ -59,7 +59,7 @@ internal static class BendingTables
         foreach (var f in r.Fatigue)
         {
             w.WriteLine($"fatigue at {f.Label}, {u.Length.Format(f.Position)} {L} ({(f.Criterion == Fatigue.FatigueCriterion.Goodman ? "DE-Goodman" : "DE-ASME elliptic")}): " +
-                        $"M {u.Torque.Format(f.Moment)} {T} reversed, T {u.Torque.Format(f.Torque)} {T} steady");
+                        $"M {u.Torque.Format(f.Moment, "G4")} {T} reversed, T {u.Torque.Format(f.Torque, "G4")} {T} steady");
             foreach (var k in f.NotchFactors) w.WriteLine($"  {k.Symbol,-4} = {F(k.Value, "F3")}  {k.Meaning}: {k.Source}");
             w.WriteLine($"  S'e  = {u.Stress.Format(f.Endurance.Unmodified, "G4")} {S}: {f.Endurance.UnmodifiedSource}");
             foreach (var k in f.Endurance.Factors) w.WriteLine($"  {k.Symbol,-4} = {F(k.Value, "F3")}  {k.Meaning}: {k.Source}");
@@ -76,7 +76,7 @@ internal static class BendingTables
             w.WriteLine("keys and splines");
             var cr = new List<string[]> { new[] { "connection", "kind", $"torque [{T}]", $"shear [{S}]", $"pressure [{S}]", $"shaft side [{S}]", $"allowable p [{S}]", "FoS", "check" } };
             foreach (var c in r.Connections)
-                cr.Add([c.Label, c.Kind, u.Torque.Format(c.Torque), c.Shear is { } sh ? u.Stress.Format(sh, "G4") : "-", u.Stress.Format(c.Pressure, "G4"),
+                cr.Add([c.Label, c.Kind, u.Torque.Format(c.Torque, "G4"), c.Shear is { } sh ? u.Stress.Format(sh, "G4") : "-", u.Stress.Format(c.Pressure, "G4"),
                     c.ShaftPressure is { } sp ? u.Stress.Format(sp, "G4") : "-", c.AllowablePressure is { } ap ? u.Stress.Format(ap, "G4") : "-",
                     Sf(c.SafetyFactor), c.Exceeds ? "!! OVER ALLOWABLE" : c.SafetyFactor is null ? "no allowable given" : "ok"]);
             Table(w, cr);

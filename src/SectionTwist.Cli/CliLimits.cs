@@ -1,5 +1,3 @@
-using System.Globalization;
-
 namespace SectionTwist.Cli;
 
 /// <summary>
@@ -39,7 +37,7 @@ internal sealed class CliLimits : IDisposable
 
     /// <summary>The one-line message for a command stopped by the time limit.</summary>
     public string TimeoutMessage(string command) =>
-        $"sectiontwist {command}: error: stopped at the time limit of {TimeoutSeconds.ToString("G4", CultureInfo.InvariantCulture)} s; " +
+        $"sectiontwist {command}: error: stopped at the time limit of {Units.NumberText.Format(TimeoutSeconds, 4)} s; " +
         "give a longer --timeout SECONDS (0: no limit), or a coarser --accuracy where the command has one";
 
     public void Dispose()

@@ -59,25 +59,30 @@ internal sealed class DemoCommand : ICommand
             };
             doc = ShaftFile.Parse(ReadDemoFile(), "winch-shaft.yaml", resolver: sections.Resolver);
             if (units is not null) doc = doc with { Units = units };
-            result = ShaftSolver.Solve(doc.Model);
+            GearedShaftResult? geared = null;
+            if (doc.Dynamics is { } d && d.Drivetrain.Shafts.Count > 1)
+            {
+                geared = GearedShaftSolver.Solve(d.Drivetrain, context.Cancellation);
+                result = geared.Main;
+            }
+            else result = ShaftSolver.Solve(doc.Model, context.Cancellation);
             using (progress.Pulse("verification cases"))
                 verification = verifying.GetAwaiter().GetResult();
-            progress.Report(0.9, "pictures and report");
-            var content = ShaftReport.Build(doc, result, sections, verification, CliReport.Options());
+            progress.Report(0.9, "torsional modes, pictures and report");
+            // the report holds the further shafts and the dynamics chapter; modes.html is the dynamics report on its own
+            var extras = ShaftExtras.Compute(doc, geared, "winch-shaft.yaml", context.Cancellation);
+            var content = ShaftReport.Build(doc, result, sections, verification, CliReport.Options(), extras);
             files = ShaftReport.WriteBundle(content, folder).ToList();
-            if (doc.Dynamics is { } dyn)
+            if (extras.Modes is { } modes)
             {
-                progress.Report(0.95, "torsional modes");
-                var modes = ModalAnalysis.Solve(dyn.Drivetrain, dyn.Options);
-                var check = dyn.Excitation is { } ex ? ResonanceCheck.Evaluate(modes, ex) : null;
-                var forced = dyn.Forcing is { } f ? ForcedResponse.Compute(modes, f, dyn.DampingRatio) : null;
+                var check = extras.Resonance;
                 string modesFile = Path.Combine(folder, "modes.html");
-                ModesReport.Write(doc, modes, check, forced, modesFile, CliReport.Options());
+                ModesReport.Write(doc, modes, check, extras.Forced, modesFile, CliReport.Options());
                 files.Add(modesFile);
                 var first = modes.ElasticModes.FirstOrDefault();
-                modesLine = $"  Drivetrain: lowest torsional natural frequency {(first is null ? "-" : NumberText.Format(first.Frequency, 4))} Hz" +
+                modesLine = $"  Drivetrain: lowest torsional natural frequency {(first is null ? "-" : doc.Units.Frequency.Text(first.Frequency, 4))}" +
                             (check?.Closest is { } c ? $"; closest crossing: mode {c.Mode} with {c.Excitation} ({(c.Status == CrossingStatus.Resonance ? "in the operating range" : $"margin {NumberText.Fixed(c.Margin * 100, 0)} %")}, {ModalResultJson.Status(c.Status)})" : "") +
-                            " (modes.html)";
+                            " (report chapter 'Dynamics' and modes.html)";
             }
         }
 

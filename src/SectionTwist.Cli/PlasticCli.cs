@@ -1,7 +1,7 @@
-using System.Globalization;
 using System.Text.Json;
 using SectionTwist.Plastic;
 using SectionTwist.Shaft;
+using SectionTwist.Units;
 
 namespace SectionTwist.Cli;
 
@@ -22,17 +22,20 @@ internal static class PlasticCli
         throw new UsageException($"--plastic: '{text}' is neither a material ({string.Join(", ", ShaftMaterials.All.Keys)}) nor a positive shear yield stress with a unit, e.g. 140MPa");
     }
 
-    public static void WriteText(TextWriter w, PlasticResult r, string basis)
+    /// <summary>The plastic tables in <paramref name="units"/> (the section's own system when null).</summary>
+    public static void WriteText(TextWriter w, PlasticResult r, string basis, UnitSystem? units = null)
     {
-        string F(double v) => v.ToString("G5", CultureInfo.InvariantCulture);
-        string E(double v) => double.IsFinite(v) ? v.ToString("0.0E+0", CultureInfo.InvariantCulture) : "n/a";
-        w.WriteLine($"elastic-perfectly-plastic torsion, tau_y = {F(r.YieldShear * 1e-6)} MPa ({basis})");
-        w.WriteLine($"  first-yield torque T_y    {F(r.FirstYieldTorque),14} N*m");
-        w.WriteLine($"  fully plastic torque T_p  {F(r.FullyPlasticTorque),14} N*m   est. rel. error {E(r.FullyPlasticTorqueError)}");
+        var u = units ?? UnitSystem.For(r.Elastic.LengthUnit);
+        string F(double v) => NumberText.Format(v, 5);
+        string E(double v) => double.IsFinite(v) ? NumberText.Exponent(v, 2) : "n/a";
+        string T = u.Torque.Symbol;
+        w.WriteLine($"elastic-perfectly-plastic torsion, tau_y = {u.Stress.Text(r.YieldShear, 5)} ({basis})");
+        w.WriteLine($"  first-yield torque T_y    {u.Torque.Format(r.FirstYieldTorque, 5),14} {T}");
+        w.WriteLine($"  fully plastic torque T_p  {u.Torque.Format(r.FullyPlasticTorque, 5),14} {T}   est. rel. error {E(r.FullyPlasticTorqueError)}");
         w.WriteLine($"  shape factor T_p/T_y      {F(r.ShapeFactor),14}");
-        w.WriteLine("  twist/twist_y    torque N*m    T/T_y   yielded area   est. rel. error");
+        w.WriteLine($"  twist/twist_y  {$"torque [{T}]",13}    T/T_y   yielded area   est. rel. error");
         foreach (var p in r.Curve)
-            w.WriteLine($"  {F(p.TwistRatio),13} {F(p.Torque),13} {p.TorqueRatio,8:F4} {p.PlasticFraction * 100,12:F1} % {E(p.EstimatedRelativeError),14}");
+            w.WriteLine($"  {F(p.TwistRatio),13} {u.Torque.Format(p.Torque, 5),13} {NumberText.Fixed(p.TorqueRatio, 4),8} {NumberText.Fixed(p.PlasticFraction * 100, 1),12} % {E(p.EstimatedRelativeError),14}");
         foreach (var warn in r.Warnings) w.WriteLine($"  warning [{warn.Code}]: {warn.Message}");
         w.WriteLine("  ideal plasticity: no strain hardening, no residual stresses; check limit states against the applicable code");
     }

@@ -25,28 +25,30 @@ internal static class SectionBench
         var total = Stopwatch.StartNew();
         w.WriteLine();
         w.WriteLine($"time to J within 1e-4 (whole analysis after a warm-up; true error against a {NumberText.Exponent(ReferenceAccuracy, 1)} solve)");
-        w.WriteLine("  section                     time      J [mm⁴]      est. error  true error  elements  reference solve");
+        w.WriteLine($"  section                     time      J [{UnitSystem.SiMillimetre.SecondMoment.Symbol}]      est. error  true error  elements  reference solve");
+        var ct = context.Cancellation;
         var warm = Stopwatch.StartNew();
-        SectionAnalyzer.Analyze(ProfileSources.Load("circle:d=10"), new AnalysisOptions { Accuracy = 1e-3 });
+        SectionAnalyzer.Analyze(ProfileSources.Load("circle:d=10"), context.Analysis(1e-3), ct);
         double warmUp = warm.Elapsed.TotalSeconds, timed = 0, reference = 0;
         using var progress = new ProgressLine(context, "bench sections");
         for (int i = 0; i < Specs.Length; i++)
         {
+            ct.ThrowIfCancellationRequested();
             string spec = Specs[i];
             var profile = ProfileSources.Load(spec);
             var sw = Stopwatch.StartNew();
-            var r = SectionAnalyzer.Analyze(profile, new AnalysisOptions { Accuracy = 1e-4 });
+            var r = SectionAnalyzer.Analyze(profile, context.Analysis(1e-4), ct);
             double t = sw.Elapsed.TotalSeconds;
             timed += t;
             sw.Restart();
-            var refResult = SectionAnalyzer.Analyze(profile, new AnalysisOptions { Accuracy = ReferenceAccuracy }, default,
+            var refResult = SectionAnalyzer.Analyze(profile, context.Analysis(ReferenceAccuracy), ct,
                 progress.Analysis($"{spec} reference", (i + 0.1) / Specs.Length, (i + 1.0) / Specs.Length));
             double tr = sw.Elapsed.TotalSeconds;
             reference += tr;
             double trueErr = Math.Abs(r.TorsionConstant - refResult.TorsionConstant) / refResult.TorsionConstant;
             progress.Clear();
             w.WriteLine(string.Create(inv,
-                $"  {spec,-24} {t,7:F3}s  {r.TorsionConstant * 1e12,12:F1}  {NumberText.Exponent(r.EstimatedRelativeError.TorsionConstant),10}  {NumberText.Exponent(trueErr),10}  {r.Mesh.Elements,8:N0}  {tr,8:F1}s"));
+                $"  {spec,-24} {t,7:F3}s  {NumberText.Fixed(UnitSystem.SiMillimetre.SecondMoment.FromSi(r.TorsionConstant), 1),12}  {NumberText.Exponent(r.EstimatedRelativeError.TorsionConstant),10}  {NumberText.Exponent(trueErr),10}  {r.Mesh.Elements,8:N0}  {tr,8:F1}s"));
         }
         double wall = total.Elapsed.TotalSeconds;
         w.WriteLine(string.Create(inv,

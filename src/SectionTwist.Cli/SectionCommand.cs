@@ -78,13 +78,13 @@ internal sealed class SectionCommand : ICommand
         Plastic.PlasticResult? plastic;
         using (var progress = new ProgressLine(ctx, $"section {source}"))
         using (progress.Pulse("plastic torsion"))
-            plastic = plasticYield is { } yv ? Plastic.PlasticAnalyzer.Analyze(result, yv.Item1, null, ctx.Cancellation) : null;
+            plastic = plasticYield is { } yv ? Plastic.PlasticAnalyzer.Analyze(result, yv.Item1, new Plastic.PlasticOptions { MemoryBudgetBytes = ctx.MemoryBudget ?? AnalysisOptions.DefaultMemoryBudget }, ctx.Cancellation) : null;
         if (plastic is not null && plasticPlot is not null) PlasticPlotHook.Write(plastic, plasticPlot);
         if (json) ctx.Out.WriteLine(SectionJson.Write(result, source, plastic is null ? null : w => PlasticCli.WriteJson(w, plastic, plasticYield!.Value.Item2)));
         else
         {
             SectionText.Write(ctx.Out, result, source, units);
-            if (plastic is not null) PlasticCli.WriteText(ctx.Out, plastic, plasticYield!.Value.Item2);
+            if (plastic is not null) PlasticCli.WriteText(ctx.Out, plastic, plasticYield!.Value.Item2, units);
         }
         return 0;
     }

@@ -32,8 +32,10 @@ internal sealed class ShaftCommand : ICommand
         "  reactions, the governing segment and the warnings.\n" +
         "  --units SYS   units of the tables, CSV files and report: SI-mm, SI-m or US (default: the file's own 'units' block)\n" +
         "  --json        print the result as JSON in SI base units (m, N*m, Pa, rad) instead of tables; --units does not change it\n" +
-        "  --csv DIR     also write DIR/stations.csv, DIR/segments.csv and DIR/warnings.csv, and DIR/bending.csv with a 'bending' block\n" +
-        "  --report OUT  also write one self-contained HTML report (inputs, tables, pictures, verification, method)\n" +
+        "  --csv DIR     also write DIR/stations.csv, DIR/segments.csv and DIR/warnings.csv, DIR/bending.csv with a 'bending' block\n" +
+        "                and DIR/overload.csv with an 'overload' block\n" +
+        "  --report OUT  also write one self-contained HTML report (inputs, tables, pictures, verification, method; with a\n" +
+        "                'dynamics' block also the further shafts and the torsional modes, as 'sectiontwist modes' computes them)\n" +
         "  Exceeded limits and unbounded peaks (sharp corners) are flagged in the 'check' column, not errors; the exit code is\n" +
         "  0 when the shaft solved, 2 for bad input.";
 
@@ -63,27 +65,38 @@ internal sealed class ShaftCommand : ICommand
         }
         if (units is not null) doc = doc with { Units = units };
         ShaftResult result;
-        try { result = ShaftSolver.Solve(doc.Model); }
+        GearedShaftResult? geared = null;
+        try
+        {
+            // further shafts joined by stages: every shaft solved at its own speed, never silently dropped
+            if (doc.Dynamics is { } dyn && dyn.Drivetrain.Shafts.Count > 1)
+            {
+                geared = GearedShaftSolver.Solve(dyn.Drivetrain, context.Cancellation);
+                result = geared.Main;
+            }
+            else result = ShaftSolver.Solve(doc.Model, context.Cancellation);
+        }
         catch (SectionTwistException e) { throw new SectionTwistException(e.Code, $"{Path.GetFileName(path)}: {e.Message}", e); }
 
         context.Cancellation.ThrowIfCancellationRequested();
-        var csvFiles = csv is null ? [] : ShaftResultCsv.WriteAll(result, csv, doc.Units);
+        var csvFiles = csv is null ? [] : ShaftResultCsv.WriteAll(result, csv, doc.Units, geared);
         if (report is not null)
         {
             IReadOnlyList<Verification.VerificationOutcome> outcomes;
             using (var progress = new ProgressLine(context, "report"))
             using (progress.Pulse("verification cases"))
                 outcomes = verifying!.GetAwaiter().GetResult();
-            ShaftReport.Write(ShaftReport.Build(doc, result, sections, outcomes, CliReport.Options()), report);
+            var extras = ShaftExtras.Compute(doc, geared, path, context.Cancellation);
+            ShaftReport.Write(ShaftReport.Build(doc, result, sections, outcomes, CliReport.Options(), extras), report);
             context.Err.WriteLine($"wrote {report}");
         }
-        if (json) context.Out.WriteLine(ShaftResultJson.Write(result, path));
-        else PrintTables(context.Out, doc, result, path);
+        if (json) context.Out.WriteLine(ShaftResultJson.Write(result, path, geared));
+        else PrintTables(context.Out, doc, result, path, geared);
         if (csv is not null) context.Err.WriteLine($"wrote {string.Join(", ", csvFiles)}");
         return 0;
     }
 
-    internal static void PrintTables(TextWriter w, ShaftDocument doc, ShaftResult r, string path)
+    internal static void PrintTables(TextWriter w, ShaftDocument doc, ShaftResult r, string path, GearedShaftResult? geared = null)
     {
         var u = doc.Units;
         w.WriteLine($"{doc.Model.Title ?? "shaft"} ({path}), units {u.Name}");
@@ -154,6 +167,8 @@ internal sealed class ShaftCommand : ICommand
             w.WriteLine();
         }
         ShaftWarpingText.Write(w, doc, r);
+        if (r.Overload is { } overload) ShaftOverloadText.Write(w, doc, overload);
+        if (geared is not null) ShaftBranchText.Write(w, doc, geared);
         w.WriteLine(Caution);
     }
 

@@ -28,18 +28,19 @@ internal sealed class TemplatesCommand : ICommand
                 $"unknown template '{args.Positional[0]}'{Suggest.DidYouMean(args.Positional[0], ProfileTemplates.All.SelectMany(t => t.Aliases.Prepend(t.Name)))}; known templates: {string.Join(", ", ProfileTemplates.All.Select(t => t.Name))}");
             list = [one];
         }
-        if (json) WriteJson(list, context.Out);
-        else WriteText(list, context.Out);
+        if (json) WriteJson(list, context.Out, context.Cancellation);
+        else WriteText(list, context.Out, context.Cancellation);
         return 0;
     }
 
     /// <summary>Widest default text kept in its column; a longer one moves the description to the next line.</summary>
     private const int DefaultColumn = 26;
 
-    private static void WriteText(IReadOnlyList<TemplateInfo> list, TextWriter w)
+    private static void WriteText(IReadOnlyList<TemplateInfo> list, TextWriter w, CancellationToken ct)
     {
         foreach (var t in list)
         {
+            ct.ThrowIfCancellationRequested();
             w.WriteLine($"{t.Name}{(t.Aliases.Count > 0 ? " (also " + string.Join(", ", t.Aliases) + ")" : "")}: {t.Summary}");
             w.WriteLine($"  example: {t.Example}");
             w.WriteLine($"  outer size for J/J_round: {t.OuterSize}");
@@ -67,7 +68,7 @@ internal sealed class TemplatesCommand : ICommand
         w.WriteLine("A kind 'a|b' takes one of the words listed (series=light). Counts are whole numbers (n=2).");
     }
 
-    private static void WriteJson(IReadOnlyList<TemplateInfo> list, TextWriter w)
+    private static void WriteJson(IReadOnlyList<TemplateInfo> list, TextWriter w, CancellationToken ct)
     {
         using var stream = new MemoryStream();
         using (var j = new Utf8JsonWriter(stream, new JsonWriterOptions { Indented = true }))
@@ -75,6 +76,7 @@ internal sealed class TemplatesCommand : ICommand
             j.WriteStartArray();
             foreach (var t in list)
             {
+                ct.ThrowIfCancellationRequested();
                 j.WriteStartObject();
                 j.WriteString("name", t.Name);
                 j.WriteStartArray("aliases");

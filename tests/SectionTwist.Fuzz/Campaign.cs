@@ -118,13 +118,14 @@ public sealed class Campaign(CampaignOptions o, TextWriter log)
         long? current = null;
         long last = from - 1;
         var started = Stopwatch.StartNew();
+        var cpuAtStart = TimeSpan.Zero;
         var memCheck = Stopwatch.StartNew();
         Outcome? killedFor = null;
         while (true)
         {
             if (lines.TryTake(out var line, 200))
             {
-                if (line.StartsWith("> ", StringComparison.Ordinal)) { current = long.Parse(line[2..], CultureInfo.InvariantCulture); started.Restart(); }
+                if (line.StartsWith("> ", StringComparison.Ordinal)) { current = long.Parse(line[2..], CultureInfo.InvariantCulture); started.Restart(); cpuAtStart = CpuTime(p); }
                 else if (line.StartsWith("< ", StringComparison.Ordinal))
                 {
                     var parts = line.Split(' ', 5);
@@ -137,7 +138,13 @@ public sealed class Campaign(CampaignOptions o, TextWriter log)
                 continue;
             }
             if (lines.IsCompleted) break;
-            if (current is not null && started.Elapsed.TotalMilliseconds > o.BudgetMs + 1000.0 * o.GraceSeconds) killedFor = Outcome.Hang;
+            // a hang is an input that keeps the worker busy past the budget plus grace: counted in the worker's processor
+            // time, so that a worker starved by other work on a shared machine is not taken for a hang; a worker that
+            // sits idle on one input for ten times as long (a wait that never ends) is a hang too
+            double limitMs = o.BudgetMs + 1000.0 * o.GraceSeconds;
+            if (current is not null && started.Elapsed.TotalMilliseconds > limitMs &&
+                ((CpuTime(p) - cpuAtStart).TotalMilliseconds > limitMs || started.Elapsed.TotalMilliseconds > 10 * limitMs))
+                killedFor = Outcome.Hang;
             else if (memCheck.ElapsedMilliseconds > 500)
             {
                 memCheck.Restart();
@@ -169,6 +176,12 @@ public sealed class Campaign(CampaignOptions o, TextWriter log)
         }
         MinimizePending(target);
         return resume;
+    }
+
+    private static TimeSpan CpuTime(Process p)
+    {
+        try { p.Refresh(); return p.TotalProcessorTime; }
+        catch (InvalidOperationException) { return TimeSpan.Zero; }
     }
 
     private Process StartWorker(IReadOnlyList<string> args)

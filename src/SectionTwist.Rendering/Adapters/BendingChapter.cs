@@ -1,4 +1,3 @@
-using System.Globalization;
 using SectionTwist.Bending;
 using SectionTwist.Fatigue;
 using SectionTwist.Rendering.Bending;
@@ -19,7 +18,7 @@ public static class BendingChapter
         "2D section and need the applicable code (national shaft-strength standards) and testing; dynamic loads are not included. " +
         "Verify the design against the applicable local codes and standards and have it checked under licensed engineering practice before use.";
 
-    private static string F(double v, string f = "G4") => v.ToString(f, CultureInfo.InvariantCulture);
+    private static string F(double v, string f = "G4") => NumberText.Styled(v, f);
     private static string Sf(double? v) => v is { } x ? double.IsFinite(x) ? F(x, "F2") : "∞" : "–";
 
     /// <summary>The governing location's section with the combined stress on its boundary (prismatic segments only).</summary>
@@ -33,7 +32,7 @@ public static class BendingChapter
         bool rotating = doc.Model.Bending?.Rotating ?? true;
         var stresses = CombinedStress.AtBoundary(section, sample.AxialForce, -sample.MomentZ, sample.MomentY, sample.Torque, rotating);
         string at = $"{doc.Units.Length.Format(g.Position)} {doc.Units.Length.Symbol}";
-        byte[] png = CombinedStressPicture.Render(section, stresses, $"{g.Label} at {at}: combined stress on the boundary", ImageFormat.Png);
+        byte[] png = CombinedStressPicture.Render(section, stresses, $"{g.Label} at {at}: combined stress on the boundary", ImageFormat.Png, units: doc.Units);
         _ = result;
         return new ReportFigure($"The governing location ({g.Label}, {at}): von Mises stress at each boundary point of the real section" +
                                 (rotating ? ", each at its worst angle to the bending moment (rotating shaft)" : "") + " (axes through the centroid); ringed: the worst point",
@@ -47,24 +46,25 @@ public static class BendingChapter
         ArgumentNullException.ThrowIfNull(result);
         var b = result.Bending ?? throw new ArgumentException("the result has no bending part", nameof(result));
         var u = doc.Units;
-        string L = u.Length.Symbol, S = u.Stress.Symbol, T = u.Torque.Symbol;
+        string L = u.Length.Symbol, S = u.Stress.Symbol, T = u.Torque.Symbol, N = u.Force.Symbol;
+        string Force(double si) => u.Force.Format(si, "G4");
         double? sy = result.Segments.Select(s => s.Material.YieldStrength).Where(v => v is not null).DefaultIfEmpty(null).Min();
-        byte[] png = BendingDiagram.Render(b, sy, $"{doc.Model.Title ?? "shaft"}: bending with torsion", unit, ImageFormat.Png);
+        byte[] png = BendingDiagram.Render(b, sy, $"{doc.Model.Title ?? "shaft"}: bending with torsion", unit, ImageFormat.Png, units: u);
         var figure = new ReportFigure("Bending moment in both planes and resultant, deflection, combined von Mises stress (dashed: lowest yield strength) " +
                                       "and the unnotched fatigue factor of safety along the shaft; bearings dotted", ImageFormat.Png, png, "bending.png");
         var figures = new List<ReportFigure> { figure };
         if (WorstPicture(doc, result, b) is { } worstFigure) figures.Add(worstFigure);
         var tables = new List<ReportTable>
         {
-            new("Loads on the shaft (gear and pull forces from the torque at their station)", ["station", "kind", "Fy [N]", "Fz [N]", "axial [N]", "what"],
-                b.Loads.Select(l => (IReadOnlyList<string>)[l.Station, l.Kind, F(l.ForceY), F(l.ForceZ), F(l.AxialForce), l.Description]).ToList()),
-            new ReportTable("Bearings: force on the shaft and slope", ["bearing", $"at [{L}]", "Fy [N]", "Fz [N]", "radial [N]", "axial [N]", "slope [mrad]", "limit [mrad]"],
-                b.Bearings.Select(x => (IReadOnlyList<string>)[x.Label, u.Length.Format(x.Position), F(x.ForceY), F(x.ForceZ), F(x.Force), F(x.AxialForce),
+            new("Loads on the shaft (gear and pull forces from the torque at their station)", ["station", "kind", $"Fy [{N}]", $"Fz [{N}]", $"axial [{N}]", "what"],
+                b.Loads.Select(l => (IReadOnlyList<string>)[l.Station, l.Kind, Force(l.ForceY), Force(l.ForceZ), Force(l.AxialForce), l.Description]).ToList()),
+            new ReportTable("Bearings: force on the shaft and slope", ["bearing", $"at [{L}]", $"Fy [{N}]", $"Fz [{N}]", $"radial [{N}]", $"axial [{N}]", "slope [mrad]", "limit [mrad]"],
+                b.Bearings.Select(x => (IReadOnlyList<string>)[x.Label, u.Length.Format(x.Position), Force(x.ForceY), Force(x.ForceZ), Force(x.Force), Force(x.AxialForce),
                     F(x.Slope * 1e3, "F3"), x.SlopeLimit is { } l ? F(l * 1e3, "F3") : "–"]).ToList())
             { AlertRows = [.. b.Bearings.Select((x, i) => (x, i)).Where(p => p.x.ExceedsSlopeLimit).Select(p => p.i)] },
             new ReportTable("Combined stress at the worst boundary point of each segment and the static check against yield",
                 ["segment", $"max M [{T}]", $"at [{L}]", $"point x, y [{L}]", $"von Mises [{S}]", $"Tresca [{S}]", "dominant", $"S_y [{S}]", "FoS yield", "FoS fatigue (unnotched)"],
-                b.Segments.Select(s => (IReadOnlyList<string>)[s.Label, u.Torque.Format(s.MaxMoment), u.Length.Format(s.Position),
+                b.Segments.Select(s => (IReadOnlyList<string>)[s.Label, u.Torque.Format(s.MaxMoment, "G4"), u.Length.Format(s.Position),
                     $"{u.Length.Format(s.Stress.X, "G3")}, {u.Length.Format(s.Stress.Y, "G3")}", u.Stress.Format(s.Stress.VonMises, "G4"), u.Stress.Format(s.Stress.Tresca, "G4"),
                     s.Stress.Dominant, s.YieldStrength is { } y ? u.Stress.Format(y, "G4") + (s.StrengthBasis == "typical" ? " (typical)" : "") : "–", Sf(s.SafetyFactor), Sf(s.FatigueSafetyFactor)]).ToList())
             { AlertRows = [.. b.Segments.Select((x, i) => (x, i)).Where(p => p.x.ExceedsYield || p.x.FatigueSafetyFactor < 1).Select(p => p.i)] },

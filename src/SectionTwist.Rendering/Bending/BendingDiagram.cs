@@ -26,15 +26,22 @@ public static class BendingDiagram
     /// <param name="format">PNG or SVG.</param>
     /// <param name="width">Width, px.</param>
     /// <param name="height">Height, px.</param>
-    public static byte[] Render(BendingResult result, double? yieldStrength, string title, LengthUnit unit, ImageFormat format, int width = DefaultWidth, int height = DefaultHeight)
+    /// <param name="units">Units of the axes (moment, deflection, stress, position); null: the standard system of <paramref name="unit"/>.</param>
+    public static byte[] Render(BendingResult result, double? yieldStrength, string title, LengthUnit unit, ImageFormat format, int width = DefaultWidth, int height = DefaultHeight,
+        UnitSystem? units = null)
     {
         ArgumentNullException.ThrowIfNull(result);
         ArgumentNullException.ThrowIfNull(unit);
-        return CanvasTarget.Render(format, width, height, c => Draw(c, result, yieldStrength, title, unit, width, height));
+        var u = units ?? UnitSystem.For(unit);
+        return CanvasTarget.Render(format, width, height, c => Draw(c, result, yieldStrength, title, u, width, height));
     }
 
-    private static void Draw(SKCanvas c, BendingResult r, double? sy, string title, LengthUnit unit, int width, int height)
+    private static void Draw(SKCanvas c, BendingResult r, double? sy, string title, UnitSystem u, int width, int height)
     {
+        var unit = u.Length;
+        double M(double si) => u.Torque.FromSi(si);
+        double D(double si) => u.Length.FromSi(si);
+        double S(double si) => u.Stress.FromSi(si);
         c.Clear(SKColors.White);
         Ink.Label(c, title, 70, 24, 17, Ink.Text);
         var s = r.Samples;
@@ -44,20 +51,20 @@ public static class BendingDiagram
         float X(double x) => (float)(left + (x - x0) / Math.Max(x1 - x0, 1e-12) * (right - left));
         SKRect Rect(int i) => new(left, top + i * (ph + gap), right, top + i * (ph + gap) + ph);
 
-        var mp = new ShaftPanel(Rect(0), s.Min(p => Math.Min(p.MomentY, p.MomentZ)), s.Max(p => Math.Max(p.Moment, Math.Max(p.MomentY, p.MomentZ))));
-        mp.DrawFrame(c, "bending moment: plane Y (blue), plane Z (green), resultant (black)", "M, N·m");
-        Line(c, s, X, mp, p => p.MomentY, PlaneY); Line(c, s, X, mp, p => p.MomentZ, PlaneZ); Line(c, s, X, mp, p => p.Moment, Resultant);
+        var mp = new ShaftPanel(Rect(0), M(s.Min(p => Math.Min(p.MomentY, p.MomentZ))), M(s.Max(p => Math.Max(p.Moment, Math.Max(p.MomentY, p.MomentZ)))));
+        mp.DrawFrame(c, "bending moment: plane Y (blue), plane Z (green), resultant (black)", $"M, {u.Torque.Symbol}");
+        Line(c, s, X, mp, p => M(p.MomentY), PlaneY); Line(c, s, X, mp, p => M(p.MomentZ), PlaneZ); Line(c, s, X, mp, p => M(p.Moment), Resultant);
 
-        var dp = new ShaftPanel(Rect(1), s.Min(p => Math.Min(p.DeflectionY, p.DeflectionZ)) * 1e3, s.Max(p => Math.Max(p.Deflection, Math.Max(p.DeflectionY, p.DeflectionZ))) * 1e3);
-        dp.DrawFrame(c, "deflection: along Y (blue), along Z (green), magnitude (black)", "δ, mm");
-        Line(c, s, X, dp, p => p.DeflectionY * 1e3, PlaneY); Line(c, s, X, dp, p => p.DeflectionZ * 1e3, PlaneZ); Line(c, s, X, dp, p => p.Deflection * 1e3, Resultant);
+        var dp = new ShaftPanel(Rect(1), D(s.Min(p => Math.Min(p.DeflectionY, p.DeflectionZ))), D(s.Max(p => Math.Max(p.Deflection, Math.Max(p.DeflectionY, p.DeflectionZ)))));
+        dp.DrawFrame(c, "deflection: along Y (blue), along Z (green), magnitude (black)", $"δ, {u.Length.Symbol}");
+        Line(c, s, X, dp, p => D(p.DeflectionY), PlaneY); Line(c, s, X, dp, p => D(p.DeflectionZ), PlaneZ); Line(c, s, X, dp, p => D(p.Deflection), Resultant);
 
-        double vmMax = s.Max(p => p.Stress.VonMises) * 1e-6;
-        var sp = new ShaftPanel(Rect(2), 0, Math.Max(vmMax, (sy ?? 0) * 1e-6) * 1.08);
-        sp.DrawFrame(c, "combined stress (von Mises) at the worst boundary point" + (sy is null ? "" : "; yield dashed"), "σv, MPa");
-        Line(c, s, X, sp, p => p.Stress.VonMises * 1e-6, Resultant);
+        double vmMax = S(s.Max(p => p.Stress.VonMises));
+        var sp = new ShaftPanel(Rect(2), 0, Math.Max(vmMax, S(sy ?? 0)) * 1.08);
+        sp.DrawFrame(c, "combined stress (von Mises) at the worst boundary point" + (sy is null ? "" : "; yield dashed"), $"σv, {u.Stress.Symbol}");
+        Line(c, s, X, sp, p => S(p.Stress.VonMises), Resultant);
         if (sy is { } y)
-            using (var dash = Ink.Stroke(Ink.Alert, 1.4f, [6, 4])) c.DrawLine(left, sp.ToPixelY(y * 1e-6), right, sp.ToPixelY(y * 1e-6), dash);
+            using (var dash = Ink.Stroke(Ink.Alert, 1.4f, [6, 4])) c.DrawLine(left, sp.ToPixelY(S(y)), right, sp.ToPixelY(S(y)), dash);
 
         var fs = s.Where(p => p.FatigueSafetyFactor is { } f && double.IsFinite(f)).ToList();
         var fp = new ShaftPanel(Rect(3), 0, Math.Min(10, Math.Max(2, fs.Count == 0 ? 2 : fs.Max(p => p.FatigueSafetyFactor!.Value))));
@@ -77,10 +84,10 @@ public static class BendingDiagram
                 var align = x > right - 60 ? SKTextAlign.Right : x < left + 60 ? SKTextAlign.Left : SKTextAlign.Center;
                 Ink.Label(c, b.Label, x, Rect(3).Bottom + 32, 11, Ink.Text, align);
             }
-        var (step, ticks) = NiceScale.Ticks(x0 / unit.Metres, x1 / unit.Metres, Math.Max(3, (int)((right - left) / 90)));
+        var (step, ticks) = NiceScale.Ticks(unit.FromSi(x0), unit.FromSi(x1), Math.Max(3, (int)((right - left) / 90)));
         foreach (double t in ticks)
         {
-            float x = X(t * unit.Metres);
+            float x = X(unit.ToSi(t));
             if (x < left - 0.5f || x > right + 0.5f) continue;
             Ink.Label(c, NiceScale.Format(t, step), x, Rect(3).Bottom + 16, 11, Ink.Text, SKTextAlign.Center);
         }

@@ -1,5 +1,6 @@
 using SectionTwist.Bending;
 using SectionTwist.Rendering.Drawing;
+using SectionTwist.Units;
 using SkiaSharp;
 
 namespace SectionTwist.Rendering.Bending;
@@ -17,15 +18,18 @@ public static class CombinedStressPicture
     /// <param name="format">PNG or SVG.</param>
     /// <param name="width">Width, px.</param>
     /// <param name="height">Height, px.</param>
-    public static byte[] Render(BendingSection section, IReadOnlyList<CombinedStressPoint> stresses, string title, ImageFormat format, int width = 760, int height = 600)
+    /// <param name="units">Units of the stress labels; null: <see cref="UnitSystem.SiMillimetre"/> (MPa).</param>
+    public static byte[] Render(BendingSection section, IReadOnlyList<CombinedStressPoint> stresses, string title, ImageFormat format, int width = 760, int height = 600,
+        UnitSystem? units = null)
     {
+        var stress = (units ?? UnitSystem.SiMillimetre).Stress;
         ArgumentNullException.ThrowIfNull(section);
         ArgumentNullException.ThrowIfNull(stresses);
         if (stresses.Count == 0) throw new SectionTwistException("plot-empty", "no boundary stresses to draw");
-        return CanvasTarget.Render(format, width, height, c => Draw(c, stresses, title, width, height));
+        return CanvasTarget.Render(format, width, height, c => Draw(c, stresses, title, width, height, stress));
     }
 
-    private static void Draw(SKCanvas c, IReadOnlyList<CombinedStressPoint> s, string title, int width, int height)
+    private static void Draw(SKCanvas c, IReadOnlyList<CombinedStressPoint> s, string title, int width, int height, DisplayUnit stress)
     {
         c.Clear(SKColors.White);
         Ink.Label(c, title, 20, 26, 15, Ink.Text);
@@ -45,13 +49,13 @@ public static class CombinedStressPicture
         var worst = s.MaxBy(p => p.VonMises)!;
         using (var ring = Ink.Stroke(Ink.Alert, 2f)) c.DrawCircle(P(worst), 9, ring);
         var wp = P(worst);
-        Ink.BoxedLabel(c, $"{worst.VonMises * 1e-6:G4} MPa ({worst.Dominant})", wp.X + 12, wp.Y - 10, 12, Ink.Text);
+        Ink.BoxedLabel(c, $"{stress.Text(worst.VonMises, 4)} ({worst.Dominant})", wp.X + 12, wp.Y - 10, 12, Ink.Text);
         // colour bar
         float bx = width - 70, by0 = 60, by1 = height - 60;
         for (int k = 0; k < 100; k++)
             using (var f = Ink.Fill(Viridis.Sample(k / 99.0))) c.DrawRect(bx, by1 - (by1 - by0) * (k + 1) / 100f, 18, (by1 - by0) / 100f + 0.5f, f);
         Ink.Label(c, "0", bx + 24, by1 + 4, 11, Ink.Text);
-        Ink.Label(c, $"{top * 1e-6:G4}", bx + 24, by0 + 4, 11, Ink.Text);
-        Ink.Label(c, "σv, MPa", bx - 4, by0 - 14, 11, Ink.Text);
+        Ink.Label(c, stress.Format(top, 4), bx + 24, by0 + 4, 11, Ink.Text);
+        Ink.Label(c, $"σv, {stress.Symbol}", bx - 4, by0 - 14, 11, Ink.Text);
     }
 }

@@ -1,5 +1,6 @@
 using SectionTwist.Dynamics;
 using SectionTwist.Rendering.Drawing;
+using SectionTwist.Units;
 using SkiaSharp;
 
 namespace SectionTwist.Rendering.Dynamics;
@@ -19,21 +20,24 @@ public static class InterferenceDiagram
     /// <param name="format">PNG or SVG.</param>
     /// <param name="width">Width, px.</param>
     /// <param name="height">Height, px.</param>
-    public static byte[] Render(ModalResult modes, ResonanceResult check, ImageFormat format, int width = 900, int height = 560)
+    /// <param name="units">Units of the speed and frequency axes; null: <see cref="UnitSystem.SiMillimetre"/> (rpm, Hz).</param>
+    public static byte[] Render(ModalResult modes, ResonanceResult check, ImageFormat format, int width = 900, int height = 560, UnitSystem? units = null)
     {
         ArgumentNullException.ThrowIfNull(modes);
         ArgumentNullException.ThrowIfNull(check);
-        return CanvasTarget.Render(format, width, height, c => Draw(c, modes, check, width, height));
+        var u = units ?? UnitSystem.SiMillimetre;
+        return CanvasTarget.Render(format, width, height, c => Draw(c, modes, check, width, height, u.Speed, u.Frequency));
     }
 
-    private static void Draw(SKCanvas c, ModalResult modes, ResonanceResult check, int width, int height)
+    private static void Draw(SKCanvas c, ModalResult modes, ResonanceResult check, int width, int height, DisplayUnit speed, DisplayUnit frequency)
     {
         var range = check.Spec.Range;
-        double toRpm = 30 / Math.PI;
+        double toRpm = 1 / speed.SiPerUnit; // rad/s to the speed unit shown (rpm by default)
+        double perRev = speed.SiPerUnit / (2 * Math.PI); // revolutions per second in one speed unit (1/60 for rpm)
         double rangeRatio = ResonanceCheck.ShaftRatio(modes, range.Shaft, "range");
         double xMax = range.Maximum * (1 + check.Spec.OuterBand) * 1.15 * toRpm;
         var freqs = modes.ElasticModes.Select(m => m.Frequency).ToList();
-        double excTop = check.Spec.Orders.Max(o => o.Order * ResonanceCheck.ShaftRatio(modes, o.Shaft, o.Name)) / rangeRatio * xMax / 60;
+        double excTop = check.Spec.Orders.Max(o => o.Order * ResonanceCheck.ShaftRatio(modes, o.Shaft, o.Name)) / rangeRatio * xMax * perRev;
         double yMax = Math.Max(freqs.DefaultIfEmpty(1).Max() * 1.1, Math.Min(excTop, freqs.DefaultIfEmpty(1).Max() * 1.6));
         var (xLo, xHi, xStep) = NiceScale.Range(0, xMax);
         var (yLo, yHi, yStep) = NiceScale.Range(0, yMax);
@@ -60,8 +64,8 @@ public static class InterferenceDiagram
             Ink.Label(c, NiceScale.Format(y, yStep), left - 6, Y(y) + 4, 12, Ink.Text, SKTextAlign.Right);
         }
         c.DrawRect(SKRect.Create(left, top, right - left, bottom - top), axis);
-        Ink.Label(c, $"speed of '{range.Shaft}' [rpm]", (left + right) / 2, height - 18, 13, Ink.Text, SKTextAlign.Center);
-        Ink.LabelVertical(c, "frequency [Hz]", 22, (top + bottom) / 2, 13, Ink.Text);
+        Ink.Label(c, $"speed of '{range.Shaft}' [{speed.Symbol}]", (left + right) / 2, height - 18, 13, Ink.Text, SKTextAlign.Center);
+        Ink.LabelVertical(c, $"frequency [{frequency.Symbol}]", 22, (top + bottom) / 2, 13, Ink.Text);
 
         c.Save();
         c.ClipRect(SKRect.Create(left, top, right - left, bottom - top));
@@ -70,7 +74,7 @@ public static class InterferenceDiagram
         for (int i = 0; i < check.Spec.Orders.Count; i++)
         {
             var o = check.Spec.Orders[i];
-            double hzPerRpm = o.Order * ResonanceCheck.ShaftRatio(modes, o.Shaft, o.Name) / rangeRatio / 60;
+            double hzPerRpm = o.Order * ResonanceCheck.ShaftRatio(modes, o.Shaft, o.Name) / rangeRatio * perRev;
             using var ray = Ink.Stroke(OrderColors[i % OrderColors.Length], 2f);
             c.DrawLine(X(0), Y(0), X(xHi), Y(xHi * hzPerRpm), ray);
         }
@@ -86,7 +90,7 @@ public static class InterferenceDiagram
         foreach (var m in modes.ElasticModes)
         {
             if (Y(m.Frequency) < top || Y(m.Frequency) > bottom) continue;
-            Ink.Label(c, $"mode {m.Number}: {NiceScale.Sig(m.Frequency, 4)} Hz", right + 6, Y(m.Frequency) + 4, 11, Ink.Text);
+            Ink.Label(c, $"mode {m.Number}: {frequency.Text(m.Frequency, 4)}", right + 6, Y(m.Frequency) + 4, 11, Ink.Text);
         }
         ly = top + 12;
         for (int i = 0; i < check.Spec.Orders.Count; i++, ly += 14)

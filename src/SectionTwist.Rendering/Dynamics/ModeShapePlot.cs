@@ -1,5 +1,6 @@
 using SectionTwist.Dynamics;
 using SectionTwist.Rendering.Drawing;
+using SectionTwist.Units;
 using SkiaSharp;
 
 namespace SectionTwist.Rendering.Dynamics;
@@ -10,16 +11,17 @@ namespace SectionTwist.Rendering.Dynamics;
 /// </summary>
 public static class ModeShapePlot
 {
-    /// <summary>Draws up to <paramref name="maxModes"/> elastic modes as PNG or SVG.</summary>
-    public static byte[] Render(ModalResult modes, ImageFormat format, int maxModes = 6, int width = 900)
+    /// <summary>Draws up to <paramref name="maxModes"/> elastic modes as PNG or SVG, frequencies in the unit of <paramref name="units"/> (null: Hz).</summary>
+    public static byte[] Render(ModalResult modes, ImageFormat format, int maxModes = 6, int width = 900, UnitSystem? units = null)
     {
         ArgumentNullException.ThrowIfNull(modes);
+        var frequency = (units ?? UnitSystem.SiMillimetre).Frequency;
         var list = modes.ElasticModes.Take(maxModes).ToList();
         int panel = 170, height = Math.Max(1, list.Count) * panel + 50;
-        return CanvasTarget.Render(format, width, height, c => Draw(c, modes, list, width, panel));
+        return CanvasTarget.Render(format, width, height, c => Draw(c, modes, list, width, panel, frequency));
     }
 
-    private static void Draw(SKCanvas c, ModalResult modes, List<TorsionalMode> list, int width, int panel)
+    private static void Draw(SKCanvas c, ModalResult modes, List<TorsionalMode> list, int width, int panel, DisplayUnit frequency)
     {
         int ns = modes.Stations.Count;
         float left = 80, right = width - 30;
@@ -34,7 +36,7 @@ public static class ModeShapePlot
         {
             var m = list[q];
             float top = 20 + q * panel, mid = top + (panel - 40) / 2f, amp = (panel - 50) / 2f;
-            Ink.Label(c, $"mode {m.Number}: {NiceScale.Sig(m.Frequency, 4)} Hz ({m.CyclesPerMinute:F0} 1/min)", left, top + 4, 13, Ink.Text);
+            Ink.Label(c, $"mode {m.Number}: {frequency.Text(m.Frequency, 4)} ({NumberText.Fixed(m.CyclesPerMinute, 0)} 1/min)", left, top + 4, 13, Ink.Text);
             c.DrawLine(left, mid, right, mid, grid);
             c.DrawLine(left - 6, mid - amp, left - 6, mid + amp, axis);
             Ink.Label(c, "+1", left - 10, mid - amp + 4, 10, Ink.Text, SKTextAlign.Right);

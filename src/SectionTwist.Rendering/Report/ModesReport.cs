@@ -1,8 +1,8 @@
-using System.Globalization;
 using SectionTwist.Dynamics;
 using SectionTwist.Rendering.Drawing;
 using SectionTwist.Rendering.Dynamics;
 using SectionTwist.Shaft;
+using SectionTwist.Units;
 
 namespace SectionTwist.Rendering.Report;
 
@@ -46,82 +46,16 @@ public static class ModesReport
         ArgumentNullException.ThrowIfNull(doc);
         ArgumentNullException.ThrowIfNull(modes);
         options ??= new ShaftReportOptions();
-        static string F(double v, string f = "G4") => v.ToString(f, CultureInfo.InvariantCulture);
-        var elastic = modes.ElasticModes.ToList();
-        var key = new List<KeyFigure>();
-        if (elastic.Count > 0) key.Add(new KeyFigure("lowest natural frequency", $"{F(elastic[0].Frequency)} Hz ({F(elastic[0].CyclesPerMinute, "F0")} 1/min)"));
-        key.Add(new KeyFigure("rigid-body modes", F(modes.RigidBodyModes, "F0")));
-        key.Add(new KeyFigure("discretisation error (estimated)", $"{F(modes.EstimatedError * 100, "G2")} % (tolerance {F(modes.Tolerance * 100, "G2")} %)"));
-        if (check?.Closest is { } worst)
-            key.Add(new KeyFigure("closest crossing", $"mode {worst.Mode} with {worst.Excitation}: {(worst.Status == CrossingStatus.Resonance ? "in the operating range" : $"margin {F(worst.Margin * 100, "F0")} %")}",
-                worst.Status != CrossingStatus.Clear));
-
-        var stations = new ReportTable("Stations (speed ratio = own speed / speed of the reference shaft)", ["station", "shaft", "speed ratio", "inertia [kg·m²]", "held"],
-            [.. modes.Stations.Select(s => (IReadOnlyList<string>)[s.Name, s.Shaft, F(s.SpeedRatio, "G5"), s.Inertia == 0 ? "-" : F(s.Inertia), s.IsFixed ? "fixed" : ""])]);
-        var stages = new ReportTable("Gear and belt stages", ["stage", "driving", "driven", "ratio", "kind", "teeth", "mesh stiffness [N·m/rad]"],
-            [.. doc.Dynamics!.Drivetrain.Stages.Select(g => (IReadOnlyList<string>)[g.Label, g.Driving, g.Driven, F(g.Ratio, "G5"), g.Kind.ToString().ToLowerInvariant(),
-                g.DrivingTeeth is { } za ? $"{za}/{g.DrivenTeeth}" : "-", g.MeshStiffness is { } km ? F(km) : "rigid"])]);
-        var meshes = new ReportTable("Elements per segment", ["segment", "shaft", "elements", "wave speed [m/s]"],
-            [.. modes.Meshes.Select(m => (IReadOnlyList<string>)[m.Segment, m.Shaft, F(m.Elements, "F0"), F(m.WaveSpeed, "F0")])]);
-
-        var freq = new ReportTable("Natural frequencies", ["mode", "f [Hz]", "[1/min]", "kind", "estimated error"],
-            [.. modes.Modes.Select(m => (IReadOnlyList<string>)[F(m.Number, "F0"), m.IsRigidBody ? "0" : F(m.Frequency, "G5"), m.IsRigidBody ? "0" : F(m.CyclesPerMinute, "F0"),
-                m.IsRigidBody ? "rigid body" : "elastic", m.IsRigidBody ? "-" : $"{F(m.EstimatedError * 100, "G2")} %"])]);
-        var chapters = new List<ReportChapter>();
-        var figures = new List<ReportFigure> { new("Mode shapes: station rotations referred to the reference shaft (largest = 1); dotted lines separate the shafts", ImageFormat.Png, ModeShapePlot.Render(modes, ImageFormat.Png), "mode-shapes.png") };
-        var tables = new List<ReportTable> { freq };
-        if (elastic.Count > 0)
-        {
-            tables.Add(new ReportTable("Strain-energy share [%] of each part (stiffen the largest share to raise a mode)", ["part", .. elastic.Select(m => $"mode {m.Number}")],
-                [.. elastic[0].Parts.Select((p, i) => (IReadOnlyList<string>)[p.Name, .. elastic.Select(m => F(m.Parts[i].EnergyShare * 100, "F1"))])]));
-        }
-        chapters.Add(new ReportChapter("Natural frequencies and mode shapes")
-        {
-            Paragraphs = [$"Reference shaft '{modes.ReferenceShaft}', {modes.Unknowns} unknowns, total inertia referred to it {F(modes.ReferredInertia)} kg·m²."],
-            Tables = [.. tables, meshes],
-            Figures = figures,
-        });
-        if (check is not null)
-        {
-            var r = check.Spec.Range;
-            var alert = check.Crossings.Select((c, i) => (c, i)).Where(x => x.c.Status != CrossingStatus.Clear).Select(x => x.i).ToList();
-            chapters.Add(new ReportChapter("Interference check")
-            {
-                Paragraphs =
-                [
-                    $"Operating range of '{r.Shaft}': {F(r.Minimum * 30 / Math.PI, "F0")} to {F(r.Maximum * 30 / Math.PI, "F0")} rpm. Bands {F(check.Spec.InnerBand * 100, "G3")} % (avoid) and " +
-                    $"{F(check.Spec.OuterBand * 100, "G3")} % (check) - common practice, not a code value; use the applicable code's or the drive supplier's limits where there are any.",
-                    "Only the listed modes are checked; list enough modes to pass the highest excitation frequency.",
-                ],
-                Tables =
-                [
-                    new ReportTable("Crossings of natural frequencies with excitations", ["mode", "f [Hz]", "excitation", "order", $"meets at [rpm of {r.Shaft}]", "margin", "status"],
-                        [.. check.Crossings.Select(c => (IReadOnlyList<string>)[F(c.Mode, "F0"), F(c.Frequency, "G5"), c.Excitation, F(c.Order, "G4"), F(c.CrossingSpeed * 30 / Math.PI, "F0"),
-                            c.Status == CrossingStatus.Resonance ? "in range" : $"{F(c.Margin * 100, "F0")} %", ModalResultJson.Status(c.Status)])]) { AlertRows = alert },
-                ],
-                Figures = [new ReportFigure("Interference diagram: natural frequencies (dashed), excitation orders (rays), operating range (red band) with the two separation bands; dots mark the crossings (red: resonance or inside the inner band)",
-                    ImageFormat.Png, InterferenceDiagram.Render(modes, check, ImageFormat.Png), "interference.png")],
-            });
-        }
-        if (forced is not null)
-        {
-            chapters.Add(new ReportChapter("Forced response")
-            {
-                Paragraphs = [$"Harmonic torque {F(forced.Load.Amplitude)} N·m at '{forced.Load.Station}', {F(forced.Load.AngularFrequency / (2 * Math.PI), "G5")} Hz, modal damping {F(forced.DampingRatio * 100, "G3")} % in every mode; " +
-                    "compare the alternating shear with the static shear of the shaft report and with the material's fatigue strength."],
-                Tables = [new ReportTable("Alternating torque and shear", ["part", "kind", $"torque [{doc.Units.Torque.Symbol}]", $"shear [{doc.Units.Stress.Symbol}]"],
-                    [.. forced.Parts.Select(p => (IReadOnlyList<string>)[p.Name, ModalResultJson.Kind(p.Kind), doc.Units.Torque.Format(p.TorqueAmplitude, "G4"), p.ShearAmplitude is { } s ? doc.Units.Stress.Format(s, "G4") : "-"])])],
-            });
-        }
+        var parts = ModesChapters.Build(doc, modes, check, forced);
         return new ReportModel
         {
             Title = doc.Model.Title is { } t ? $"Drivetrain dynamics: {t}" : "Drivetrain dynamics",
             Subtitle = $"input: {doc.Path}",
             Generator = options.Generator,
             Generated = options.Generated,
-            KeyFigures = key,
-            Inputs = doc.Dynamics.Drivetrain.Stages.Count > 0 ? [stations, stages] : [stations],
-            Chapters = chapters,
+            KeyFigures = parts.KeyFigures,
+            Inputs = parts.Inputs,
+            Chapters = parts.Chapters,
             Warnings = modes.Warnings,
             Method = Method,
             Assumptions = Assumptions,

@@ -25,8 +25,9 @@ public static class ShaftReport
     /// <param name="sections">The sections analysed while reading the file (for their chapters and pictures); may be null.</param>
     /// <param name="verification">Outcomes of <see cref="VerificationSuite.Run"/> on this build; may be empty.</param>
     /// <param name="options">Generator text and time stamp.</param>
+    /// <param name="extras">Further shafts and the drivetrain dynamics, each shown in chapters of their own; null for none.</param>
     public static ShaftReportContent Build(ShaftDocument doc, ShaftResult result, ShaftSectionCatalog? sections,
-        IReadOnlyList<VerificationOutcome> verification, ShaftReportOptions? options = null)
+        IReadOnlyList<VerificationOutcome> verification, ShaftReportOptions? options = null, ShaftReportExtras? extras = null)
     {
         ArgumentNullException.ThrowIfNull(doc);
         ArgumentNullException.ThrowIfNull(result);
@@ -62,6 +63,46 @@ public static class ShaftReport
             chapters.Add(ReportAdapters.SectionChapter($"Section '{s.Name}' ({s.Source.TemplateSpec ?? Path.GetFileName(s.Source.DxfPath)})", s.Result, figure, doc.Units));
         }
         if (WarpingChapter.Build(doc, result) is { } warping) chapters.Insert(1, warping);
+        int after = chapters.Count > 1 && chapters[1].Heading.Contains("warping", StringComparison.OrdinalIgnoreCase) ? 2 : 1;
+        var keyFigures = ShaftResultChapter.KeyFigures(doc, result).ToList();
+        var method = new List<string>([.. ReportText.DefaultMethod, SectionsMethod]);
+        var assumptions = new List<string>(ReportText.DefaultAssumptions);
+        string caution = result.Bending is null ? ReportText.DefaultCaution : BendingChapter.Caution;
+        var extraChapters = new List<ReportChapter>();
+        if (extras?.Geared is { } geared)
+        {
+            extraChapters.Add(BranchChapter.Build(doc, geared));
+            warnings.AddRange(geared.Warnings.Select(w => w.Message));
+            foreach (var b in geared.Branches) warnings.AddRange(b.Result.Warnings.Select(w => $"shaft '{b.Shaft}': {w.Message}"));
+        }
+        if (result.Overload is { } overload)
+        {
+            extraChapters.Add(OverloadChapter.Build(doc, overload));
+            warnings.AddRange(overload.Warnings.Select(w => w.Message));
+            foreach (var seg in overload.Segments)
+                foreach (var c in seg.Checks.Where(c => c.Margin < 0))
+                    warnings.Add($"segment '{seg.Segment}': overload '{c.Case}' is over the plastic capacity T_p / factor");
+            keyFigures.Add(new KeyFigure("overload checks (plastic capacity)", overload.AnyOverCapacity ? "some case over T_p / factor" : "all within T_p / factor", overload.AnyOverCapacity));
+            caution += " Overload checks: " + OverloadChapter.Caution;
+        }
+        if (extras?.Modes is { } modes && doc.Dynamics is not null)
+        {
+            var parts = ModesChapters.Build(doc, modes, extras.Resonance, extras.Forced, "Dynamics: ");
+            var first = parts.Chapters[0];
+            extraChapters.Add(first with
+            {
+                Paragraphs = ["The drivetrain of the file's 'dynamics' block (the same analysis as 'sectiontwist modes'): torsional natural frequencies, mode shapes, " +
+                              "the strain-energy share of every part, the interference check and the forced response.", .. first.Paragraphs],
+                Tables = [.. parts.Inputs, .. first.Tables],
+            });
+            extraChapters.AddRange(parts.Chapters.Skip(1));
+            keyFigures.AddRange(parts.KeyFigures.Select(k => k with { Label = "dynamics: " + k.Label }));
+            warnings.AddRange(modes.Warnings.Select(w => "dynamics: " + w));
+            method.AddRange(ModesReport.Method);
+            assumptions.AddRange(ModesReport.Assumptions);
+            caution += " Dynamics: " + ModesReport.Caution;
+        }
+        chapters.InsertRange(after, extraChapters);
         warnings.AddRange(result.WarpingWarnings);
         foreach (var seg in result.Segments.Where(x => x.ExceedsShearLimit || x.ExceedsTwistRateLimit))
             warnings.Add($"segment '{seg.Label}': {seg.Check}");
@@ -72,13 +113,14 @@ public static class ShaftReport
             Subtitle = $"input: {doc.Path}",
             Generator = options.Generator,
             Generated = options.Generated,
-            KeyFigures = ShaftResultChapter.KeyFigures(doc, result),
+            KeyFigures = keyFigures,
             Inputs = ShaftInputTables.Build(doc, result),
             Chapters = chapters,
             Verification = ReportAdapters.Verification(verification),
             Warnings = warnings,
-            Method = [.. ReportText.DefaultMethod, SectionsMethod],
-            Caution = result.Bending is null ? ReportText.DefaultCaution : BendingChapter.Caution,
+            Method = method,
+            Assumptions = assumptions,
+            Caution = caution,
         };
         return new ShaftReportContent(model, data, png, pictures);
     }

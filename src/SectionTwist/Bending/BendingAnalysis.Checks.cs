@@ -35,7 +35,8 @@ internal sealed partial class BendingAnalysis
                         // axial force at the pitch point (0, r c, r s): moment r x F = (0, r s Fx, -r c Fx)
                         my = r * s * px; mz = -r * c * px;
                         kind = "gear";
-                        text = g.Description ?? $"gear d={g.PitchDiameter * 1e3:G4} mm: Wt {Math.Abs(wt):G4} N, Wr {wr:G4} N, Wa {Math.Abs(px):G4} N";
+                        // no numbers with units here: the core does not know the display units; the forces are in the Fy, Fz, axial columns
+                        text = g.Description ?? $"gear mesh: tangential force from the torque at the pitch radius, radial by the pressure angle{(g.HelixAngle != 0 ? ", axial by the helix angle" : "")}";
                         break;
                     }
                 case BeltPull b:
@@ -45,7 +46,7 @@ internal sealed partial class BendingAnalysis
                         if (t == 0) _warnings.Add($"pull at '{b.Station}': no torque is applied there in the torsion model, so the pull is zero");
                         double f = b.Factor * Math.Abs(t) / r;
                         py = f * Math.Cos(b.Direction); pz = f * Math.Sin(b.Direction);
-                        kind = "pull"; text = b.Description ?? $"pull {f:G4} N (factor {b.Factor:G3})";
+                        kind = "pull"; text = b.Description ?? $"pull: {Units.NumberText.Format(b.Factor, 3)} x torque / pulley radius";
                         break;
                     }
                 default:

@@ -10,13 +10,13 @@ namespace SectionTwist.Dynamics;
 internal static class LowestEigenpairs
 {
     /// <summary>Eigenvalues ascending (the lowest <paramref name="m"/>) and their orthonormal eigenvectors; <paramref name="a"/> (row-major, n x n) is destroyed.</summary>
-    public static (double[] Values, double[][] Vectors) Solve(double[] a, int n, int m)
+    public static (double[] Values, double[][] Vectors) Solve(double[] a, int n, int m, CancellationToken ct = default)
     {
         m = Math.Min(m, n);
         var d = new double[n];
         var e = new double[Math.Max(n - 1, 0)];
         var beta = new double[n];
-        Tridiagonalize(a, n, d, e, beta);
+        Tridiagonalize(a, n, d, e, beta, ct);
         double norm = 0;
         for (int i = 0; i < n; i++) norm = Math.Max(norm, Math.Abs(d[i]) + (i > 0 ? Math.Abs(e[i - 1]) : 0) + (i < n - 1 ? Math.Abs(e[i]) : 0));
         if (norm == 0) norm = 1;
@@ -27,6 +27,7 @@ internal static class LowestEigenpairs
         var rnd = new Random(12345);
         for (int k = 0; k < m; k++)
         {
+            ct.ThrowIfCancellationRequested();
             tVectors[k] = InverseIteration(d, e, n, values[k], norm, rnd, tVectors, values, k);
             var y = (double[])tVectors[k].Clone();
             BackTransform(a, n, beta, y);
@@ -36,12 +37,13 @@ internal static class LowestEigenpairs
     }
 
     /// <summary>Householder tridiagonalisation; v_k stored below the subdiagonal of column k (v_k[0] = 1 implied).</summary>
-    private static void Tridiagonalize(double[] a, int n, double[] d, double[] e, double[] beta)
+    private static void Tridiagonalize(double[] a, int n, double[] d, double[] e, double[] beta, CancellationToken ct)
     {
         var p = new double[n];
         var v = new double[n];
         for (int k = 0; k < n - 2; k++)
         {
+            if ((k & 15) == 0) ct.ThrowIfCancellationRequested();
             int len = n - k - 1;
             double sigma = 0, x0 = a[(k + 1) * n + k];
             for (int i = k + 2; i < n; i++) sigma += a[i * n + k] * a[i * n + k];

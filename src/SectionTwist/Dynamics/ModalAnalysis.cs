@@ -13,6 +13,7 @@ public static class ModalAnalysis
     /// <summary>Computes the lowest modes of <paramref name="model"/>.</summary>
     /// <param name="model">The drivetrain.</param>
     /// <param name="options">Mode count and tolerance; null for the defaults.</param>
-    public static ModalResult Solve(DrivetrainModel model, ModalOptions? options = null) =>
-        new ModalOperation(model, options ?? new ModalOptions()).Compute();
+    /// <param name="cancellationToken">Observed between refinement passes and inside the reduction and eigen solve (every row).</param>
+    public static ModalResult Solve(DrivetrainModel model, ModalOptions? options = null, CancellationToken cancellationToken = default) =>
+        new ModalOperation(model, options ?? new ModalOptions(), cancellationToken).Compute();
 }

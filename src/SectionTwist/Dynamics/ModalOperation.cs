@@ -15,10 +15,12 @@ internal sealed class ModalOperation
 {
     private readonly DrivetrainModel _model;
     private readonly ModalOptions _options;
+    private readonly CancellationToken _ct;
     private ModalResult? _result;
 
-    public ModalOperation(DrivetrainModel model, ModalOptions options)
+    public ModalOperation(DrivetrainModel model, ModalOptions options, CancellationToken ct = default)
     {
+        _ct = ct;
         _model = model ?? throw new ArgumentNullException(nameof(model));
         _options = options ?? throw new ArgumentNullException(nameof(options));
         if (options.ModeCount < 1) throw new SectionTwistException("bad-options", $"mode count {options.ModeCount} must be at least 1");
@@ -40,10 +42,11 @@ internal sealed class ModalOperation
         int pass = 0;
         while (true)
         {
+            _ct.ThrowIfCancellationRequested();
             mats = new TrainMatrices(top, ne);
             var (k, m) = mats.Assemble();
             int wanted = mats.RigidBodyModes + _options.ModeCount;
-            (values, vectors) = SymmetricDefiniteEigen.Solve(k, m, mats.Count, wanted, i => Describe(top, mats, i));
+            (values, vectors) = SymmetricDefiniteEigen.Solve(k, m, mats.Count, wanted, i => Describe(top, mats, i), _ct);
             if (_options.ElementsPerSegment is not null || vectors.Length <= mats.RigidBodyModes || ++pass > 8) break;
             double omegaTop = Math.Sqrt(Math.Max(values[vectors.Length - 1], 0)) * 1.02;
             bool grew = false;

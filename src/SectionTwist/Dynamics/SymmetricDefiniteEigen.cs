@@ -13,8 +13,9 @@ namespace SectionTwist.Dynamics;
 internal static class SymmetricDefiniteEigen
 {
     /// <summary>Eigenvalues ascending and the first <paramref name="wanted"/> eigenvectors (M-orthonormal), each of length n.</summary>
-    public static (double[] Values, double[][] Vectors) Solve(double[] k, double[] m, int n, int wanted, Func<int, string> describe)
+    public static (double[] Values, double[][] Vectors) Solve(double[] k, double[] m, int n, int wanted, Func<int, string> describe, CancellationToken ct = default)
     {
+        ct.ThrowIfCancellationRequested();
         double mScale = 0;
         for (int i = 0; i < n; i++) mScale = Math.Max(mScale, m[i * n + i]);
         if (!(mScale > 0)) throw new SectionTwistException("bad-drivetrain", "the train has no inertia at all; give the materials a density or add inertias at stations");
@@ -39,16 +40,20 @@ internal static class SymmetricDefiniteEigen
             SolveLower(kzzL, z, w, r);
             SolveUpperT(kzzL, z, w, r);
             for (int i = 0; i < r; i++)
+            {
+                ct.ThrowIfCancellationRequested();
                 for (int j = 0; j < r; j++)
                 {
                     double s = 0;
                     for (int q = 0; q < z; q++) s += kzr[q * r + i] * w[q * r + j];
                     kr[i * r + j] -= s;
                 }
+            }
         }
         if (Cholesky(mr, r) is int badM && badM >= 0)
             throw new SectionTwistException("bad-drivetrain", $"the inertia matrix is not positive definite at {describe(massive[badM])}; check the densities and inertias");
         // C = L^-1 K L^-T: W = L^-1 K (row operations), C = L^-1 W^T (K symmetric)
+        ct.ThrowIfCancellationRequested();
         var c = (double[])kr.Clone();
         SolveLower(mr, r, c, r);
         Transpose(c, r);
@@ -58,7 +63,8 @@ internal static class SymmetricDefiniteEigen
         int take = Math.Min(wanted, r);
         double[] values;
         double[][] ys;
-        if (take < r) (values, ys) = LowestEigenpairs.Solve(c, r, take);
+        ct.ThrowIfCancellationRequested();
+        if (take < r) (values, ys) = LowestEigenpairs.Solve(c, r, take, ct);
         else
         {
             var evd = Matrix<double>.Build.Dense(r, r, c).Evd(Symmetricity.Symmetric);
@@ -67,6 +73,7 @@ internal static class SymmetricDefiniteEigen
             ys = [.. order.Select(j => Enumerable.Range(0, r).Select(i => evd.EigenVectors[i, j]).ToArray())];
         }
         var vectors = new double[take][];
+        ct.ThrowIfCancellationRequested();
         for (int q = 0; q < take; q++)
         {
             var y = ys[q];

@@ -122,11 +122,11 @@ public sealed class EllipticalArcSegment : Segment
     /// <inheritdoc />
     public override double[] Subdivide(double sagitta, double maxLength = double.PositiveInfinity)
     {
-        // Curvature radius is at least b^2/a: use the circle bound with that radius (conservative).
-        double rmin = Math.Min(SemiMinor * SemiMinor / SemiMajor, SemiMajor * SemiMajor / SemiMinor);
+        // The ellipse is the image of the circle of radius a under a map that never lengthens a distance (scale 1 along
+        // the major axis, b/a across). A parameter step du leaves the circle's chord within a (1 - cos(du/2)) of its arc,
+        // so the ellipse's chord is as close to its arc. A curve smaller than the tolerance needs only the quarter chords.
         double rmax = Math.Max(SemiMajor, SemiMinor);
-        double dphi = sagitta >= rmin ? Math.PI / 2 : 2 * Math.Acos(1 - sagitta / rmin);
-        double du = Math.Min(Math.PI / 4, dphi * rmin / rmax);
+        double du = sagitta >= rmax ? Math.PI / 2 : Math.Min(Math.PI / 4, 2 * Math.Acos(1 - sagitta / rmax));
         if (maxLength < double.PositiveInfinity) du = Math.Min(du, maxLength / rmax);
         du = Math.Max(du, 1e-6); // a zero tolerance or an extreme axis ratio must not ask for unbounded pieces
         int n = (int)Math.Clamp(Math.Ceiling(Math.Abs(Sweep) / du - 1e-9), 2, 1_000_000);

@@ -88,6 +88,9 @@ public static class ProfileValidator
         int Cx(double x) => Math.Clamp((int)((x - box.MinX) / cw), 0, nc - 1);
         int Cy(double y) => Math.Clamp((int)((y - box.MinY) / ch), 0, nc - 1);
         double tol = 1e-10 * diag;
+        // edges crowded into a few cells (stacked copies, a curve far smaller than the part) make the check quadratic:
+        // a budget on pair tests keeps it to seconds whatever the input
+        long pairs = 0, pairBudget = Limits.InputLimits.MaxCrossingPairTests;
         for (int e = 0; e < edges.Count; e++)
         {
             var (a, b, _, _, _, _) = edges[e];
@@ -96,6 +99,10 @@ public static class ProfileValidator
                 {
                     int key = ix * nc + iy;
                     if (!cells.TryGetValue(key, out var list)) cells[key] = list = [];
+                    pairs += list.Count;
+                    if (pairs > pairBudget)
+                        throw new SectionTwistException("profile-too-complex",
+                            $"{profile.Name}: {Describe(loops[edges[e].Loop].Region, loops[edges[e].Loop].Hole)} near {edges[e].A} has too many boundary pieces crowded together to check for crossings (stacked copies or a curve far smaller than the part?); remove the duplicates or the tiny curve");
                     foreach (int f in list)
                     {
                         var ef = edges[f];

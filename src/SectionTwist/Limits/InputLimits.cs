@@ -46,6 +46,9 @@ public static class InputLimits
     /// <summary>Most straight pieces (curves flattened finely) the outline check of a profile examines for crossings.</summary>
     public const int MaxOutlineEdges = 2_000_000;
 
+    /// <summary>Most pair tests the outline crossing check makes (a few seconds); more means pieces crowded into one place.</summary>
+    public const long MaxCrossingPairTests = 150_000_000;
+
     /// <summary>Most points of a point list.</summary>
     public const int MaxPoints = 2_000_000;
 
@@ -57,6 +60,9 @@ public static class InputLimits
 
     /// <summary>Largest section size (bounding-box diagonal), metres.</summary>
     public const double MaxSectionSize = 1e6;
+
+    /// <summary>Most holes in a section given to the plastic analysis (its time grows with the square of the holes).</summary>
+    public const int MaxPlasticHoles = 16;
 
     /// <summary>Largest ratio of segment stiffnesses in one shaft; beyond it the solve loses all digits.</summary>
     public const double MaxStiffnessRatio = 1e12;

@@ -74,12 +74,13 @@ internal sealed class ElasticPlasticProblem
         for (int k = 0; k < _dh.Length; k++) _dh[k] = new double[_free.Length];
         for (int i = 0; i < _free.Length; i++)
         {
+            if ((i & 255) == 0) ct.ThrowIfCancellationRequested(); // distances cost the loops' segment count per node
             var p = mesh.Node(_free[i]);
             _d0[i] = _dist.ToOuter(p, nodeRegion[_free[i]]);
             for (int k = 0; k < _dh.Length; k++) _dh[k][i] = _dist.ToHole(p, nodeRegion[_free[i]], k);
         }
         _holeArea = _dist.HoleLoops.Select(l => loopArea[l]).ToArray();
-        (_outerGap, _holeGap) = _dist.HoleCount > 0 ? _dist.Gaps() : ([], new double[0, 0]);
+        (_outerGap, _holeGap) = _dist.HoleCount > 0 ? _dist.Gaps(ct) : ([], new double[0, 0]);
         HoleConstants = new double[_dist.HoleCount];
         _warm = new double[_free.Length];
     }

@@ -32,7 +32,7 @@ internal static class FullyPlasticTorque
         Span<double> xe = stackalloc double[6], ye = stackalloc double[6], dx = stackalloc double[6], dy = stackalloc double[6];
         for (int e = 0, q = 0; e < mesh.ElementCount; e++)
         {
-            if ((e & 1023) == 0) ct.ThrowIfCancellationRequested();
+            if ((e & 63) == 0) ct.ThrowIfCancellationRequested(); // distances cost the loops' segment count per point
             TorsionSolver.Gather(mesh, e, xe, ye);
             int region = mesh.ElementRegion[e];
             for (int i = 0; i < rule.Count; i++, q++)
@@ -50,6 +50,7 @@ internal static class FullyPlasticTorque
         var c = new double[nh];
         double Torque(double[] cc)
         {
+            ct.ThrowIfCancellationRequested(); // one pass over every quadrature point and hole
             double s = 0;
             for (int q = 0; q < nq; q++)
             {
@@ -62,7 +63,7 @@ internal static class FullyPlasticTorque
         }
         if (nh > 0)
         {
-            var (outerGap, holeGap) = dist.Gaps();
+            var (outerGap, holeGap) = dist.Gaps(ct);
             for (int sweep = 0; sweep < 30; sweep++)
             {
                 ct.ThrowIfCancellationRequested();

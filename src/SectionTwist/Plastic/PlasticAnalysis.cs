@@ -20,6 +20,7 @@ internal sealed class PlasticAnalysis(SectionResult elastic, double yieldShear, 
     private PlasticResult Run()
     {
         var profile = elastic.Profile;
+        int maxElements = PlasticLimits.Check(profile, yieldShear, options);
         var warnings = new List<AnalysisWarning>();
         if (elastic.Warnings.Any(w => w.Code == "sharp-reentrant-corner"))
             warnings.Add(new AnalysisWarning("first-yield-at-corner",
@@ -27,10 +28,13 @@ internal sealed class PlasticAnalysis(SectionResult elastic, double yieldShear, 
         double acc = Math.Clamp(options.Accuracy, 1e-5, 0.1);
         double h = Math.Min(0.5 * Math.Sqrt(profile.Properties.Area) * Math.Pow(acc, 0.25), profile.Bounds.Diagonal / 8);
         var loopArea = profile.Regions.SelectMany(r => r.Loops).Select(l => Math.Abs(l.SignedArea)).ToArray();
-        var coarse = Mesher.Generate(profile, new MeshOptions { MaxEdgeLength = h, MaxArcAngleDegrees = 10, MaxTriangles = options.MaxElements }, ct);
-        bool refine = 4L * coarse.ElementCount <= options.MaxElements;
+        Mesh coarse;
+        try { coarse = Mesher.Generate(profile, new MeshOptions { MaxEdgeLength = h, MaxArcAngleDegrees = 10, MaxTriangles = maxElements }, ct); }
+        catch (SectionTwistException e) when (e.Code == "mesh-too-large") { throw PlasticLimits.TooLarge(profile, acc, maxElements, options); }
+        if (coarse.ElementCount > maxElements) throw PlasticLimits.TooLarge(profile, acc, maxElements, options);
+        bool refine = 4L * coarse.ElementCount <= maxElements;
         if (!refine)
-            warnings.Add(new AnalysisWarning("accuracy-not-reached", $"the element limit ({options.MaxElements}) allowed one mesh only; the plastic results carry no error estimate"));
+            warnings.Add(new AnalysisWarning("accuracy-not-reached", $"the element limit ({maxElements}, from the element limit and the memory budget) allowed one mesh only; the plastic results carry no error estimate"));
         var fine = refine ? MeshRefinement.Uniform(coarse) : coarse;
 
         var (tpCoarse, _) = FullyPlasticTorque.Compute(coarse, loopArea, ct);
@@ -40,7 +44,7 @@ internal sealed class PlasticAnalysis(SectionResult elastic, double yieldShear, 
         double ty = yieldShear / elastic.MaxShearPerTorque;
         // G theta / tau_y at first yield: the unit-twist stress function has peak slope MaxShearPerTorque * J.
         double lambdaY = 1 / (elastic.MaxShearPerTorque * elastic.TorsionConstant);
-        var ratios = options.TwistRatios.Where(r => double.IsFinite(r) && r >= 1).Distinct().Order().ToArray();
+        var ratios = options.TwistRatios.Distinct().Order().ToArray();
         var pc = new ElasticPlasticProblem(coarse, loopArea, ct);
         var pf = refine ? new ElasticPlasticProblem(fine, loopArea, ct) : pc;
         double holeFloor = pf.HoleConstants.Length > 0 ? 1e-5 : 0; // tolerance of the hole-constant search

@@ -15,11 +15,10 @@ public static class PlasticAnalyzer
     /// <param name="yieldShear">Shear yield stress tau_y, Pa (for example 0.577 times the tensile yield, von Mises).</param>
     /// <param name="options">Accuracy and curve points; null for the defaults.</param>
     /// <param name="cancellationToken">Stops a long analysis.</param>
+    /// <exception cref="SectionTwistException">Options or section beyond the limits (twist ratios, holes, memory budget; docs/user-guide.md, "Limits").</exception>
     public static PlasticResult Analyze(SectionResult elastic, double yieldShear, PlasticOptions? options = null, CancellationToken cancellationToken = default)
     {
         ArgumentNullException.ThrowIfNull(elastic);
-        if (!(yieldShear > 0) || double.IsInfinity(yieldShear))
-            throw new SectionTwistException("bad-yield", $"{elastic.Profile.Name}: the shear yield stress must be a positive number of Pa, got {yieldShear}");
         return new PlasticAnalysis(elastic, yieldShear, options ?? PlasticOptions.Default, cancellationToken).Compute();
     }
 }

@@ -48,7 +48,7 @@ internal sealed class SectionDistances
     /// With |grad phi| &lt;= tau_y along straight paths they bound the hole constants: c_k &lt;= tau_y OuterGap[k] and
     /// |c_k - c_j| &lt;= tau_y HoleGap[j, k].
     /// </summary>
-    public (double[] OuterGap, double[,] HoleGap) Gaps()
+    public (double[] OuterGap, double[,] HoleGap) Gaps(CancellationToken ct = default)
     {
         int n = HoleCount;
         var outer = new double[n];
@@ -60,11 +60,14 @@ internal sealed class SectionDistances
             var loop = Loops[HoleLoops[k]];
             double diag = loop.Geometry.Bounds.Diagonal;
             foreach (var seg in loop.Geometry.Segments)
+            {
+                ct.ThrowIfCancellationRequested();
                 foreach (var p in seg.Flatten(1e-6 * diag, diag / 400))
                 {
                     outer[k] = Math.Min(outer[k], ToOuter(p, loop.Region));
                     for (int j = 0; j < n; j++) if (j != k) gap[j, k] = Math.Min(gap[j, k], ToHole(p, loop.Region, j));
                 }
+            }
         }
         return (outer, gap);
     }

@@ -53,8 +53,18 @@ public sealed record SectionStiffness(double TorsionConstant, double ShearPerTor
             WarpingShearFactor = result.Warping?.WarpingShearFactor,
             WarpingSensitive = result.Warping?.Classification == Warping.WarpingClass.WarpingSensitive,
             PolarMoment = result.PolarMoment,
+            Profile = result.Profile,
         };
     }
+
+    /// <summary>
+    /// Fully plastic torque per unit shear yield stress, T_p / tau_y, m^3, when known in closed form (round: pi d^3 / 12;
+    /// tube: pi (D^3 - d^3) / 12; sand-heap analogy, Nadai, Theory of Flow and Fracture of Solids, ch. 35); null otherwise.
+    /// </summary>
+    public double? PlasticTorquePerYield { get; init; }
+
+    /// <summary>The analysed outline, when the values come from a section analysis (the overload check finds T_p on it); else null.</summary>
+    public Geometry.Profile? Profile { get; init; }
 
     /// <summary>
     /// Polar second moment of area about the centroid, Ix + Iy, m^4 (not J: it sets the rotational inertia rho Ip per unit
@@ -71,7 +81,7 @@ public sealed record SectionStiffness(double TorsionConstant, double ShearPerTor
         if (!(diameter > 0) || !double.IsFinite(diameter))
             throw new SectionTwistException("bad-section", $"round section: diameter {diameter} m must be positive");
         return new(Math.PI * Math.Pow(diameter, 4) / 32, 16 / (Math.PI * diameter * diameter * diameter),
-            $"round d={diameter * 1e3:G6} mm", diameter) { Bending = SectionTwist.Bending.BendingSection.Round(diameter), PolarMoment = Math.PI * Math.Pow(diameter, 4) / 32 };
+            $"round d={diameter * 1e3:G6} mm", diameter) { Bending = SectionTwist.Bending.BendingSection.Round(diameter), PolarMoment = Math.PI * Math.Pow(diameter, 4) / 32, PlasticTorquePerYield = Math.PI * diameter * diameter * diameter / 12 };
     }
 
     /// <summary>
@@ -89,7 +99,8 @@ public sealed record SectionStiffness(double TorsionConstant, double ShearPerTor
                 $"tube section: inner diameter {innerDiameter} m must be at least 0 and smaller than the outer diameter {outerDiameter} m");
         double d4 = Math.Pow(outerDiameter, 4) - Math.Pow(innerDiameter, 4);
         return new(Math.PI * d4 / 32, 16 * outerDiameter / (Math.PI * d4),
-            $"tube D={outerDiameter * 1e3:G6} mm d={innerDiameter * 1e3:G6} mm", outerDiameter) { Bending = SectionTwist.Bending.BendingSection.Tube(outerDiameter, innerDiameter), PolarMoment = Math.PI * d4 / 32 };
+            $"tube D={outerDiameter * 1e3:G6} mm d={innerDiameter * 1e3:G6} mm", outerDiameter) { Bending = SectionTwist.Bending.BendingSection.Tube(outerDiameter, innerDiameter), PolarMoment = Math.PI * d4 / 32,
+            PlasticTorquePerYield = Math.PI * (Math.Pow(outerDiameter, 3) - Math.Pow(innerDiameter, 3)) / 12 };
     }
 
     /// <summary>

@@ -105,9 +105,10 @@ internal sealed class ShaftAnalysis(ShaftModel model)
         return list;
     }
 
+    // No number with a unit in the message: warnings reach the text, report and CSV of every unit system and JSON alike.
     private static AnalysisWarning Unbounded(SegmentResult s, SectionStiffness section) => new("unbounded-peak-shear",
         $"segment '{s.Label}' ({s.From}-{s.To}): the peak shear is unbounded at a sharp re-entrant corner of its section " +
-        $"'{section.Description}' (the {s.MaxShear / 1e6:G4} MPa on the analysis mesh grows with refinement), so no factor of safety is given; " +
+        $"'{section.Description}' (its value on the analysis mesh grows with refinement), so no factor of safety is given; " +
         "model the real fillet radius (r= on the keyseat and spline templates)");
 
     /// <summary>A shaft with no support must carry torques that sum to zero, else it would spin up (a loose shaft).</summary>

@@ -43,7 +43,7 @@ internal sealed partial class ShaftFileReader
         {
             foreach (var item in Sequence(sn, "shafts", "- {name: motor shaft, stations: [...], segments: [...]}"))
             {
-                var b = new YamlMap(_file, item, "a shaft", "name", "stations", "segments", "springs");
+                var b = new YamlMap(_file, item, "a shaft", "name", "stations", "segments", "springs", "loads", "supports");
                 string name = b.RequireString("name", "give the shaft a name, e.g. 'name: motor shaft'");
                 if (shafts.Any(x => x.Name == name)) throw _file.Error(b.Get("name")!, "name", $"shaft '{name}' is defined twice; give each shaft a unique name");
                 var child = new ShaftFileReader(_file, _baseDirectory, _resolver);
@@ -56,7 +56,10 @@ internal sealed partial class ShaftFileReader
                 }
                 var segs = b.Get("segments") is { } segNode ? child.ReadSegments(segNode, materials, sections) : [];
                 var springs = b.Get("springs") is { } springNode ? child.ReadSprings(springNode) : [];
-                shafts.Add(new ShaftBranch(name, new ShaftModel { Stations = child._stationList, Segments = segs, Springs = springs }));
+                // loads and supports of a further shaft serve the static solve of the geared train (GearedShaftSolver), not the dynamics
+                var loads = b.Get("loads") is { } loadNode ? child.ReadLoads(loadNode) : [];
+                var supports = b.Get("supports") is { } supNode ? child.ReadSupports(supNode) : [];
+                shafts.Add(new ShaftBranch(name, new ShaftModel { Stations = child._stationList, Segments = segs, Springs = springs, Loads = loads, FixedStations = supports, Title = name }));
             }
         }
         string At(YamlNode n, string key)

@@ -11,7 +11,7 @@ namespace SectionTwist.Shaft;
 /// </summary>
 internal sealed partial class ShaftFileReader
 {
-    private static readonly string[] TopKeys = ["title", "units", "materials", "sections", "stations", "segments", "loads", "supports", "springs", "reference", "twistLimit", "bending", "warping", "dynamics"];
+    private static readonly string[] TopKeys = ["title", "units", "materials", "sections", "stations", "segments", "loads", "supports", "springs", "reference", "twistLimit", "bending", "warping", "dynamics", "overload"];
     private readonly ShaftFileContext _file;
     private readonly string _baseDirectory;
     private readonly Func<SectionSource, SectionStiffness>? _resolver;
@@ -79,6 +79,7 @@ internal sealed partial class ShaftFileReader
             TwistRateLimit = limit,
             Bending = root.Get("bending") is { } bn ? ReadBending(bn) : null,
             Warping = root.Get("warping") is { } wn ? ReadWarping(wn) : null,
+            Overload = root.Get("overload") is { } on ? ReadOverload(on, segments) : null,
         };
         return new ShaftDocument(path, model, units) { Dynamics = root.Get("dynamics") is { } dn ? ReadDynamics(dn, model, materials, sections) : null };
     }

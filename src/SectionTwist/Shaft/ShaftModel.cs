@@ -39,6 +39,8 @@ public sealed record ShaftModel
     public IReadOnlyDictionary<string, WarpingTorsion.WarpingEnd>? Warping { get; init; }
     /// <summary>Bearings, transverse loads and strength checks (bending with torsion); null for torsion only.</summary>
     public Bending.BendingModel? Bending { get; init; }
+    /// <summary>Overload torques checked against each segment's fully plastic torque (<see cref="Plastic.OverloadCheck"/>); null for none.</summary>
+    public OverloadSpec? Overload { get; init; }
     /// <summary>Optional title for reports.</summary>
     public string? Title { get; init; }
 }

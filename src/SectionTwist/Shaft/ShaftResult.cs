@@ -39,6 +39,8 @@ public sealed record ShaftResult
     public IReadOnlyList<string> WarpingWarnings { get; init; } = [];
     /// <summary>The bending solution and strength checks, or null when the model has no <see cref="ShaftModel.Bending"/>.</summary>
     public SectionTwist.Bending.BendingResult? Bending { get; init; }
+    /// <summary>The overload checks against the fully plastic torque, or null when the model has no <see cref="ShaftModel.Overload"/>.</summary>
+    public Plastic.OverloadResult? Overload { get; init; }
     /// <summary>Twist-rate limit, rad/m, or null.</summary>
     public double? TwistRateLimit => Model.TwistRateLimit;
     /// <summary>True when some segment exceeds its allowable shear or the twist-rate limit.</summary>

@@ -7,7 +7,8 @@ namespace SectionTwist.Shaft;
 /// <summary>
 /// CSV tables of a shaft result in a <see cref="UnitSystem"/> (the unit is part of each column name, in ASCII, e.g.
 /// <c>torque_at_from_N*m</c> becomes <c>torque_at_from_Nm</c>), written with <see cref="AtomicFile"/>: stations.csv,
-/// segments.csv (with the <c>check</c> column), warnings.csv, and bending.csv (SI) when the model has bending. Numbers keep
+/// segments.csv (with the <c>check</c> column), warnings.csv (with the overload and stage warnings), bending.csv when the
+/// model has bending and overload.csv when it has overload checks. Numbers keep
 /// full precision.
 /// </summary>
 internal static class ShaftResultCsv
@@ -34,11 +35,28 @@ internal static class ShaftResultCsv
     }
 
     /// <summary>One row per warning: its code and message (header only when there is none).</summary>
-    public static string Warnings(ShaftResult r)
+    public static string Warnings(ShaftResult r, GearedShaftResult? geared = null)
     {
         var sb = new StringBuilder("code,message\n");
         foreach (var w in r.Warnings) sb.Append(CultureInfo.InvariantCulture, $"{Text(w.Code)},{Text(w.Message)}\n");
         foreach (var w in r.WarpingWarnings) sb.Append(CultureInfo.InvariantCulture, $"warping,{Text(w)}\n");
+        foreach (var w in r.Overload?.Warnings ?? []) sb.Append(CultureInfo.InvariantCulture, $"{Text(w.Code)},{Text(w.Message)}\n");
+        foreach (var w in geared?.Warnings ?? []) sb.Append(CultureInfo.InvariantCulture, $"{Text(w.Code)},{Text(w.Message)}\n");
+        foreach (var b in geared?.Branches ?? [])
+            foreach (var w in b.Result.Warnings) sb.Append(CultureInfo.InvariantCulture, $"{Text(w.Code)},{Text($"shaft '{b.Shaft}': {w.Message}")}\n");
+        return sb.ToString();
+    }
+
+    /// <summary>One row per segment and overload case: T_y, T_p, shape factor, the case's torque, margin and check (empty cells where unknown).</summary>
+    public static string Overload(Plastic.OverloadResult o, UnitSystem u)
+    {
+        var sb = new StringBuilder($"segment,section,{Col("yield_shear", u.Stress)},{Col("first_yield_torque", u.Torque)},first_yield_unbounded,{Col("fully_plastic_torque", u.Torque)}," +
+                                   $"fully_plastic_torque_error,shape_factor,factor,case,{Col("overload_torque", u.Torque)},margin,yields,check\n");
+        foreach (var s in o.Segments)
+            foreach (var c in s.Checks)
+                sb.Append(CultureInfo.InvariantCulture,
+                    $"{Text(s.Segment)},{Text(s.Section)},{N(s.YieldShear is { } t ? u.Stress.FromSi(t) : null)},{N(s.FirstYieldTorque is { } y ? u.Torque.FromSi(y) : null)},{(s.FirstYieldUnbounded ? "yes" : "no")}," +
+                    $"{N(s.FullyPlasticTorque is { } p ? u.Torque.FromSi(p) : null)},{N(s.FullyPlasticTorqueError)},{N(s.ShapeFactor)},{N(o.Factor)},{Text(c.Case)},{N(u.Torque.FromSi(c.Torque))},{N(c.Margin)},{(c.Yields ? "yes" : "no")},{Text(c.Check)}\n");
         return sb.ToString();
     }
 
@@ -46,7 +64,7 @@ internal static class ShaftResultCsv
     /// Writes stations.csv, segments.csv and warnings.csv (and bending.csv when the model has bending) into
     /// <paramref name="directory"/>; returns the files written.
     /// </summary>
-    public static IReadOnlyList<string> WriteAll(ShaftResult r, string directory, UnitSystem units)
+    public static IReadOnlyList<string> WriteAll(ShaftResult r, string directory, UnitSystem units, GearedShaftResult? geared = null)
     {
         var files = new List<string>();
         void Put(string name, string text)
@@ -57,8 +75,9 @@ internal static class ShaftResultCsv
         }
         Put("stations.csv", Stations(r, units));
         Put("segments.csv", Segments(r, units));
-        Put("warnings.csv", Warnings(r));
-        if (r.Bending is { } b) Put("bending.csv", Bending.BendingCsv.Samples(b));
+        Put("warnings.csv", Warnings(r, geared));
+        if (r.Bending is { } b) Put("bending.csv", Bending.BendingCsv.Samples(b, units));
+        if (r.Overload is { } o) Put("overload.csv", Overload(o, units));
         return files;
     }
 

@@ -30,11 +30,11 @@ internal static class ShaftResultJson
         }
     }
 
-    public static string Write(ShaftResult r, string? file = null) => JsonSerializer.Serialize(ToDto(r, file), Options);
+    public static string Write(ShaftResult r, string? file = null, GearedShaftResult? geared = null) => JsonSerializer.Serialize(ToDto(r, file, geared), Options);
 
     private static double? Num(double? v) => v is { } x && double.IsFinite(x) ? x : null;
 
-    private static object ToDto(ShaftResult r, string? file) => new
+    private static object ToDto(ShaftResult r, string? file, GearedShaftResult? geared) => new
     {
         units = new { length = "m", torque = "N*m", stress = "Pa", angle = "rad", twistRate = "rad/m" },
         title = r.Model.Title,
@@ -48,32 +48,7 @@ internal static class ShaftResultJson
         governingTwistSegment = r.GoverningTwistSegment?.Label,
         endToEndTwist = r.EndToEndTwist,
         stations = r.Stations.Select(s => new { name = s.Name, position = s.Position, rotation = s.Rotation, appliedTorque = s.AppliedTorque, isFixed = s.IsFixed }),
-        segments = r.Segments.Select(s => new
-        {
-            name = s.Label,
-            from = s.From,
-            to = s.To,
-            length = s.Length,
-            section = s.Section,
-            material = s.Material.Name,
-            materialSource = s.Material.Source,
-            materialStrengthBasis = s.Material.StrengthBasis switch { MaterialBasis.SpecifiedMinimum => "specified-minimum", MaterialBasis.Typical => "typical", _ => "user" },
-            stiffness = s.Stiffness,
-            internalTorque = s.InternalTorque,
-            torqueAtFrom = s.TorqueAtFrom,
-            torqueAtTo = s.TorqueAtTo,
-            twist = s.Twist,
-            // a sharp re-entrant corner: the mesh value is no bound on the stress, so no number is given
-            maxShear = s.PeakShearUnbounded ? (double?)null : s.MaxShear,
-            peakShearUnbounded = s.PeakShearUnbounded,
-            shearLimit = s.ShearLimit,
-            shearLimitBasis = s.Material.LimitBasis,
-            safetyFactor = Num(s.SafetyFactor),
-            maxTwistRate = s.MaxTwistRate,
-            exceedsShearLimit = s.ExceedsShearLimit,
-            exceedsTwistRateLimit = s.ExceedsTwistRateLimit,
-            check = s.Check,
-        }),
+        segments = r.Segments.Select(Segment),
         reactions = r.Reactions.Select(x => new { station = x.Station, torque = x.Torque }),
         springs = r.Springs.Select(x => new { name = x.Label, stationA = x.StationA, stationB = x.StationB, torque = x.Torque, windup = x.Windup }),
         warnings = r.Warnings.Select(x => new { code = x.Code, message = x.Message }),
@@ -96,5 +71,66 @@ internal static class ShaftResultJson
             }),
         },
         bending = r.Bending is null ? null : Bending.BendingJson.ToDto(r.Bending),
+        branches = geared?.Branches.Select(b => new
+        {
+            shaft = b.Shaft,
+            stage = b.Stage,
+            parent = b.Parent,
+            station = b.Station,
+            speedRatio = b.SpeedRatio,
+            stageTorque = b.StageTorque,
+            torqueFromOwnLoads = b.TorqueFromOwnLoads,
+            referenceStation = b.Result.ReferenceStation,
+            stations = b.Result.Stations.Select(s => new { name = s.Name, position = s.Position, rotation = s.Rotation, appliedTorque = s.AppliedTorque, isFixed = s.IsFixed }),
+            segments = b.Result.Segments.Select(Segment),
+            reactions = b.Result.Reactions.Select(x => new { station = x.Station, torque = x.Torque }),
+            warnings = b.Result.Warnings.Select(x => new { code = x.Code, message = x.Message }),
+        }),
+        stageWarnings = geared?.Warnings.Select(x => new { code = x.Code, message = x.Message }),
+        overload = r.Overload is not { } o ? null : new
+        {
+            factor = o.Factor,
+            anyOverCapacity = o.AnyOverCapacity,
+            segments = o.Segments.Select(s => new
+            {
+                segment = s.Segment,
+                section = s.Section,
+                yieldShear = s.YieldShear,
+                firstYieldTorque = s.FirstYieldTorque,
+                firstYieldUnbounded = s.FirstYieldUnbounded,
+                fullyPlasticTorque = s.FullyPlasticTorque,
+                fullyPlasticTorqueError = Num(s.FullyPlasticTorqueError),
+                shapeFactor = s.ShapeFactor,
+                checks = s.Checks.Select(c => new { @case = c.Case, torque = c.Torque, margin = c.Margin, yields = c.Yields, check = c.Check }),
+            }),
+            warnings = o.Warnings.Select(x => new { code = x.Code, message = x.Message }),
+        },
+    };
+
+    private static object Segment(SegmentResult s) => new
+    {
+        name = s.Label,
+        from = s.From,
+        to = s.To,
+        length = s.Length,
+        section = s.Section,
+        material = s.Material.Name,
+        materialSource = s.Material.Source,
+        materialStrengthBasis = s.Material.StrengthBasis switch { MaterialBasis.SpecifiedMinimum => "specified-minimum", MaterialBasis.Typical => "typical", _ => "user" },
+        stiffness = s.Stiffness,
+        internalTorque = s.InternalTorque,
+        torqueAtFrom = s.TorqueAtFrom,
+        torqueAtTo = s.TorqueAtTo,
+        twist = s.Twist,
+        // a sharp re-entrant corner: the mesh value is no bound on the stress, so no number is given
+        maxShear = s.PeakShearUnbounded ? (double?)null : s.MaxShear,
+        peakShearUnbounded = s.PeakShearUnbounded,
+        shearLimit = s.ShearLimit,
+        shearLimitBasis = s.Material.LimitBasis,
+        safetyFactor = Num(s.SafetyFactor),
+        maxTwistRate = s.MaxTwistRate,
+        exceedsShearLimit = s.ExceedsShearLimit,
+        exceedsTwistRateLimit = s.ExceedsTwistRateLimit,
+        check = s.Check,
     };
 }

@@ -10,12 +10,15 @@ namespace SectionTwist.Shaft;
 public static class ShaftSolver
 {
     /// <summary>Solves <paramref name="model"/>.</summary>
+    /// <param name="model">The shaft.</param>
+    /// <param name="cancellationToken">Stops the fully plastic torque integrals of the overload checks (the stiffness solve itself is small).</param>
     /// <exception cref="SectionTwistException">The model is invalid, a loose shaft (no support, unbalanced torques) or a mechanism.</exception>
-    public static ShaftResult Solve(ShaftModel model)
+    public static ShaftResult Solve(ShaftModel model, CancellationToken cancellationToken = default)
     {
         ArgumentNullException.ThrowIfNull(model);
         var result = new ShaftAnalysis(model).Compute();
         result = model.Bending is null ? result : result with { Bending = Bending.ShaftBending.Solve(result) };
-        return WarpingTorsion.ShaftWarping.Attach(result);
+        result = WarpingTorsion.ShaftWarping.Attach(result);
+        return model.Overload is null ? result : result with { Overload = Plastic.OverloadCheck.Evaluate(result, cancellation: cancellationToken) };
     }
 }

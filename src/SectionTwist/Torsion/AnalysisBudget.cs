@@ -56,8 +56,24 @@ internal sealed class AnalysisBudget
         double need = Math.Max(meshed is { } m ? (_options.EstimateError ? 4.0 * m : m) : _needed, MaxElements);
         return new SectionTwistException("memory-budget",
             $"{_profile.Name}: the analysis at accuracy {_accuracy.ToString("G2", CultureInfo.InvariantCulture)} needs {(need > MaxElements * 1.0001 ? "about" : "more than")} {need.ToString("G3", CultureInfo.InvariantCulture)} elements " +
-            $"(about {Mb((long)Math.Min(need * BytesPerElement, long.MaxValue / 2))}), more than {Describe()} allows; ask for a coarser accuracy (--accuracy), raise --memory-budget MB, " +
+            $"(about {Mb((long)Math.Min(need * BytesPerElement, long.MaxValue / 2))}), more than {Describe()} allows; ask for a coarser accuracy (--accuracy{Finest(need)}), raise --memory-budget MB, " +
             "or analyse one part (--part N, --layer NAME)");
+    }
+
+    /// <summary>
+    /// " 3E-08 or coarser": the finest accuracy that fits, from the element count growing as accuracy^(-1/2) (element
+    /// size h proportional to accuracy^(1/4), the J convergence order 4 of the smooth case; a singular corner needs
+    /// fewer than that under adaptive refinement), with a margin of 1.5 and rounded up to one digit; empty when nothing
+    /// practical fits.
+    /// </summary>
+    private string Finest(double need)
+    {
+        double ratio = need / MaxElements;
+        double finest = Math.Max(AnalysisOptions.FinestAccuracy, _accuracy * 1.5 * ratio * ratio);
+        if (!(finest < 0.1)) return "";
+        double mag = Math.Pow(10, Math.Floor(Math.Log10(finest)));
+        double up = Math.Ceiling(finest / mag * (1 - 1e-12)) * mag;
+        return $" {Units.NumberText.Exponent(up, 1)} or coarser";
     }
 
     private static string Mb(long bytes) => $"{Math.Ceiling(bytes / (double)(1 << 20)).ToString("0", CultureInfo.InvariantCulture)} MB";

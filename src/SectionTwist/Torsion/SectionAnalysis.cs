@@ -19,6 +19,16 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
     private const double ShearFloor = 1e-5;
     private const int MaxPasses = 6;
 
+    /// <summary>Finest accuracy whose uniform first mesh is used on sections with a singular corner (see <see cref="Run"/>).</summary>
+    private const double SingularStartAccuracy = 1e-6;
+
+    /// <summary>
+    /// Finest accuracy promised on a section with a singular corner, measured within the default 4 GB budget: a sharp
+    /// keyseat (keyed:d=40,b=12,t1=5,r=0) reaches 1.4e-8 at 1e-7 and 1.6e-8 at 2e-8 but not 1e-8; a sharp 8-spline
+    /// (iso14:8x36x42,r=0) reaches 7.9e-8 at 1e-7 and stops at 7.3e-8 when 2e-8 is asked.
+    /// </summary>
+    internal const double FinestSingularAccuracy = 1e-7;
+
     /// <summary>
     /// Factor on the Richardson error of J: the value Roache recommends for a grid-convergence estimate whose order is
     /// confirmed by three grids (Roache, "Perspective: a method for uniform reporting of grid refinement studies",
@@ -52,13 +62,22 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
         if (sharp.Count > 5)
             warnings.Add(new AnalysisWarning("sharp-reentrant-corner", $"{sharp.Count - 5} more sharp re-entrant corners; model the real fillet radii"));
         bool singular = sharp.Count > 0 || facetWarnings.Count > 0;
+        if (singular && options.Accuracy < FinestSingularAccuracy)
+            throw new SectionTwistException("accuracy-out-of-range", string.Create(System.Globalization.CultureInfo.InvariantCulture,
+                $"{profile.Name}: accuracy {Units.NumberText.Exponent(options.Accuracy, 2)} is finer than the finest available on a section with a sharp re-entrant corner or a faceted curve, " +
+                $"{Units.NumberText.Exponent(FinestSingularAccuracy, 1)} (the stress function is singular there and the graded meshes it needs outgrow the memory budget); " +
+                $"ask for {Units.NumberText.Exponent(FinestSingularAccuracy, 1)} or coarser, or model the real fillet radius (r= on the keyseat and spline templates)"));
 
         var holeArea = profile.Regions.SelectMany(r => r.Loops).Select(l => Math.Abs(l.SignedArea)).ToArray();
         double size = Math.Sqrt(props.Area);
-        double h = Math.Min(0.6 * size * Math.Pow(acc, 0.25), profile.Bounds.Diagonal / 8);
+        // A singular corner caps the order of uniform refinement (J converges as h^(2 pi / w), 4/3 at 270 deg: Strang and
+        // Fix, An Analysis of the Finite Element Method, ch. 8), so a first mesh sized for order 4 spends the budget on
+        // elements far from the corner; below 1e-6 such sections start at the 1e-6 mesh and the graded passes do the rest.
+        double hAccuracy = singular ? Math.Max(acc, SingularStartAccuracy) : acc;
+        double h = Math.Min(0.6 * size * Math.Pow(hAccuracy, 0.25), profile.Bounds.Diagonal / 8);
         MeshFeasibility.Check(profile);
         var budget = AnalysisBudget.For(profile, options, acc, h);
-        TorsionSolution? coarse = null, fine = null, pairC = null, pairF = null;
+        TorsionSolution? coarse = null, fine = null;
         Mesh? coarseMesh = null;
         Func<Point2, double>? sizeField = null;
         double estJ = double.NaN, estT = double.NaN;
@@ -70,43 +89,51 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
         {
             ct.ThrowIfCancellationRequested();
             double f0 = (double)pass / MaxPasses, span = 1.0 / MaxPasses;
-            Mesh mesh;
-            try { mesh = Mesher.Generate(profile, new MeshOptions { MaxEdgeLength = h, MaxTriangles = budget.MaxElements, SizeField = sizeField, MaxArcAngleDegrees = ArcAngle(acc) }, ct); }
-            catch (SectionTwistException e) when (e.Code == "mesh-too-large")
+            // A refinement pass must leave room for its uniform refinement (4 times the elements): a size field that asks
+            // for more is coarsened by the factor that fits (elements grow as 1/h^2) and the pass is meshed again, up to
+            // three times, instead of ending refinement at the previous pair of meshes.
+            int cap = options.EstimateError && pass > 0 ? budget.MaxElements / 4 : budget.MaxElements;
+            Mesh? mesh = null;
+            bool capped = false;
+            for (int attempt = 0; mesh is null; attempt++)
             {
-                if (pass == 0) throw budget.Refusal();
-                warnings.Add(new AnalysisWarning("accuracy-not-reached", $"{budget.Describe()} stopped refinement; results carry the error estimate of the last pass"));
-                break;
-            }
-            if (mesh.ElementCount > budget.MaxElements)
-            {
+                ct.ThrowIfCancellationRequested();
+                int? tooMany = null;
+                try
+                {
+                    var m = Mesher.Generate(profile, new MeshOptions { MaxEdgeLength = h, MaxTriangles = cap, SizeField = sizeField, MaxArcAngleDegrees = ArcAngle(acc) }, ct);
+                    if (m.ElementCount > cap) tooMany = m.ElementCount; else mesh = m;
+                }
+                catch (SectionTwistException e) when (e.Code == "mesh-too-large") { tooMany = -1; }
+                if (mesh is not null) break;
                 // the estimate before meshing is a lower bound; the mesh itself is the measure
-                if (pass == 0) throw budget.Refusal(mesh.ElementCount);
+                if (pass == 0) throw tooMany > 0 ? budget.Refusal(tooMany) : budget.Refusal();
+                if (attempt == 3 || sizeField is null) break;
+                double k = tooMany > 0 ? 1.05 * Math.Sqrt((double)tooMany.Value / cap) : 1.6;
+                var asked = sizeField;
+                sizeField = x => k * asked(x);
+                capped = true;
+            }
+            if (mesh is null)
+            {
                 warnings.Add(new AnalysisWarning("accuracy-not-reached", $"{budget.Describe()} stopped refinement; results carry the error estimate of the last pass"));
                 break;
             }
+            if (pass == 0 && options.EstimateError && 4L * mesh.ElementCount > budget.MaxElements)
+                // The first mesh cannot be refined within the budget: no error estimate is possible, so the accuracy
+                // asked for cannot be promised; refuse it (naming the finest that fits) before any solve.
+                throw budget.Refusal(mesh.ElementCount);
             coarseMesh = mesh;
             Report("solve", f0 + 0.2 * span);
             coarse = TorsionSolver.Solve(coarseMesh, holeArea, ct, SolverTolerance(acc), share);
             share |= options.WarpingIfOpen && coarse.J < 0.5 * props.PolarMoment;
             if (!options.EstimateError) { fine = coarse; break; }
-            if (4L * coarseMesh.ElementCount > budget.MaxElements)
-            {
-                // Keep the last pair of meshes with its estimate; without one the error is unknown.
-                warnings.Add(new AnalysisWarning("accuracy-not-reached", last is null
-                    ? $"{budget.Describe()} stopped the analysis before a refined solve; the error is not estimated"
-                    : $"{budget.Describe()} stopped refinement at an estimated {estJ:G2} for J; results are from the last pair of meshes"));
-                if (last is null) fine = coarse;
-                else (coarse, fine, coarseMesh) = (pairC!, pairF!, pairC!.Mesh);
-                break;
-            }
             Report("refine", f0 + 0.4 * span);
             ct.ThrowIfCancellationRequested();
             var fineMesh = MeshRefinement.Uniform(coarseMesh);
             ct.ThrowIfCancellationRequested();
             fine = TorsionSolver.Solve(fineMesh, holeArea, ct, SolverTolerance(acc), share);
             last = RichardsonEstimate.Compute(coarse, fine, corners, ct);
-            (pairC, pairF) = (coarse, fine);
             p = last.EffectiveOrder;
             estJ = SafetyFactor * last.FineError / fine.J;
             double tc = coarse.MaxGradient / coarse.J, tf = fine.MaxGradient / fine.J;
@@ -117,6 +144,12 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
             // The estimate holds only once the peak is resolved on the coarse mesh (fillet edges of at most 15 deg).
             bool shearOk = singular || (estT <= shearTarget && AdaptiveSizing.PeakResolved(coarse));
             if (estJ <= acc && shearOk) break;
+            if (capped && estJ > acc)
+            {
+                warnings.Add(new AnalysisWarning("accuracy-not-reached",
+                    $"{budget.Describe()} limited the last refinement; J reached an estimated {Units.NumberText.Exponent(estJ, 2)} against the {Units.NumberText.Exponent(acc, 2)} asked"));
+                break;
+            }
             if (pass == MaxPasses - 1)
             {
                 warnings.Add(new AnalysisWarning("accuracy-not-reached",

@@ -36,6 +36,12 @@ public enum Measure
     Power,
     /// <summary>Rotational speed (rad/s).</summary>
     Speed,
-    /// <summary>Bimoment of non-uniform torsion (N·m²).</summary>
+    /// <summary>Forces: bearing reactions, transverse and axial loads (N).</summary>
+    Force,
+    /// <summary>Bimoments of warping torsion (N·m²).</summary>
     Bimoment,
+    /// <summary>Frequencies of vibration and excitation (Hz; SI value in Hz, not rad/s).</summary>
+    Frequency,
+    /// <summary>Mass moments of inertia of rotating parts (kg·m²).</summary>
+    Inertia,
 }

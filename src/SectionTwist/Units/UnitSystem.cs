@@ -18,26 +18,26 @@ public sealed class UnitSystem
     }
 
     private const double Inch = 0.0254, Foot = 0.3048, PoundForce = 4.4482216152605, Psi = PoundForce / (Inch * Inch);
-    private const double Degree = Math.PI / 180;
+    private const double Degree = Math.PI / 180, Pound = 0.45359237;
 
     /// <summary>
-    /// SI with millimetres (<c>SI-mm</c>): mm, mm², mm⁴, mm³, N·m, MPa, GPa, deg, deg/m, MPa per kN·m, N·m/m, N·m/rad, kW,
-    /// rpm. The default for drawings and specs in mm or cm and for shaft files in mm.
+    /// SI with millimetres (<c>SI-mm</c>): mm, mm², mm⁴, mm³, mm⁶, N·m, MPa, GPa, deg, deg/m, MPa per kN·m, N·m/m, N·m/rad,
+    /// kW, rpm, N, N·m², Hz, kg·m². The default for drawings and specs in mm or cm and for shaft files in mm.
     /// </summary>
     public static UnitSystem SiMillimetre { get; } = new("SI-mm", Build(LengthUnit.Millimetre, new("N·m", 1), new("MPa", 1e6), new("GPa", 1e9),
-        new("deg/m", Degree), new("MPa per kN·m", 1e3), new("kW", 1e3), new("N·m²", 1)));
+        new("deg/m", Degree), new("MPa per kN·m", 1e3), new("kW", 1e3), new("N", 1), new("N·m²", 1), new("kg·m²", 1)));
 
-    /// <summary>SI with metres (<c>SI-m</c>): m, m², m⁴, m³, N·m, MPa, GPa, deg, deg/m, MPa per kN·m, N·m/m, N·m/rad, kW, rpm.</summary>
+    /// <summary>SI with metres (<c>SI-m</c>): m, m², m⁴, m³, m⁶, N·m, MPa, GPa, deg, deg/m, MPa per kN·m, N·m/m, N·m/rad, kW, rpm, N, N·m², Hz, kg·m².</summary>
     public static UnitSystem SiMetre { get; } = new("SI-m", Build(LengthUnit.Metre, new("N·m", 1), new("MPa", 1e6), new("GPa", 1e9),
-        new("deg/m", Degree), new("MPa per kN·m", 1e3), new("kW", 1e3), new("N·m²", 1)));
+        new("deg/m", Degree), new("MPa per kN·m", 1e3), new("kW", 1e3), new("N", 1), new("N·m²", 1), new("kg·m²", 1)));
 
     /// <summary>
-    /// US customary (<c>US</c>): in, in², in⁴, in³, lbf·in, psi, Mpsi (10⁶ psi), deg, deg/ft, psi per lbf·in (= 1/in³),
-    /// lbf·in/in, lbf·in/rad, hp (550 ft·lbf/s), rpm.
+    /// US customary (<c>US</c>): in, in², in⁴, in³, in⁶, lbf·in, psi, Mpsi (10⁶ psi), deg, deg/ft, psi per lbf·in (= 1/in³),
+    /// lbf·in/in, lbf·in/rad, hp (550 ft·lbf/s), rpm, lbf, lbf·in², Hz, lb·in² (pound-mass; lb = 0.45359237 kg exactly, NIST SP 811, appendix B).
     /// </summary>
     public static UnitSystem US { get; } = new("US", Build(LengthUnit.Inch, new("lbf·in", PoundForce * Inch), new("psi", Psi), new("Mpsi", 1e6 * Psi),
         new("deg/ft", Degree / Foot), new("psi per lbf·in", 1 / (Inch * Inch * Inch)), new("hp", 745.69987158227022),
-        new("lbf·in²", PoundForce * Inch * Inch)));
+        new("lbf", PoundForce), new("lbf·in²", PoundForce * Inch * Inch), new("lb·in²", Pound * Inch * Inch)));
 
     /// <summary>The three standard systems, in the order <c>--units</c> lists them.</summary>
     public static IReadOnlyList<UnitSystem> Standard { get; } = [SiMillimetre, SiMetre, US];
@@ -60,8 +60,6 @@ public sealed class UnitSystem
     public DisplayUnit WarpingConstant => this[Measure.WarpingConstant];
     /// <summary>Torques.</summary>
     public DisplayUnit Torque => this[Measure.Torque];
-    /// <summary>Bimoments (non-uniform torsion).</summary>
-    public DisplayUnit Bimoment => this[Measure.Bimoment];
     /// <summary>Stresses.</summary>
     public DisplayUnit Stress => this[Measure.Stress];
     /// <summary>Moduli G and E.</summary>
@@ -80,6 +78,14 @@ public sealed class UnitSystem
     public DisplayUnit Power => this[Measure.Power];
     /// <summary>Rotational speed.</summary>
     public DisplayUnit Speed => this[Measure.Speed];
+    /// <summary>Forces.</summary>
+    public DisplayUnit Force => this[Measure.Force];
+    /// <summary>Bimoments.</summary>
+    public DisplayUnit Bimoment => this[Measure.Bimoment];
+    /// <summary>Frequencies (SI value in Hz).</summary>
+    public DisplayUnit Frequency => this[Measure.Frequency];
+    /// <summary>Mass moments of inertia.</summary>
+    public DisplayUnit Inertia => this[Measure.Inertia];
 
     /// <summary>An SI value of <paramref name="measure"/> in this system, without the unit (house number style).</summary>
     public string Format(double si, Measure measure, int digits = 5) => this[measure].Format(si, digits);
@@ -158,7 +164,7 @@ public sealed class UnitSystem
     public override string ToString() => Name;
 
     private static DisplayUnit[] Build(LengthUnit length, DisplayUnit torque, DisplayUnit stress, DisplayUnit modulus, DisplayUnit twistRate,
-        DisplayUnit shearPerTorque, DisplayUnit power, DisplayUnit bimoment)
+        DisplayUnit shearPerTorque, DisplayUnit power, DisplayUnit force, DisplayUnit bimoment, DisplayUnit inertia)
     {
         var u = new DisplayUnit[Enum.GetValues<Measure>().Length];
         SetLength(u, length);
@@ -172,7 +178,10 @@ public sealed class UnitSystem
         u[(int)Measure.RotationalStiffness] = new($"{torque.Symbol}/rad", torque.SiPerUnit);
         u[(int)Measure.Power] = power;
         u[(int)Measure.Speed] = new("rpm", 2 * Math.PI / 60);
+        u[(int)Measure.Force] = force;
         u[(int)Measure.Bimoment] = bimoment;
+        u[(int)Measure.Frequency] = new("Hz", 1);
+        u[(int)Measure.Inertia] = inertia;
         return u;
     }
 

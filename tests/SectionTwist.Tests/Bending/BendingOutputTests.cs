@@ -46,7 +46,7 @@ public class BendingOutputTests
         Assert.Contains("BENDING WITH TORSION", text, StringComparison.Ordinal);
         Assert.Contains("keys and splines", text, StringComparison.Ordinal);
         Assert.Contains("licensed engineering practice", text, StringComparison.Ordinal);
-        string csv = SectionTwist.Bending.BendingCsv.Samples(r.Bending!);
+        string csv = SectionTwist.Bending.BendingCsv.Samples(r.Bending!, doc.Units);
         Assert.Equal(r.Bending!.Samples.Count + 1, csv.Split('\n', StringSplitOptions.RemoveEmptyEntries).Length);
     }
 }

@@ -72,6 +72,25 @@ public class DemoCommandTests(DemoRun demo) : IClassFixture<DemoRun>
             atDefault.EstimatedRelativeError.MaxShear + fine.EstimatedRelativeError.MaxShear + 5e-4, "keyed:d=45,r=0.5 solved at 1e-5");
     }
 
+    [Fact]
+    public void Demo_report_holds_the_dynamics_overload_and_motor_shaft_chapters()
+    {
+        Assert.True(demo.Code == 0, demo.Err);
+        string html = File.ReadAllText(Path.Combine(demo.Folder, "report.html"));
+        foreach (string heading in new[] { "Further shafts beyond the gear stages", "Overload: plastic capacity", "Dynamics: Natural frequencies and mode shapes", "Dynamics: Interference check", "Dynamics: Forced response" })
+            Assert.Contains($">{heading}<", html, StringComparison.Ordinal);
+        Assert.Contains("Interference diagram", html, StringComparison.Ordinal);
+        Assert.Contains("Strain-energy share", html, StringComparison.Ordinal);
+        Assert.Contains("no strain hardening", html, StringComparison.Ordinal);
+        // the gear stage passes 437.68 N*m x 13 / 157 = 36.24 N*m to the motor shaft (power balance of a lossless stage, common practice)
+        double t = 5500 / (120 * 2 * Math.PI / 60) * 13 / 157;
+        Assert.Contains($">{t.ToString("G4", CultureInfo.InvariantCulture)}<", html, StringComparison.Ordinal);
+        // hollow middle 60/40 mm of steel-1045-cd: T_p = 2 pi tau_y (ro^3 - ri^3) / 3 with tau_y = 0.577 S_y (Nadai sand heap; Shigley ch. 5)
+        var steel = SectionTwist.Shaft.ShaftMaterials.All["steel-1045-cd"];
+        double tp = 2 * Math.PI * 0.577 * steel.YieldStrength!.Value * (Math.Pow(0.030, 3) - Math.Pow(0.020, 3)) / 3;
+        Assert.Contains($">{SectionTwist.Units.NumberText.Format(tp, 4)}<", html, StringComparison.Ordinal);
+    }
+
     [SkippableFact]
     public void Demo_report_opens_in_headless_chromium_with_the_key_figures()
     {
@@ -89,7 +108,7 @@ public class DemoCommandTests(DemoRun demo) : IClassFixture<DemoRun>
         Assert.Contains("Section 'input-keyed'", text, StringComparison.Ordinal);
         // the diagram and one contour picture per analysed section, all embedded
         var imgs = Regex.Matches(dom, "<img [^>]*src=\"([^\"]{0,30})").Select(m => m.Groups[1].Value).ToList();
-        Assert.Equal(3, imgs.Count);
+        Assert.Equal(5, imgs.Count);   // shaft diagram, two section pictures, the dynamics chapter's mode shapes and interference diagram
         Assert.All(imgs, s => Assert.StartsWith("data:image/png;base64,", s, StringComparison.Ordinal));
     }
 

@@ -78,6 +78,37 @@ public class HostileDrawingTests
         Assert.Contains(e.Code, new[] { "feature-too-small", "self-intersection" });
     }
 
+    [Fact]
+    public void Hang_analysis_an_ellipse_of_1e_minus_104_inside_the_outline_is_refused_in_seconds()
+    {
+        // campaign finding (dxf input 45405): a hole ELLIPSE with a 1e-104 axis traced to 111 191 stacked chords, all in one
+        // cell of the crossing grid, and the check went quadratic for 7 s of CPU without observing the budget
+        var d = new DxfText().Header().Entities().Circle(0, 0, 20)
+            .P(0, "ELLIPSE").P(8, "0").P(10, 16.66).P(20, 0.0).P(30, 0.0).P(11, 1e-104).P(21, 0.0).P(31, 0.0).P(40, 0.006);
+        var e = Hostile.Refused(() => SectionAnalyzer.Analyze(DxfProfiles.Read(d.End().Bytes(), "speck.dxf", DxfText.Mm).Profile), 30);
+        Assert.Contains(e.Code, new[] { "feature-too-small", "self-intersection", "zero-area", "profile-too-complex" });
+    }
+
+    [Fact]
+    public void Hang_analysis_a_curve_far_smaller_than_the_tolerance_flattens_to_its_quarter_chords()
+    {
+        // the chord bound a (1 - cos(du/2)) of the circle of radius a holds for the ellipse, its image under a contraction
+        var speck = EllipticalArcSegment.Full(new Point2(16.66, 0), 1e-104, 6e-107);
+        Assert.Equal(5, speck.Flatten(4e-6).Count);
+        var thin = EllipticalArcSegment.Full(new Point2(0, 0), 1, 0.01);
+        var pts = thin.Flatten(1e-7);
+        Assert.InRange(pts.Count, 100, 20_000);
+        // every chord midpoint (in parameter) of the curve lies within the tolerance of its chord
+        for (int i = 0; i + 1 < pts.Count; i++)
+        {
+            double t = (i + 0.5) / (pts.Count - 1);
+            var m = thin.PointAt(t);
+            Point2 a = pts[i], b = pts[i + 1], ab = b - a;
+            double dist = Math.Abs(Point2.Cross(ab, m - a)) / ab.Length;
+            Assert.True(dist <= 1e-7 * (1 + 1e-9), $"chord {i}: {dist:E2}");
+        }
+    }
+
     [Theory]
     [InlineData(1e-300)]
     [InlineData(1e-12)]

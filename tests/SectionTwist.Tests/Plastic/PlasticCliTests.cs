@@ -11,7 +11,7 @@ public sealed class PlasticCliTests
         var (exit, output, err) = CliRunner.Run("section", "circle:d=40", "--accuracy", "1e-3", "--plastic", "100MPa", "--plastic-plot", png);
         Assert.True(exit == 0, err);
         // T_p = 2 pi r^3 tau_y / 3 = 1675.5 N*m for r = 20 mm, tau_y = 100 MPa (Nadai sand heap, cone)
-        Assert.Matches(@"fully plastic torque T_p +1675\.5 N\*m", output);
+        Assert.Matches(@"fully plastic torque T_p +1675\.5 N·m", output);
         Assert.Contains("shape factor T_p/T_y", output, StringComparison.Ordinal);
         Assert.Contains("ideal plasticity", output, StringComparison.Ordinal);
         var bytes = File.ReadAllBytes(png);
