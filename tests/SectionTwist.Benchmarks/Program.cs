@@ -8,7 +8,8 @@ namespace SectionTwist.Benchmarks;
 /// single pass with the Math.NET baseline and the ratio, <c>sheet [entities]</c> for the drawing-sheet timing
 /// (<see cref="SheetRun"/>), <c>orders [h] [specs]</c> for observed convergence orders (<see cref="Orders"/>),
 /// <c>estimates [accuracies] [reference] [name filter]</c> for the error estimates against the true errors
-/// (<see cref="EstimateSweep"/>).
+/// (<see cref="EstimateSweep"/>), <c>warping [accuracy] [repeats]</c> for the cost of the warping solve
+/// (<see cref="WarpingRun"/>).
 /// </summary>
 public static class Program
 {
@@ -17,6 +18,11 @@ public static class Program
         if (args.Length > 0 && args[0] == "modes")
         {
             ModalBenchmarks.Quick();
+            return;
+        }
+        if (args.Length > 0 && args[0] == "warping")
+        {
+            WarpingRun.Run(args.Length > 1 ? double.Parse(args[1], CultureInfo.InvariantCulture) : 1e-4, args.Length > 2 ? int.Parse(args[2], CultureInfo.InvariantCulture) : 3);
             return;
         }
         if (args.Length > 0 && args[0] == "quick")

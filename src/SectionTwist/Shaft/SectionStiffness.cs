@@ -17,6 +17,9 @@ public sealed record SectionStiffness(double TorsionConstant, double ShearPerTor
     /// <summary>Largest |sectorial coordinate| of the section, m^2, when the warping function was solved; else null.</summary>
     public double? MaxSectorialCoordinate { get; init; }
 
+    /// <summary>Warping shear factor q_w of the section, m^3 (warping shear = E |phi'''| q_w), when the warping function was solved; else null.</summary>
+    public double? WarpingShearFactor { get; init; }
+
     /// <summary>True for an open thin-walled section whose members are sensitive to restrained warping (see <c>WarpingResult.Classification</c>).</summary>
     public bool WarpingSensitive { get; init; }
 
@@ -56,6 +59,7 @@ public sealed record SectionStiffness(double TorsionConstant, double ShearPerTor
             Warnings = result.Warnings.Select(w => description is null ? w : new Torsion.AnalysisWarning(w.Code, $"section '{description}': {w.Message}")).ToList().AsReadOnly(),
             WarpingConstant = result.Warping?.WarpingConstant,
             MaxSectorialCoordinate = result.Warping?.MaxSectorialCoordinate,
+            WarpingShearFactor = result.Warping?.WarpingShearFactor,
             WarpingSensitive = result.Warping?.Classification == Warping.WarpingClass.WarpingSensitive,
             PolarMoment = result.PolarMoment,
             Profile = result.Profile,

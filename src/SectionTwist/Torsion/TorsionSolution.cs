@@ -22,4 +22,6 @@ internal sealed class TorsionSolution
     public required Geometry.Point2 MaxGradientLocation { get; init; }
     /// <summary>Relative residual of the linear solve.</summary>
     public required double Residual { get; init; }
+    /// <summary>The mesh's Laplacian over all nodes with its fill-reducing order, when the solve was asked to share it (for the warping solve), else null.</summary>
+    public MeshLaplacian? Laplacian { get; init; }
 }

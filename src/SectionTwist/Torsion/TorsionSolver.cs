@@ -14,9 +14,12 @@ internal static class TorsionSolver
 {
     /// <summary>
     /// Solves on <paramref name="mesh"/>; <paramref name="holeArea"/> gives the exact area enclosed by each loop (used for
-    /// holes); <paramref name="tolerance"/> is the relative residual asked of an iterative linear solve.
+    /// holes); <paramref name="tolerance"/> is the relative residual asked of an iterative linear solve. With
+    /// <paramref name="shareLaplacian"/> the matrix is assembled over all nodes and kept with its fill-reducing order
+    /// (<see cref="TorsionSolution.Laplacian"/>) for the warping solve on the same mesh.
     /// </summary>
-    public static TorsionSolution Solve(Mesh mesh, double[] holeArea, CancellationToken ct = default, double tolerance = SpdSolver.DefaultTolerance)
+    public static TorsionSolution Solve(Mesh mesh, double[] holeArea, CancellationToken ct = default, double tolerance = SpdSolver.DefaultTolerance,
+        bool shareLaplacian = false)
     {
         int nNodes = mesh.NodeCount, nEl = mesh.ElementCount;
         var loops = mesh.Loops;
@@ -34,31 +37,30 @@ internal static class TorsionSolver
         var f = new double[n];
         for (int l = 0; l < loops.Length; l++) if (holeDof[l] >= 0) f[holeDof[l]] += 2 * holeArea[l];
 
-        var trip = new TripletMatrix(n, nEl * 36);
-        Span<double> ke = stackalloc double[36];
-        Span<double> fe = stackalloc double[6];
         Span<double> xe = stackalloc double[6];
         Span<double> ye = stackalloc double[6];
-        for (int e = 0; e < nEl; e++)
+        MeshLaplacian? laplacian = null;
+        CscMatrix k;
+        ISpdSolver? solver = null;
+        if (shareLaplacian)
         {
-            if ((e & 4095) == 0) ct.ThrowIfCancellationRequested();
-            Gather(mesh, e, xe, ye);
-            ElementMatrices(xe, ye, ke, fe);
-            for (int a = 0; a < 6; a++)
+            var load = new double[6 * nEl];
+            laplacian = MeshLaplacian.Assemble(mesh, load, ct);
+            for (int q = 0; q < load.Length; q++)
             {
-                int da = dof[mesh.Elements[6 * e + a]];
-                if (da < 0) continue;
-                f[da] += fe[a];
-                for (int b = 0; b < 6; b++)
-                {
-                    int db = dof[mesh.Elements[6 * e + b]];
-                    if (db >= 0) trip.Add(da, db, ke[6 * a + b]);
-                }
+                int d = dof[mesh.Elements[q]];
+                if (d >= 0) f[d] += load[q];
             }
+            if (n > 0) (k, solver) = laplacian.System(dof, n, tolerance, ct);
+            else k = new CscMatrix(0, [0], [], []);
         }
-        var k = trip.ToCsc();
+        else
+        {
+            k = AssembleReduced(mesh, dof, n, f, ct);
+            if (n > 0) solver = SpdSolver.Create(k, tolerance, ct);
+        }
         var u = new double[n];
-        if (n > 0) SpdSolver.Create(k, tolerance, ct).Solve(f, u);
+        solver?.Solve(f, u);
         double residual = n > 0 ? k.RelativeResidual(u, f) : 0;
 
         var phi = new double[nNodes];
@@ -82,8 +84,37 @@ internal static class TorsionSolver
         return new TorsionSolution
         {
             Mesh = mesh, Phi = phi, LoopValue = loopValue, J = j, RegionJ = regionJ, BoundaryFlux = flux,
-            MaxGradient = maxG, MaxGradientLocation = where, Residual = residual,
+            MaxGradient = maxG, MaxGradientLocation = where, Residual = residual, Laplacian = laplacian,
         };
+    }
+
+    /// <summary>Assembles the matrix of the unknowns <paramref name="dof"/> directly (Dirichlet nodes dropped, hole nodes merged) and adds the loads to <paramref name="f"/>.</summary>
+    private static CscMatrix AssembleReduced(Mesh mesh, int[] dof, int n, double[] f, CancellationToken ct)
+    {
+        int nEl = mesh.ElementCount;
+        var trip = new TripletMatrix(n, nEl * 36);
+        Span<double> ke = stackalloc double[36];
+        Span<double> fe = stackalloc double[6];
+        Span<double> xe = stackalloc double[6];
+        Span<double> ye = stackalloc double[6];
+        for (int e = 0; e < nEl; e++)
+        {
+            if ((e & 4095) == 0) ct.ThrowIfCancellationRequested();
+            Gather(mesh, e, xe, ye);
+            ElementMatrices(xe, ye, ke, fe);
+            for (int a = 0; a < 6; a++)
+            {
+                int da = dof[mesh.Elements[6 * e + a]];
+                if (da < 0) continue;
+                f[da] += fe[a];
+                for (int b = 0; b < 6; b++)
+                {
+                    int db = dof[mesh.Elements[6 * e + b]];
+                    if (db >= 0) trip.Add(da, db, ke[6 * a + b]);
+                }
+            }
+        }
+        return trip.ToCsc();
     }
 
     internal static void Gather(Mesh mesh, int e, Span<double> xe, Span<double> ye)
