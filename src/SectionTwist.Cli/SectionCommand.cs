@@ -10,7 +10,7 @@ internal sealed class SectionCommand : ICommand
     public string Name => "section";
     public string Summary => "torsion constant J, peak shear per torque and area properties of a cross-section";
     public string Usage => $$"""
-        sectiontwist section SOURCE [SOURCE ...] [--accuracy REL] [--unit U] [--units SYSTEM] [drawing options] [--json] [--warping] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR] [--plastic MATERIAL|STRESS [--plastic-plot FILE.png|svg]]
+        sectiontwist section SOURCE [SOURCE ...] [--accuracy REL] [--unit U] [--units SYSTEM] [drawing options] [--json] [--warping] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR] [--plastic MATERIAL|STRESS [--plastic-plot FILE.png|svg]] [--material PART=MATERIAL,... [--reference PART|MATERIAL]]
           SOURCE      a template spec such as circle:d=40, keyed:d=40, rect:b=60,h=20, a drawing file (.dxf),
                       a point list (.csv, .pts) or anything a plugin reads; several SOURCEs (or a wildcard
                       such as drawings/*.dxf) are analysed on all cores and printed as one table (batch)
@@ -34,6 +34,10 @@ internal sealed class SectionCommand : ICommand
                       shape factor and the torque-twist curve, for a material's shear yield (e.g. s355) or a
                       shear yield stress (e.g. 140MPa)
           --plastic-plot  write the plastic zone at each curve point (PNG or SVG)
+          --material  a composite section: each part (a drawing layer, or a part of a composite template such as
+                      sleeved:d=40,t=5 with parts core and sleeve) and its library material, e.g.
+                      --material core=steel-1045-cd,sleeve=brass; the parts are taken as perfectly bonded
+          --reference the material the equivalent J refers to: a part or a library material (default: the first part's)
           --plugins   load profile-source plugins (*.dll) from DIR; the SECTIONTWIST_PLUGINS environment
                       variable may list more folders (separated by the system path separator)
         """;
@@ -64,13 +68,15 @@ internal sealed class SectionCommand : ICommand
         var plasticYield = args.Option("plastic") is { } py ? PlasticCli.ParseYield(py) : ((double, string)?)null;
         string? plasticPlot = args.Option("plastic-plot");
         if (plasticPlot is not null && plasticYield is null) throw new UsageException("--plastic-plot needs --plastic MATERIAL|STRESS");
+        var materialText = args.Options("material");
+        string? referenceText = args.Option("reference");
         bool csv = args.Flag("csv");
         int? jobs = args.Int("jobs");
         if (args.Positional.Count == 0) throw new UsageException("give a SOURCE (a template spec or a .dxf file)");
         args.EnsureAllUsed();
         if (SectionBatchCli.IsBatch(args.Positional, csv))
         {
-            string? single = plot is not null ? "--plot" : dxf is not null ? "--dxf" : plasticYield is not null ? "--plastic" : warping ? "--warping" : torque is not null ? "--torque" : null;
+            string? single = plot is not null ? "--plot" : dxf is not null ? "--dxf" : plasticYield is not null ? "--plastic" : warping ? "--warping" : torque is not null ? "--torque" : materialText.Count > 0 ? "--material" : referenceText is not null ? "--reference" : null;
             if (single is not null) throw new UsageException($"{single} works on one SOURCE; run it for each source on its own");
             if (json && csv) throw new UsageException("choose one of --json and --csv");
             if (jobs is < 1 or > 1024) throw new UsageException($"--jobs {jobs}: give the number of analyses at once, from 1 to 1024");
@@ -79,6 +85,14 @@ internal sealed class SectionCommand : ICommand
             return SectionBatchCli.Run(ctx, SectionBatchCli.Expand(args.Positional), srcOptions with { Notes = null }, ctx.Analysis(accuracy), units, form, jobs ?? 0);
         }
         if (jobs is not null) throw new UsageException("--jobs applies to a batch of several SOURCEs");
+        if (materialText.Count > 0 || Profiles.ProfileTemplates.IsComposite(args.Positional[0]))
+        {
+            if (warping || plasticYield is not null || plot is not null || dxf is not null)
+                throw new UsageException("--warping, --plastic, --plot and --dxf are not available for composite sections yet; leave them out");
+            LoadPlugins(plugins);
+            return RunComposite(ctx, args.Positional[0], CompositeCli.ParseMaterials(materialText), referenceText, srcOptions, accuracy, json, units, drawingNotes);
+        }
+        if (referenceText is not null) throw new UsageException("--reference needs --material (a composite section)");
         LoadPlugins(plugins);
         if (plot is not null) OutputPaths.CheckFile(plot, "--plot");
         if (dxf is not null) OutputPaths.CheckFile(dxf, "--dxf");
@@ -103,6 +117,22 @@ internal sealed class SectionCommand : ICommand
             SectionText.Write(ctx.Out, result, source, units);
             if (plastic is not null) PlasticCli.WriteText(ctx.Out, plastic, plasticYield!.Value.Item2, units);
         }
+        return 0;
+    }
+
+    private static int RunComposite(CliContext ctx, string source, IReadOnlyList<KeyValuePair<string, Shaft.Material>> materials, string? referenceText,
+        ProfileSourceOptions srcOptions, double accuracy, bool json, UnitSystem? units, List<string> drawingNotes)
+    {
+        var section = Composite.CompositeSources.Load(source, materials, srcOptions);
+        var reference = CompositeCli.Reference(referenceText, section);
+        Composite.CompositeResult result;
+        using (var progress = new ProgressLine(ctx, $"section {source}"))
+        using (progress.Pulse("composite torsion"))
+            result = Composite.CompositeAnalyzer.Analyze(section, reference, ctx.Analysis(accuracy), ctx.Cancellation);
+        if (drawingNotes.Count > 0)
+            result = result with { Warnings = drawingNotes.Select(n => new AnalysisWarning("drawing", n)).Concat(result.Warnings).ToList().AsReadOnly() };
+        if (json) ctx.Out.WriteLine(CompositeCli.WriteJson(result, source));
+        else CompositeCli.WriteText(ctx.Out, result, source, units);
         return 0;
     }
 

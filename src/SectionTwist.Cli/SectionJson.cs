@@ -59,10 +59,14 @@ internal static class SectionJson
             Num(w, "warpingRatio", wr.WarpingRatio);
             w.WriteString("classification", wr.Classification == Warping.WarpingClass.WarpingSensitive ? "warping-sensitive" : "warping-negligible");
             Num(w, "steelWarpingLength", wr.SteelWarpingLength);
+            Num(w, "warpingShearFactor", wr.WarpingShearFactor);
+            Pt(w, "warpingShearFactorLocation", wr.WarpingShearFactorLocation);
+            w.WriteBoolean("warpingShearUnbounded", double.IsPositiveInfinity(wr.EstimatedError.WarpingShearFactor));
             w.WriteStartObject("estimatedError");
             Num(w, "shearCentre", wr.EstimatedError.ShearCentre);
             Num(w, "warpingConstant", wr.EstimatedError.WarpingConstant);
             Num(w, "maxSectorialCoordinate", wr.EstimatedError.MaxSectorialCoordinate);
+            Num(w, "warpingShearFactor", wr.EstimatedError.WarpingShearFactor);
             w.WriteEndObject();
             w.WriteEndObject();
         }

@@ -47,6 +47,10 @@ internal static class SectionText
         w.WriteLine($"  shear centre (x, y)       ({L(wr.ShearCentre.X)}, {L(wr.ShearCentre.Y)}) {u.Length.Symbol}   est. error {E(e.ShearCentre, u.Length)}");
         w.WriteLine($"  warping constant Iw       {u.WarpingConstant.Format(wr.WarpingConstant, 6),14} {u.WarpingConstant.Symbol}   est. error {E(e.WarpingConstant, u.WarpingConstant)} (about the shear centre)");
         w.WriteLine($"  max |sectorial coord.|    {u.Area.Format(wr.MaxSectorialCoordinate, 6),14} {u.Area.Symbol} at ({L(wr.MaxSectorialCoordinateLocation.X)}, {L(wr.MaxSectorialCoordinateLocation.Y)}) {u.Length.Symbol}   est. error {E(e.MaxSectorialCoordinate, u.Area)}");
+        string shear = double.IsPositiveInfinity(e.WarpingShearFactor)
+            ? "unbounded (a sharp re-entrant corner; model the real fillet radius)"
+            : $"{u.SectionModulus.Format(wr.WarpingShearFactor, 6),14} {u.SectionModulus.Symbol} at ({L(wr.WarpingShearFactorLocation.X)}, {L(wr.WarpingShearFactorLocation.Y)}) {u.Length.Symbol}   est. error {E(e.WarpingShearFactor, u.SectionModulus)}";
+        w.WriteLine($"  warping shear factor q_w  {shear}   (warping shear = E |phi'''| q_w)");
         w.WriteLine($"  J from warping function   {u.SecondMoment.Format(wr.TorsionConstantUpperBound, 6),14} {u.SecondMoment.Symbol} (upper bound; the J above is the lower-bound solve, extrapolated)");
         w.WriteLine($"  warping length a (steel)  {u.Length.Format(wr.SteelWarpingLength, 6),14} {u.Length.Symbol}   a = sqrt(E Iw / (G J)), E/G = 2.6");
         string verdict = wr.Classification == Warping.WarpingClass.WarpingSensitive

@@ -128,6 +128,9 @@ internal sealed class ShaftCommand : ICommand
                 ShaftResultChapter.SafetyFactor(s).Replace('–', '-'), u.TwistRate.Format(s.MaxTwistRate, 4), s.Check == "ok" ? "ok" : "!! " + s.Check.ToUpperInvariant()]);
         }
         Table(w, sg);
+        foreach (var s in r.Segments.Where(s => s.MaterialChecks.Count > 0))
+            w.WriteLine($"  composite {s.Label}: " + string.Join("; ", s.MaterialChecks.Select(c =>
+                $"{c.Material.Name} max shear {u.Stress.Text(c.MaxShear, 4)}, {(c.Material.LimitShear is { } l ? $"{c.Material.LimitBasis} {u.Stress.Text(l, 4)}, FoS {(c.SafetyFactor is { } f ? double.IsPositiveInfinity(f) ? "-" : NumberText.Fixed(f, 2) : "-")}" : "no limit")}{(c.Exceeds ? " !! OVER" : "")}")));
         w.WriteLine();
 
         if (r.Springs.Count > 0)

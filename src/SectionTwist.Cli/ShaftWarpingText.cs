@@ -1,5 +1,6 @@
 using SectionTwist.Shaft;
 using SectionTwist.Units;
+using SectionTwist.WarpingTorsion;
 
 namespace SectionTwist.Cli;
 
@@ -10,25 +11,33 @@ internal static class ShaftWarpingText
     {
         if (r.WarpingWarnings.Count == 0 && r.Warping is null) return;
         var u = doc.Units;
-        string F(double v, string f = "G4") => NumberText.Styled(v, f);
         if (r.Warping is { } m)
         {
             w.WriteLine("restrained warping (non-uniform torsion, Vlasov): these rotations replace the free-warping ones above");
             w.WriteLine($"  station        rotation [{u.Angle.Symbol}]   rate of twist [{u.TwistRate.Symbol}]   reaction torque [{u.Torque.Symbol}]   bimoment reaction [{u.Bimoment.Symbol}]");
             foreach (var s in m.Stations)
-                w.WriteLine($"  {s.Name,-14} {u.Angle.Format(s.Rotation, "F4"),14}   {u.TwistRate.Format(s.RateOfTwist, "G4"),21}   {u.Torque.Format(s.ReactionTorque, "G4"),20}   {u.Bimoment.Format(s.ReactionBimoment, "G4"),25}");
-            w.WriteLine($"  segment        a [{u.Length.Symbol}]   max bimoment [{u.Bimoment.Symbol}]   max warping normal stress [{u.Stress.Symbol}]   max Saint-Venant shear [{u.Stress.Symbol}]   warping stress / yield");
-            for (int i = 0; i < m.Segments.Count; i++)
+                w.WriteLine($"  {s.Name,-14} {u.Angle.Format(s.Rotation, 5),14}   {u.TwistRate.Format(s.RateOfTwist, 4),21}   {u.Torque.Format(s.ReactionTorque, 4),20}   {u.Bimoment.Format(NumberText.Clean(s.ReactionBimoment, Scale(m)), 4),25}");
+            w.WriteLine($"  segment        a [{u.Length.Symbol}]   max bimoment [{u.Bimoment.Symbol}]   max warping normal stress [{u.Stress.Symbol}]   warping stress / yield");
+            foreach (var s in m.Segments)
             {
-                var s = m.Segments[i];
                 double? sy = doc.Model.Segments.FirstOrDefault(x => x.Label == s.Label)?.Material.YieldStrength;
-                string ratio = sy is { } y && y > 0 ? F(s.MaxWarpingNormalStress / y, "F2") + (s.MaxWarpingNormalStress > y ? "  !! OVER YIELD" : "") : "- (no yield given)";
-                w.WriteLine($"  {s.Label,-14} {u.Length.Format(s.WarpingLength, "G4"),7}   {u.Bimoment.Format(s.MaxBimoment, "G4"),20}   {u.Stress.Format(s.MaxWarpingNormalStress, "G4"),30}   {u.Stress.Format(s.MaxSaintVenantShear, "G4"),27}   {ratio}");
+                string ratio = sy is { } y && y > 0 ? NumberText.Fixed(s.MaxWarpingNormalStress / y, 2) + (s.MaxWarpingNormalStress > y ? "  !! OVER YIELD" : "") : "- (no yield given)";
+                w.WriteLine($"  {s.Label,-14} {u.Length.Format(s.WarpingLength, 4),7}   {u.Bimoment.Format(s.MaxBimoment, 4),20}   {u.Stress.Format(s.MaxWarpingNormalStress, 4),30}   {ratio}");
             }
-            w.WriteLine("  the warping normal stress adds to bending stresses at the flange tips (not combined here: check the sum against the steel design code);");
-            w.WriteLine("  the shear check above uses the whole torque as Saint-Venant torque");
+            w.WriteLine($"  segment        Saint-Venant shear [{u.Stress.Symbol}]   warping shear [{u.Stress.Symbol}]   combined shear [{u.Stress.Symbol}]   bending + warping normal [{u.Stress.Symbol}]");
+            foreach (var s in m.Segments)
+            {
+                string combinedNormal = s.MaxCombinedNormalStress is { } c ? u.Stress.Format(c, 4) : "- (no bending block)";
+                w.WriteLine($"  {s.Label,-14} {Shear(u, s, s.MaxSaintVenantShear),25}   {Shear(u, s, s.MaxWarpingShear),20}   {Shear(u, s, s.MaxCombinedShear),21}   {combinedNormal,28}");
+            }
+            w.WriteLine("  combined shear: Saint-Venant plus warping peak (a bound); bending + warping normal: the two magnitudes added at the same");
+            w.WriteLine("  position (a bound, exact where both peak at the flange tips); the shear check above uses the whole torque as Saint-Venant torque");
         }
         foreach (var text in r.WarpingWarnings) w.WriteLine($"warning: {text}");
         w.WriteLine();
     }
+
+    private static string Shear(UnitSystem u, WarpingSegmentResult s, double value) => s.ShearUnbounded && value > 0 ? "unbounded" : u.Stress.Format(value, 4);
+
+    private static double Scale(WarpingMemberResult m) => m.Segments.Count == 0 ? 0 : m.Segments.Max(s => s.MaxBimoment);
 }

@@ -62,8 +62,8 @@ internal sealed class VerifyCommand : ICommand
             {
                 w.WriteStartObject();
                 w.WriteString("name", o.Case.Name);
-                w.WriteString("quantity", o.Case.Quantity == VerifiedQuantity.TorsionConstant ? "torsionConstant" : "maxShearPerTorque");
-                w.WriteString("unit", o.Case.Quantity == VerifiedQuantity.TorsionConstant ? "m^4" : "1/m^3");
+                w.WriteString("quantity", o.Case.QuantityKey);
+                w.WriteString("unit", o.Case.UnitAscii);
                 SectionJson.Num(w, "computed", o.Computed);
                 SectionJson.Num(w, "reference", o.Case.Reference);
                 SectionJson.Num(w, "relativeError", o.RelativeError);

@@ -9,7 +9,8 @@ namespace SectionTwist.Benchmarks;
 /// (<see cref="SheetRun"/>), <c>orders [h] [specs]</c> for observed convergence orders (<see cref="Orders"/>),
 /// <c>estimates [accuracies] [reference] [name filter]</c> for the error estimates against the true errors
 /// (<see cref="EstimateSweep"/>), <c>answer [runs]</c> for the time to an accurate answer, former against current
-/// settings (<see cref="AnswerRun"/>).
+/// settings (<see cref="AnswerRun"/>), <c>warping [accuracy] [repeats]</c> for the cost of the warping solve
+/// (<see cref="WarpingRun"/>).
 /// </summary>
 public static class Program
 {
@@ -23,6 +24,11 @@ public static class Program
         if (args.Length > 0 && args[0] == "answer")
         {
             AnswerRun.Run(args.Length > 1 ? int.Parse(args[1], CultureInfo.InvariantCulture) : 5);
+            return;
+        }
+        if (args.Length > 0 && args[0] == "warping")
+        {
+            WarpingRun.Run(args.Length > 1 ? double.Parse(args[1], CultureInfo.InvariantCulture) : 1e-4, args.Length > 2 ? int.Parse(args[2], CultureInfo.InvariantCulture) : 3);
             return;
         }
         if (args.Length > 0 && args[0] == "quick")

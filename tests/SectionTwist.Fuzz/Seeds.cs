@@ -72,6 +72,17 @@ public static class Seeds
                     twistLimit: 0.25 deg/m
                     """));
                 list.Add(Text("""
+                    units: {length: mm, torque: N*m}
+                    materials:
+                      bush: {G: 37 GPa, allowableShear: 20 MPa}
+                    sections:
+                      s: {template: "sleeved:d=40,t=5", materials: {core: steel-1045-cd, sleeve: bush}}
+                    stations: [{name: A, at: 0}, {name: B, after: 300}]
+                    segments: [{from: A, to: B, section: s, material: steel-1045-cd}]
+                    loads: [{at: B, torque: 900}]
+                    supports: {fixed: [A]}
+                    """));
+                list.Add(Text("""
                     units: {length: in, torque: lbf*in}
                     stations: [{name: M, at: 0}, {name: G, at: 14}]
                     segments: [{from: M, to: G, section: {template: "keyed:d=1.5in"}, material: steel-1045-cd}]

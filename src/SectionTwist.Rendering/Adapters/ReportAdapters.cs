@@ -15,7 +15,7 @@ public static class ReportAdapters
     {
         ArgumentNullException.ThrowIfNull(outcomes);
         return outcomes.Select(o => new VerificationRow(o.Case.Name, o.Computed, o.Case.Reference,
-            o.Case.Quantity == VerifiedQuantity.TorsionConstant ? "m⁴" : "1/m³",
+            o.Case.UnitSymbol,
             (o.Computed - o.Case.Reference) / o.Case.Reference, o.Tolerance, o.Case.Source, o.Passed)).ToList();
     }
 

@@ -41,6 +41,8 @@ public sealed class ShaftSectionCatalog
     public SectionStiffness Resolve(SectionSource source)
     {
         ArgumentNullException.ThrowIfNull(source);
+        // composite sections: the numbers only (the report has no composite pictures yet)
+        if (source.Materials is not null) return ShaftSections.Resolve(source, _options, _notes, _ct);
         var progress = Progress is { } report ? new ProgressSink(p => report(source.Name, p)) : null;
         var (r, templateOuter) = ShaftSections.Analyze(source, _options, _notes, _ct, progress);
         // a template knows its outer size; a drawing's is the larger side of its bounds

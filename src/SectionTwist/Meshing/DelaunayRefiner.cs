@@ -36,9 +36,13 @@ internal sealed partial class DelaunayRefiner
     private int[] _vCurve = new int[64], _vCorner = new int[64];
     private double[] _vT = new double[64];
 
-    public DelaunayRefiner(Profile profile, MeshOptions options, CancellationToken ct)
+    // interface loops inside the domain (composite sections): constrained in the mesh, material on both sides
+    private readonly IReadOnlyList<(Loop Loop, int Region)> _interfaces;
+
+    public DelaunayRefiner(Profile profile, MeshOptions options, CancellationToken ct, IReadOnlyList<(Loop Loop, int Region)>? interfaces = null)
     {
         _profile = profile; _opt = options; _ct = ct;
+        _interfaces = interfaces ?? [];
         _diag = profile.Bounds.Diagonal;
         _floor = 1e-7 * _diag;
         T = new Triangulation(profile.Bounds);
@@ -116,6 +120,8 @@ internal sealed partial class DelaunayRefiner
             loops.Add(new MeshLoop(r, -1, reg.Outer));
             for (int h = 0; h < reg.Holes.Count; h++) loops.Add(new MeshLoop(r, h, reg.Holes[h]));
         }
+        // interface loops last, counter-clockwise: the flood of ClassifyRegions fills their inside with their region
+        foreach (var (loop, region) in _interfaces) loops.Add(new MeshLoop(region, -1, loop.Oriented(counterClockwise: true)) { IsInterface = true });
         Loops = loops.ToArray();
         var next = new List<int>(); var prev = new List<int>();
         _loopLen = new double[Loops.Length];
@@ -152,7 +158,9 @@ internal sealed partial class DelaunayRefiner
     {
         for (int c = 0; c < Curve.Length; c++)
         {
-            if (_cornerAngle[c] <= Math.PI + 0.05) continue;
+            // a corner of an interface loop is re-entrant for the material on one side or the other
+            bool iface = Loops[_curveLoop[c]].IsInterface && Math.Abs(_cornerAngle[c] - Math.PI) > 0.05;
+            if (_cornerAngle[c] <= Math.PI + 0.05 && !iface) continue;
             Point2 p = Curve[c].Start;
             Size.AddSource(p.X, p.Y, 0.125 * Size.At(p.X, p.Y));
         }

@@ -32,6 +32,18 @@ internal sealed class Mesh
     /// <summary>For each node the loop it lies on, or -1 for an interior node.</summary>
     public int[] NodeLoop { get; }
 
+    /// <summary>
+    /// Zone of each element: elements joined without crossing a boundary or interface edge share a zone (composite
+    /// sections give each zone one material).
+    /// </summary>
+    public int[] ElementZone { get; init; } = [];
+
+    /// <summary>Centroid of the largest element of each zone (a point well inside it, to find its material).</summary>
+    public Point2[] ZoneSample { get; init; } = [];
+
+    /// <summary>Interface edges (composite sections): A - Mid - B on the interface curve, oriented along the interface loop.</summary>
+    public MeshBoundaryEdge[] InterfaceEdges { get; init; } = [];
+
     public int NodeCount => X.Length;
     public int ElementCount => Elements.Length / 6;
 
@@ -50,4 +62,7 @@ internal readonly record struct MeshBoundaryEdge(int A, int Mid, int B, int Loop
 internal sealed record MeshLoop(int Region, int Hole, Loop Geometry)
 {
     public bool IsHole => Hole >= 0;
+
+    /// <summary>An interface between two materials inside the region (composite sections), not a boundary.</summary>
+    public bool IsInterface { get; init; }
 }

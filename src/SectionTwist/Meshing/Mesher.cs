@@ -15,12 +15,21 @@ internal static class Mesher
         Generate(profile, options, out _, ct);
 
     /// <summary>As <see cref="Generate(Profile, MeshOptions, CancellationToken)"/>, also returning the refiner's counters.</summary>
-    internal static Mesh Generate(Profile profile, MeshOptions options, out MesherStats stats, CancellationToken ct = default)
+    internal static Mesh Generate(Profile profile, MeshOptions options, out MesherStats stats, CancellationToken ct = default) =>
+        Generate(profile, [], options, out stats, ct);
+
+    /// <summary>
+    /// As <see cref="Generate(Profile, MeshOptions, CancellationToken)"/> with interface loops inside the regions
+    /// (composite sections): each is kept as a chain of element edges with curved mid-side nodes on the true curve, and
+    /// <see cref="Mesh.ElementZone"/> tells the pieces between them apart. The loops must neither touch nor cross the
+    /// boundary or each other (checked by the caller).
+    /// </summary>
+    internal static Mesh Generate(Profile profile, IReadOnlyList<(Loop Loop, int Region)> interfaces, MeshOptions options, out MesherStats stats, CancellationToken ct = default)
     {
         ArgumentNullException.ThrowIfNull(profile);
         ArgumentNullException.ThrowIfNull(options);
         MeshFeasibility.Check(profile);
-        var refiner = new DelaunayRefiner(profile, options, ct);
+        var refiner = new DelaunayRefiner(profile, options, ct, interfaces);
         refiner.Run();
         // A boundary mid-side node far off its chord can fold a curved element (Jacobian sign change): split those
         // boundary edges and refine again until every curved element has a positive Jacobian.

@@ -37,6 +37,7 @@ internal static class P2MeshBuilder
         var elements = new int[6 * ne];
         var region = new int[ne];
         var boundary = new List<(MeshBoundaryEdge Edge, int Curve, int Chord)>();
+        var interfaces = new List<(MeshBoundaryEdge Edge, int Curve, int Chord)>();
         ReadOnlySpan<int> midEdge = [2, 0, 1]; // mid-sides of edges 01, 12, 20 lie opposite vertices 2, 0, 1
         for (int k = 0; k < ne; k++)
         {
@@ -60,7 +61,7 @@ internal static class P2MeshBuilder
                         double tm = 0.5 * (r.ChT0[s] + r.ChT1[s]);
                         Point2 p = r.Curve[r.ChCurve[s]].PointAt(tm);
                         xs.Add(p.X); ys.Add(p.Y);
-                        boundary.Add((new MeshBoundaryEdge(nodeOf[r.ChA[s]], id, nodeOf[r.ChB[s]], r.LoopOfChord(s),
+                        (r.Loops[r.LoopOfChord(s)].IsInterface ? interfaces : boundary).Add((new MeshBoundaryEdge(nodeOf[r.ChA[s]], id, nodeOf[r.ChB[s]], r.LoopOfChord(s),
                             r.Curve[r.ChCurve[s]], r.ChT0[s], r.ChT1[s]), r.ChCurve[s], s));
                     }
                     else
@@ -80,7 +81,7 @@ internal static class P2MeshBuilder
         invertedChords = [];
         var curvedMid = new bool[x.Length];
         var chordOfMid = new Dictionary<int, int>();
-        foreach (var (e, cv, s) in boundary)
+        foreach (var (e, cv, s) in boundary.Concat(interfaces))
             if (r.Curve[cv] is not LineSegment) { curvedMid[e.Mid] = true; chordOfMid[e.Mid] = s; }
         for (int k = 0; k < ne; k++)
         {
@@ -89,6 +90,49 @@ internal static class P2MeshBuilder
             for (int i = 3; i < 6; i++)
                 if (chordOfMid.TryGetValue(elements[6 * k + i], out int s)) invertedChords.Add(s);
         }
-        return new Mesh(x, y, elements, region, boundary.Select(p => p.Edge).ToArray(), r.Loops);
+        var loops = r.Loops.Where(l => !l.IsInterface).ToArray(); // interface loops come last: boundary loop numbers unchanged
+        var (zone, samples) = Zones(T, order, x, y, elements);
+        return new Mesh(x, y, elements, region, boundary.Select(p => p.Edge).ToArray(), loops)
+        {
+            ElementZone = zone, ZoneSample = samples, InterfaceEdges = interfaces.Select(p => p.Edge).ToArray(),
+        };
+    }
+
+    /// <summary>Floods the domain triangles without crossing a constrained edge: one zone per piece between interfaces.</summary>
+    private static (int[] Zone, Point2[] Samples) Zones(Triangulation T, int[] order, double[] x, double[] y, int[] elements)
+    {
+        int ne = order.Length;
+        var elementOf = new int[T.TriangleCount];
+        Array.Fill(elementOf, -1);
+        for (int k = 0; k < ne; k++) elementOf[order[k]] = k;
+        var zone = new int[ne];
+        Array.Fill(zone, -1);
+        var samples = new List<Point2>();
+        var best = new List<double>();
+        var stack = new Stack<int>();
+        for (int k0 = 0; k0 < ne; k0++)
+        {
+            if (zone[k0] >= 0) continue;
+            int z = samples.Count;
+            samples.Add(default); best.Add(-1);
+            zone[k0] = z; stack.Push(k0);
+            while (stack.Count > 0)
+            {
+                int k = stack.Pop();
+                int a = elements[6 * k], b = elements[6 * k + 1], c = elements[6 * k + 2];
+                double area = (x[b] - x[a]) * (y[c] - y[a]) - (y[b] - y[a]) * (x[c] - x[a]);
+                if (area > best[z]) { best[z] = area; samples[z] = new Point2((x[a] + x[b] + x[c]) / 3, (y[a] + y[b] + y[c]) / 3); }
+                int t = order[k];
+                for (int i = 0; i < 3; i++)
+                {
+                    int code = 3 * t + i;
+                    if (T.Seg[code] >= 0 || T.N[code] < 0) continue;
+                    int kn = elementOf[T.N[code] / 3];
+                    if (kn < 0 || zone[kn] >= 0) continue;
+                    zone[kn] = z; stack.Push(kn);
+                }
+            }
+        }
+        return (zone, samples.ToArray());
     }
 }

@@ -49,8 +49,16 @@ internal static class HollowSectionTemplates
         double small = Math.Min(height, width);
         if (2 * t >= small)
             throw a.Error("t", $"wall {a.Show(t)} is not less than half the width {a.Show(small)}: no hole is left; use t < {a.Show(small / 2)} (or rect for a solid bar)");
-        var (ro0, ri0) = DefaultRadii(t, a.Choice("form", "hot") == "cold");
+        bool cold = a.Choice("form", "hot") == "cold";
+        var (ro0, ri0) = DefaultRadii(t, cold);
         double ro = a.LengthOrZero("ro", ro0), ri = a.LengthOrZero("ri", ri0);
+        if (!a.Has("ro") || !a.Has("ri"))
+        {
+            string which = !a.Has("ro") && !a.Has("ri") ? $"corner radii ro = {a.Show(ro)}, ri = {a.Show(ri)}"
+                : !a.Has("ro") ? $"outer corner radius ro = {a.Show(ro)}" : $"inner corner radius ri = {a.Show(ri)}";
+            a.DefaultFromMemory(!a.Has("ro") ? "ro" : "ri", $"{which} ({(cold ? "cold-formed, EN 10219-2" : "hot-finished, EN 10210-2")}; they change J and the peak shear)",
+                "give ro= and ri= from the mill's table or your drawing");
+        }
         if (2 * ro > small)
             throw a.Error("ro", $"outer corner radius {a.Show(ro)} exceeds half the width {a.Show(small / 2)}; use a smaller ro");
         double innerSmall = small - 2 * t;

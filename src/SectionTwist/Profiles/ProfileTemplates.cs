@@ -21,6 +21,7 @@ public static class ProfileTemplates
         .. HollowSectionTemplates.All(),
         .. RolledSectionTemplates.All(),
         .. SteelSectionTemplates.All(),
+        .. CompositeTemplates.All(),
     ];
 
     private static readonly string[] OutOfScope = ["crosshole", "cross-hole", "crossbore", "crossdrilled", "cross-drilled"];
@@ -68,6 +69,24 @@ public static class ProfileTemplates
                 $"{specText}: a shaft with a cross hole is a 3D stress problem, outside a cross-section (Saint-Venant) analysis; analyse the plain section (e.g. circle:d=...) and apply a stress-concentration factor from a handbook for the hole");
         return FindDefinition(name) ?? throw new SectionTwistException("unknown-template",
             $"{specText}: unknown template '{name}'{Suggest.DidYouMean(name, Definitions.SelectMany(d => d.Info.Aliases.Prepend(d.Info.Name)))}; known templates: {string.Join(", ", Definitions.Select(d => d.Info.Name))} (run 'sectiontwist templates' for their parameters)");
+    }
+
+    /// <summary>True when the spec names a composite template (one whose parts need materials).</summary>
+    public static bool IsComposite(string source)
+    {
+        ArgumentNullException.ThrowIfNull(source);
+        int colon = source.IndexOf(':', StringComparison.Ordinal);
+        return colon > 0 && FindDefinition(source[..colon].Trim())?.Parts is not null;
+    }
+
+    /// <summary>The named parts of a composite template's spec (e.g. core and sleeve of <c>sleeved:d=40,t=5</c>), metres.</summary>
+    internal static IReadOnlyList<(string Name, Profile Shape)> BuildParts(string spec, LengthUnit? defaultUnit)
+    {
+        var (profile, _, info, args) = Build(spec, defaultUnit);
+        var def = Require(info.Name, spec.Trim());
+        if (def.Parts is null)
+            throw new SectionTwistException("not-composite", $"{spec.Trim()}: '{info.Name}' is not a composite template; the composite ones are {string.Join(", ", Definitions.Where(d => d.Parts is not null).Select(d => d.Info.Name))}");
+        return def.Parts(args).Select(p => (p.Name, new Profile(p.Regions, profile.Unit, $"{profile.Name} {p.Name}"))).ToArray();
     }
 
     /// <summary>Builds the profile, its outer size (m) and its template description.</summary>

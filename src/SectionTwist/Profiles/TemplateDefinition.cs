@@ -18,6 +18,9 @@ internal sealed record TemplateDefinition(
     /// <summary>Builds from the whole body text (polygon coordinates); null for key/value templates.</summary>
     public Func<TemplateArguments, string, IReadOnlyList<Region>>? RawBody { get; init; }
 
+    /// <summary>Composite templates: the named parts (each of one material); null for homogeneous templates.</summary>
+    public Func<TemplateArguments, IReadOnlyList<(string Name, IReadOnlyList<Region> Regions)>>? Parts { get; init; }
+
     /// <summary>Shorthand for a parameter list.</summary>
     public static TemplateParameter[] Params(params TemplateParameter[] p) => p;
 }

@@ -34,6 +34,12 @@ public sealed record SectionSource(string Name, string? TemplateSpec, string? Dx
     /// <summary>Leave out entities that do not close.</summary>
     public bool SkipOpen { get; init; }
 
+    /// <summary>
+    /// A composite section: each part (a composite template's part or a drawing layer) with its material; null for a
+    /// homogeneous section.
+    /// </summary>
+    public IReadOnlyList<KeyValuePair<string, Material>>? Materials { get; init; }
+
     /// <summary>Length unit of the drawing (overrides its $INSUNITS), or null.</summary>
     public LengthUnit? Unit { get; init; }
 }

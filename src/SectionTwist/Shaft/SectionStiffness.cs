@@ -17,6 +17,9 @@ public sealed record SectionStiffness(double TorsionConstant, double ShearPerTor
     /// <summary>Largest |sectorial coordinate| of the section, m^2, when the warping function was solved; else null.</summary>
     public double? MaxSectorialCoordinate { get; init; }
 
+    /// <summary>Warping shear factor q_w of the section, m^3 (warping shear = E |phi'''| q_w), when the warping function was solved; else null.</summary>
+    public double? WarpingShearFactor { get; init; }
+
     /// <summary>True for an open thin-walled section whose members are sensitive to restrained warping (see <c>WarpingResult.Classification</c>).</summary>
     public bool WarpingSensitive { get; init; }
 
@@ -26,6 +29,15 @@ public sealed record SectionStiffness(double TorsionConstant, double ShearPerTor
     /// under refinement: segments with this section get no factor of safety and the check <c>unbounded</c>.
     /// </summary>
     public bool PeakShearUnbounded { get; init; }
+
+    /// <summary>
+    /// A composite section's effective torsional rigidity (G J)_eff, N m^2; null for a homogeneous section. A segment
+    /// takes J = (G J)_eff / G of its own material, so its stiffness is the composite one whatever material it names.
+    /// </summary>
+    public double? TorsionalRigidity { get; init; }
+
+    /// <summary>A composite section's peak shear per unit torque in each material (each checked against its own limit); null for a homogeneous section.</summary>
+    public IReadOnlyList<MaterialShear>? MaterialShears { get; init; }
 
     /// <summary>Warnings of the section analysis, each naming the section (empty for exact and given sections).</summary>
     public IReadOnlyList<Torsion.AnalysisWarning> Warnings { get; init; } = [];
@@ -47,6 +59,7 @@ public sealed record SectionStiffness(double TorsionConstant, double ShearPerTor
             Warnings = result.Warnings.Select(w => description is null ? w : new Torsion.AnalysisWarning(w.Code, $"section '{description}': {w.Message}")).ToList().AsReadOnly(),
             WarpingConstant = result.Warping?.WarpingConstant,
             MaxSectorialCoordinate = result.Warping?.MaxSectorialCoordinate,
+            WarpingShearFactor = result.Warping?.WarpingShearFactor,
             WarpingSensitive = result.Warping?.Classification == Warping.WarpingClass.WarpingSensitive,
             PolarMoment = result.PolarMoment,
             Profile = result.Profile,

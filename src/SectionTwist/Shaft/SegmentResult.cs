@@ -25,7 +25,11 @@ public sealed record SegmentResult
     public required double TorqueAtTo { get; init; }
     /// <summary>Twist phi(To) - phi(From), rad.</summary>
     public required double Twist { get; init; }
-    /// <summary>Peak shear stress anywhere in the segment, Pa (|T| times the section's peak shear per unit torque, largest along the segment).</summary>
+    /// <summary>
+    /// Peak shear stress anywhere in the segment, Pa (|T| times the section's peak shear per unit torque, largest along the
+    /// segment). For a composite section: the peak in the governing material (smallest factor of safety against its own
+    /// limit); <see cref="MaterialChecks"/> lists every material's peak.
+    /// </summary>
     public required double MaxShear { get; init; }
     /// <summary>The stress the factor of safety is measured against, Pa (allowable, or shear yield), or null.</summary>
     public required double? ShearLimit { get; init; }
@@ -46,6 +50,12 @@ public sealed record SegmentResult
     public bool PeakShearUnbounded { get; init; }
 
     /// <summary>
+    /// A composite segment's check of each material against its own limit shear (the governing one gives
+    /// <see cref="ShearLimit"/> and <see cref="SafetyFactor"/>); empty for a homogeneous segment.
+    /// </summary>
+    public IReadOnlyList<MaterialShearCheck> MaterialChecks { get; init; } = [];
+
+    /// <summary>
     /// The check as every output writes it: <c>ok</c>, or the problems joined by commas: <c>unbounded</c> (peak shear at a
     /// sharp corner), <c>shear over allowable</c> (or <c>over yield</c>), <c>twist rate over limit</c>.
     /// </summary>
@@ -55,7 +65,9 @@ public sealed record SegmentResult
         {
             var flags = new List<string>(3);
             if (PeakShearUnbounded) flags.Add("unbounded");
-            if (ExceedsShearLimit) flags.Add($"shear over {Material.LimitBasis}");
+            if (ExceedsShearLimit && MaterialChecks.Count > 0)
+                flags.AddRange(MaterialChecks.Where(c => c.Exceeds).Select(c => $"shear over {c.Material.LimitBasis} in {c.Material.Name}"));
+            else if (ExceedsShearLimit) flags.Add($"shear over {Material.LimitBasis}");
             if (ExceedsTwistRateLimit) flags.Add("twist rate over limit");
             return flags.Count == 0 ? "ok" : string.Join(", ", flags);
         }

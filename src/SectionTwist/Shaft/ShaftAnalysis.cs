@@ -174,6 +174,23 @@ internal sealed class ShaftAnalysis(ShaftModel model)
             // a sharp re-entrant corner: the mesh value is no bound on the stress, so there is no factor of safety to give
             bool unbounded = tau > 0 && seg.Section is { PeakShearUnbounded: true };
             double? sf = lim is null || unbounded ? null : tau > 0 ? lim.Value / tau : double.PositiveInfinity;
+            bool exceeds = lim is not null && tau > lim.Value;
+            // a composite section: each material against its own limit; the governing one gives the limit and the factor
+            var checks = new List<MaterialShearCheck>();
+            if (seg.Section is { MaterialShears: { } shears } sec && sec.ShearPerTorque > 0)
+            {
+                foreach (var ms in shears)
+                {
+                    double taum = tau * ms.ShearPerTorque / sec.ShearPerTorque;
+                    double? lm = ms.Material.LimitShear;
+                    checks.Add(new MaterialShearCheck(ms.Material, taum, lm is null || unbounded ? null : taum > 0 ? lm.Value / taum : double.PositiveInfinity));
+                }
+                var governing = checks.Where(c => c.SafetyFactor is not null).MinBy(c => c.SafetyFactor!.Value);
+                lim = governing?.Material.LimitShear;
+                sf = governing?.SafetyFactor;
+                if (governing is not null) tau = governing.MaxShear; // the table compares the peak with the limit of the same material
+                exceeds = checks.Any(c => c.Exceeds);
+            }
             list.Add((layout.Stations[e.A].Position, new SegmentResult
             {
                 Label = seg.Label,
@@ -190,7 +207,8 @@ internal sealed class ShaftAnalysis(ShaftModel model)
                 ShearLimit = lim,
                 SafetyFactor = sf,
                 MaxTwistRate = rate,
-                ExceedsShearLimit = lim is not null && tau > lim.Value,
+                ExceedsShearLimit = exceeds,
+                MaterialChecks = checks.AsReadOnly(),
                 PeakShearUnbounded = unbounded,
                 ExceedsTwistRateLimit = limit is not null && rate > limit.Value,
             }, seg.Section));

@@ -1,3 +1,4 @@
+using SectionTwist.Profiles;
 using SectionTwist.Units;
 using YamlDotNet.RepresentationModel;
 
@@ -147,13 +148,15 @@ internal sealed partial class ShaftFileReader
     private Func<SectionStiffness> ReadSection(YamlNode node, string name)
     {
         var m = new YamlMap(_file, node, $"section '{YamlGuard.Short(name)}'", "round", "tube", "J", "shearFactor", "torsionalModulus", "polarMoment", "description", "outerDiameter", "template", "dxf",
-            "layer", "part", "at", "window", "hatch", "fitArcs", "snap", "skipOpen", "unit");
+            "layer", "part", "at", "window", "hatch", "fitArcs", "snap", "skipOpen", "unit", "materials");
         string[] kinds = [.. new[] { "round", "tube", "J", "template", "dxf" }.Where(m.Has)];
         if (kinds.Length != 1)
             throw _file.Error(node, kinds.Length == 0 ? "round" : kinds[1],
                 $"section '{YamlGuard.Short(name)}' needs exactly one of 'round', 'tube', 'J' (with 'shearFactor'), 'template' or 'dxf'{(kinds.Length > 1 ? $", found {string.Join(" and ", kinds)}" : "")}");
         string? description = m.String("description");
         double? od = m.Has("outerDiameter") ? Diameter(m.Get("outerDiameter")!, "outerDiameter") : null;
+        if (m.Has("materials") && kinds[0] is not ("template" or "dxf"))
+            throw _file.Error(m.KeyNode("materials"), "materials", $"section '{YamlGuard.Short(name)}': 'materials' makes a composite section from a 'template' or 'dxf'; remove it here");
         switch (kinds[0])
         {
             case "round":
@@ -202,10 +205,23 @@ internal sealed partial class ShaftFileReader
                         ? new SectionSource(name, value, null, null, null, _file.Where(m.Get(kinds[0])!))
                         : ReadDrawingKeys(m, name, dxfPath!);
                     var at = m.Get(kinds[0])!;
+                    if (m.Get("materials") is { } mn) src = src with { Materials = CompositeMaterials(mn, name) };
+                    else if (template && ProfileTemplates.IsComposite(value))
+                        throw _file.Error(at, "template", $"'{YamlGuard.Short(value)}' is a composite template: give each part a material, e.g. 'materials: {{core: steel-1045-cd, sleeve: brass}}'");
                     SectionStiffness? cached = null;
                     return () => cached ??= Resolve(src, at, kinds[0], description, od);
                 }
         }
+    }
+
+    /// <summary>The <c>materials</c> map of a composite section: part (template part or drawing layer) to a file or library material.</summary>
+    private List<KeyValuePair<string, Material>> CompositeMaterials(YamlNode node, string name)
+    {
+        if (node is not YamlMappingNode map || map.Children.Count == 0)
+            throw _file.Error(node, "materials", $"section '{YamlGuard.Short(name)}': expected each part with its material, e.g. 'materials: {{core: steel-1045-cd, sleeve: brass}}'");
+        var list = new List<KeyValuePair<string, Material>>();
+        foreach (var (k, v) in map.Children) list.Add(new(((YamlScalarNode)k).Value ?? "", MaterialRef(v, _materials)));
+        return list;
     }
 
     private SectionStiffness Resolve(SectionSource src, YamlNode at, string key, string? description, double? od)

@@ -15,6 +15,7 @@ internal sealed partial class ShaftFileReader
     private readonly ShaftFileContext _file;
     private readonly string _baseDirectory;
     private readonly Func<SectionSource, SectionStiffness>? _resolver;
+    private Dictionary<string, Material> _materials = new(StringComparer.Ordinal);
     private readonly Dictionary<string, double> _stations = new(StringComparer.Ordinal);
     private readonly List<Station> _stationList = [];
     private readonly List<(string A, string B)> _segmentEnds = [];
@@ -56,6 +57,7 @@ internal sealed partial class ShaftFileReader
 
         var units = ReadUnits(root.Get("units"));
         var materials = ReadMaterials(root.Get("materials"));
+        _materials = materials;
         var sections = ReadSections(root.Get("sections"));
         ReadStations(root.Require("stations", "list the stations, e.g. '- {name: A, at: 0}'"));
         var segments = ReadSegments(root.Require("segments", "list the segments, e.g. '- {from: A, to: B, section: s1, material: m1}'"), materials, sections);
@@ -201,6 +203,8 @@ internal sealed partial class ShaftFileReader
                     section = entry.Get();
                 }
                 else section = ReadSection(sn, $"{from}-{to}")();
+                // a composite section: J referred to this segment's material, so that G J is the effective rigidity
+                if (section.TorsionalRigidity is { } gj) section = section with { TorsionConstant = gj / material.ShearModulus };
                 seg = new ShaftSegment(from, to, section, material) { Name = name };
             }
             else

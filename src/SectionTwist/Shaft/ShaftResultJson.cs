@@ -63,7 +63,11 @@ internal static class ShaftResultJson
                 maxRotation = s.MaxRotation,
                 maxBimoment = s.MaxBimoment,
                 maxWarpingNormalStress = s.MaxWarpingNormalStress,
-                maxSaintVenantShear = s.MaxSaintVenantShear,
+                maxSaintVenantShear = s.ShearUnbounded ? (double?)null : s.MaxSaintVenantShear,
+                maxWarpingShear = s.ShearUnbounded && s.MaxWarpingShear > 0 ? (double?)null : s.MaxWarpingShear,
+                maxCombinedShear = s.ShearUnbounded ? (double?)null : s.MaxCombinedShear,
+                shearUnbounded = s.ShearUnbounded,
+                maxCombinedNormalStress = s.MaxCombinedNormalStress,
             }),
         },
         bending = r.Bending is null ? null : Bending.BendingJson.ToDto(r.Bending),
@@ -128,5 +132,6 @@ internal static class ShaftResultJson
         exceedsShearLimit = s.ExceedsShearLimit,
         exceedsTwistRateLimit = s.ExceedsTwistRateLimit,
         check = s.Check,
+        materialChecks = s.MaterialChecks.Select(c => new { material = c.Material.Name, maxShear = c.MaxShear, shearLimit = c.Material.LimitShear, shearLimitBasis = c.Material.LimitBasis, safetyFactor = Num(c.SafetyFactor), exceedsShearLimit = c.Exceeds }),
     };
 }

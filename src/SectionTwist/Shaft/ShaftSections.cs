@@ -27,11 +27,42 @@ public static class ShaftSections
     /// <param name="cancellationToken">Stops the reading and analysis.</param>
     public static SectionStiffness Resolve(SectionSource source, AnalysisOptions? options = null, Action<string>? notes = null, CancellationToken cancellationToken = default)
     {
+        ArgumentNullException.ThrowIfNull(source);
+        if (source.Materials is { } materials) return ResolveComposite(source, materials, options, notes, cancellationToken);
         var (r, outer) = Analyze(source, options, notes, cancellationToken);
         return Stiffness(source, r, outer) with
         {
             Bending = SectionTwist.Bending.BendingSection.FromSection(r, outer),
             PolarMoment = r.PolarMoment,
+        };
+    }
+
+    /// <summary>
+    /// A composite section (<see cref="SectionSource.Materials"/>): analysed with <see cref="Composite.CompositeAnalyzer"/>;
+    /// J of the first part's material (each segment re-refers it to its own material), the largest peak shear per unit
+    /// torque of all materials, each material's own peak for its check, and the bonding caution among the warnings.
+    /// </summary>
+    private static SectionStiffness ResolveComposite(SectionSource source, IReadOnlyList<KeyValuePair<string, Material>> materials, AnalysisOptions? options,
+        Action<string>? notes, CancellationToken ct)
+    {
+        var section = Composite.CompositeSources.Load(source.TemplateSpec ?? source.DxfPath!, materials, new ProfileSourceOptions
+        {
+            Part = source.Part is { } p && int.TryParse(p, NumberStyles.Integer, CultureInfo.InvariantCulture, out int n) ? n : null,
+            At = source.At, Window = source.Window, UseHatches = source.UseHatches, FitArcs = source.FitArcs,
+            SnapTolerance = source.SnapTolerance, SkipOpen = source.SkipOpen, Unit = source.Unit, Notes = notes, ShaftFileKeys = true, Cancellation = ct,
+        });
+        var r = Composite.CompositeAnalyzer.Analyze(section, null, options, ct);
+        notes?.Invoke($"section '{source.Name}' ({source.TemplateSpec ?? Path.GetFileName(source.DxfPath)}): composite, analysed, {r.Mesh.Elements} elements");
+        var warnings = r.Warnings.Append(new AnalysisWarning("composite-bonding", Composite.CompositeResult.Caution))
+            .Select(w => new AnalysisWarning(w.Code, $"section '{source.Name}': {w.Message}")).ToList().AsReadOnly();
+        var p0 = section.Envelope.Properties;
+        return new SectionStiffness(r.EquivalentTorsionConstant, r.Materials.Max(m => m.MaxShearPerTorque), source.TemplateSpec ?? Path.GetFileName(source.DxfPath),
+            source.TemplateSpec is { } spec ? ProfileTemplates.OuterSize(spec) : null)
+        {
+            TorsionalRigidity = r.TorsionalRigidity,
+            MaterialShears = r.Materials.Select(m => new MaterialShear(m.Material, m.MaxShearPerTorque)).ToList().AsReadOnly(),
+            Warnings = warnings,
+            PolarMoment = p0.PolarMoment,
         };
     }
 

@@ -78,6 +78,18 @@ internal sealed class SymbolicCholesky
             FillOrdering.Amd => Amd.Order(a, ct),
             _ => NestedDissection.Order(a, coordinates, ct),
         };
+        return AnalyzeOrdered(a, perm, ct);
+    }
+
+    /// <summary>
+    /// Analyses the pattern of <paramref name="a"/> with a given fill-reducing order (<paramref name="perm"/>[k] =
+    /// original index of the k-th pivot), e.g. the restriction of an order computed once for a larger matrix
+    /// (<see cref="CscRestriction.RestrictOrder"/>). The order is composed with the elimination-tree postorder.
+    /// </summary>
+    public static SymbolicCholesky AnalyzeOrdered(CscMatrix a, int[] perm, CancellationToken ct = default)
+    {
+        int n = a.N;
+        if (perm.Length != n) throw new ArgumentException("order length differs from the matrix order", nameof(perm));
         ct.ThrowIfCancellationRequested();
         var (fp, fi, map) = Permute(a, perm);
         var parent = EliminationTree.Parents(n, fp, fi);

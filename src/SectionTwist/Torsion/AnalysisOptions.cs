@@ -38,7 +38,8 @@ public sealed record AnalysisOptions
     /// <summary>
     /// Also solve the warping function on the same meshes: shear centre, warping constant and sectorial coordinate
     /// (<see cref="SectionResult.Warping"/>) and a second, upper-bound J that can tighten the error estimate. Off by
-    /// default: the two extra solves (last coarse and fine mesh) add 40 to 140 % to the analysis time.
+    /// default: the two extra solves (last coarse and fine mesh) share the stress-function solve's matrix and order but
+    /// need their own factorization, measured at +10 to +90 % of the analysis time on a loaded machine (docs/performance.md).
     /// </summary>
     public bool Warping { get; init; }
 

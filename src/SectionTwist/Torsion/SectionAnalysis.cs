@@ -99,6 +99,9 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
         Mesh? coarseMesh = null;
         Func<Point2, double>? sizeField = null;
         double estJ = double.NaN, estT = double.NaN;
+        // The warping solve shares each mesh's matrix and order: keep them when it will run (an open-looking section's
+        // J is below half its polar moment already on the first mesh).
+        bool share = options.Warping;
         Report("mesh", 0);
         for (int pass = 0; pass < MaxPasses; pass++)
         {
@@ -140,13 +143,14 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
                 throw budget.Refusal(mesh.ElementCount);
             coarseMesh = mesh;
             Report("solve", f0 + 0.2 * span);
-            coarse = TorsionSolver.Solve(coarseMesh, holeArea, ct, SolverTolerance(acc), keepFactor: options.EstimateError);
+            coarse = TorsionSolver.Solve(coarseMesh, holeArea, ct, SolverTolerance(acc), share, keepFactor: options.EstimateError && !share);
+            share |= options.WarpingIfOpen && coarse.J < 0.5 * props.PolarMoment;
             if (!options.EstimateError) { fine = coarse; break; }
             Report("refine", f0 + 0.4 * span);
             ct.ThrowIfCancellationRequested();
             var fineMesh = MeshRefinement.Uniform(coarseMesh);
             ct.ThrowIfCancellationRequested();
-            fine = TorsionSolver.Solve(fineMesh, holeArea, ct, SolverTolerance(acc), parent: coarse);
+            fine = TorsionSolver.Solve(fineMesh, holeArea, ct, SolverTolerance(acc), share, parent: coarse);
             coarse.Factor = null;
             last = RichardsonEstimate.Compute(coarse, fine, corners, ct);
             p = last.EffectiveOrder;
@@ -210,7 +214,7 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
         if (options.Warping || (options.WarpingIfOpen && j < 0.5 * props.PolarMoment))
         {
             Report("warping", 0.97);
-            warping = Warping.WarpingProperties.Compute(useC.Mesh, useF.Mesh, props, j, ct);
+            warping = Warping.WarpingProperties.Compute(useC, useF, props, j, singular, ct);
             if (warping is null)
                 warnings.Add(new AnalysisWarning("warping-not-computed",
                     $"the profile has {profile.Regions.Count} separate parts: they warp independently and have no common shear centre; analyse each part alone for its warping properties"));

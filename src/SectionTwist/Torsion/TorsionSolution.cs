@@ -31,4 +31,7 @@ internal sealed class TorsionSolution
 
     /// <summary>A direct solver of the matrix and the unknown of each node (-1: fixed).</summary>
     internal sealed record Factorization(int[] Dof, int N, Sparse.ISpdSolver Solver);
+
+    /// <summary>The mesh's Laplacian over all nodes with its fill-reducing order, when the solve was asked to share it (for the warping solve), else null.</summary>
+    public MeshLaplacian? Laplacian { get; init; }
 }

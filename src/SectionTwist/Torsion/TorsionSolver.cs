@@ -17,14 +17,16 @@ internal static class TorsionSolver
 
     /// <summary>
     /// Solves on <paramref name="mesh"/>; <paramref name="holeArea"/> gives the exact area enclosed by each loop (used for
-    /// holes); <paramref name="tolerance"/> is the relative residual asked of an iterative linear solve.
+    /// holes); <paramref name="tolerance"/> is the relative residual asked of an iterative linear solve. With
+    /// <paramref name="shareLaplacian"/> the matrix is assembled over all nodes and kept with its fill-reducing order
+    /// (<see cref="TorsionSolution.Laplacian"/>) for the warping solve on the same mesh.
     /// <paramref name="keepFactor"/> keeps a direct factorization on the solution (<see cref="TorsionSolution.Factor"/>)
     /// for the solve on its uniform refinement; <paramref name="parent"/> is that coarser solution when
     /// <paramref name="mesh"/> is its refinement: the solve then iterates with the two-grid cycle from the parent's
     /// solution interpolated instead of factorizing (the direct solver remains the fallback of a stalled iteration).
     /// </summary>
     public static TorsionSolution Solve(Mesh mesh, double[] holeArea, CancellationToken ct = default, double tolerance = SpdSolver.DefaultTolerance,
-        bool keepFactor = false, TorsionSolution? parent = null)
+        bool shareLaplacian = false, bool keepFactor = false, TorsionSolution? parent = null)
     {
         int nNodes = mesh.NodeCount, nEl = mesh.ElementCount;
         var loops = mesh.Loops;
@@ -42,52 +44,49 @@ internal static class TorsionSolver
         var f = new double[n];
         for (int l = 0; l < loops.Length; l++) if (holeDof[l] >= 0) f[holeDof[l]] += 2 * holeArea[l];
 
-        var trip = new TripletMatrix(n, nEl * 36);
-        Span<double> ke = stackalloc double[36];
-        Span<double> fe = stackalloc double[6];
         Span<double> xe = stackalloc double[6];
         Span<double> ye = stackalloc double[6];
-        for (int e = 0; e < nEl; e++)
+        MeshLaplacian? laplacian = null;
+        bool twoGrid = !shareLaplacian && parent?.Factor is not null && n >= TwoGridThreshold;
+        CscMatrix k;
+        ISpdSolver? solver = null;
+        if (shareLaplacian)
         {
-            if ((e & 4095) == 0) ct.ThrowIfCancellationRequested();
-            Gather(mesh, e, xe, ye);
-            ElementMatrices(xe, ye, ke, fe);
-            for (int a = 0; a < 6; a++)
+            var load = new double[6 * nEl];
+            laplacian = MeshLaplacian.Assemble(mesh, load, ct);
+            for (int q = 0; q < load.Length; q++)
             {
-                int da = dof[mesh.Elements[6 * e + a]];
-                if (da < 0) continue;
-                f[da] += fe[a];
-                for (int b = 0; b < 6; b++)
-                {
-                    int db = dof[mesh.Elements[6 * e + b]];
-                    if (db >= 0) trip.Add(da, db, ke[6 * a + b]);
-                }
+                int d = dof[mesh.Elements[q]];
+                if (d >= 0) f[d] += load[q];
             }
+            if (n > 0) (k, solver) = laplacian.System(dof, n, tolerance, ct);
+            else k = new CscMatrix(0, [0], [], []);
         }
-        var k = trip.ToCsc();
+        else
+        {
+            k = AssembleReduced(mesh, dof, n, f, ct);
+            if (n > 0 && !twoGrid) solver = SpdSolver.Create(k, tolerance, ct);
+        }
         var u = new double[n];
         ISpdSolver? kept = null;
-        if (n > 0)
+        if (n > 0 && twoGrid)
         {
-            if (parent?.Factor is { } pf && n >= TwoGridThreshold)
-            {
-                var p = NestedProlongation.Build(parent.Mesh, pf.Dof, pf.N, mesh, dof, n, ct);
-                var tg = new TwoGridSolver(k, p, pf.Solver, tolerance, ct);
-                var uc = new double[pf.N];
-                for (int i = 0; i < parent.Mesh.NodeCount; i++) if (pf.Dof[i] >= 0) uc[pf.Dof[i]] = parent.Phi[i];
-                var x0 = new double[n];
-                tg.Prolong(uc, x0);
-                tg.Initial = x0;
-                tg.Solve(f, u);
-                LastTwoGrid = tg.LastOutcome;
-                if (!tg.LastOutcome.Converged) SpdSolver.CreateDirect(k, ct).Solve(f, u);
-            }
-            else
-            {
-                var solver = SpdSolver.Create(k, tolerance, ct);
-                solver.Solve(f, u);
-                if (keepFactor && solver is not SpdSolver.IterativeWithFallback) kept = solver;
-            }
+            var pf = parent!.Factor!;
+            var p = NestedProlongation.Build(parent.Mesh, pf.Dof, pf.N, mesh, dof, n, ct);
+            var tg = new TwoGridSolver(k, p, pf.Solver, tolerance, ct);
+            var uc = new double[pf.N];
+            for (int i = 0; i < parent.Mesh.NodeCount; i++) if (pf.Dof[i] >= 0) uc[pf.Dof[i]] = parent.Phi[i];
+            var x0 = new double[n];
+            tg.Prolong(uc, x0);
+            tg.Initial = x0;
+            tg.Solve(f, u);
+            LastTwoGrid = tg.LastOutcome;
+            if (!tg.LastOutcome.Converged) SpdSolver.CreateDirect(k, ct).Solve(f, u);
+        }
+        else
+        {
+            solver?.Solve(f, u);
+            if (keepFactor && solver is not null and not SpdSolver.IterativeWithFallback) kept = solver;
         }
         double residual = n > 0 ? k.RelativeResidual(u, f) : 0;
 
@@ -112,13 +111,42 @@ internal static class TorsionSolver
         return new TorsionSolution
         {
             Mesh = mesh, Phi = phi, LoopValue = loopValue, J = j, RegionJ = regionJ, BoundaryFlux = flux,
-            MaxGradient = maxG, MaxGradientLocation = where, Residual = residual,
+            MaxGradient = maxG, MaxGradientLocation = where, Residual = residual, Laplacian = laplacian,
             Factor = kept is null ? null : new TorsionSolution.Factorization(dof, n, kept),
         };
     }
 
     /// <summary>How the last two-grid solve on this thread ended (for tests and benchmarks).</summary>
     [ThreadStatic] internal static ConjugateGradient.Outcome? LastTwoGrid;
+
+    /// <summary>Assembles the matrix of the unknowns <paramref name="dof"/> directly (Dirichlet nodes dropped, hole nodes merged) and adds the loads to <paramref name="f"/>.</summary>
+    private static CscMatrix AssembleReduced(Mesh mesh, int[] dof, int n, double[] f, CancellationToken ct)
+    {
+        int nEl = mesh.ElementCount;
+        var trip = new TripletMatrix(n, nEl * 36);
+        Span<double> ke = stackalloc double[36];
+        Span<double> fe = stackalloc double[6];
+        Span<double> xe = stackalloc double[6];
+        Span<double> ye = stackalloc double[6];
+        for (int e = 0; e < nEl; e++)
+        {
+            if ((e & 4095) == 0) ct.ThrowIfCancellationRequested();
+            Gather(mesh, e, xe, ye);
+            ElementMatrices(xe, ye, ke, fe);
+            for (int a = 0; a < 6; a++)
+            {
+                int da = dof[mesh.Elements[6 * e + a]];
+                if (da < 0) continue;
+                f[da] += fe[a];
+                for (int b = 0; b < 6; b++)
+                {
+                    int db = dof[mesh.Elements[6 * e + b]];
+                    if (db >= 0) trip.Add(da, db, ke[6 * a + b]);
+                }
+            }
+        }
+        return trip.ToCsc();
+    }
 
     internal static void Gather(Mesh mesh, int e, Span<double> xe, Span<double> ye)
     {

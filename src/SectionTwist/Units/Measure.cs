@@ -44,4 +44,6 @@ public enum Measure
     Frequency,
     /// <summary>Mass moments of inertia of rotating parts (kg·m²).</summary>
     Inertia,
+    /// <summary>Torsional rigidity G J of a section, e.g. the effective rigidity of a composite section (N·m²; the same units as the bimoment).</summary>
+    TorsionalRigidity,
 }

@@ -86,6 +86,8 @@ public sealed class UnitSystem
     public DisplayUnit Frequency => this[Measure.Frequency];
     /// <summary>Mass moments of inertia.</summary>
     public DisplayUnit Inertia => this[Measure.Inertia];
+    /// <summary>Torsional rigidity G J (N·m² in SI, lbf·in² in US: the bimoment's units).</summary>
+    public DisplayUnit TorsionalRigidity => this[Measure.TorsionalRigidity];
 
     /// <summary>An SI value of <paramref name="measure"/> in this system, without the unit (house number style).</summary>
     public string Format(double si, Measure measure, int digits = 5) => this[measure].Format(si, digits);
@@ -180,6 +182,7 @@ public sealed class UnitSystem
         u[(int)Measure.Speed] = new("rpm", 2 * Math.PI / 60);
         u[(int)Measure.Force] = force;
         u[(int)Measure.Bimoment] = bimoment;
+        u[(int)Measure.TorsionalRigidity] = bimoment; // G J: N·m² / lbf·in², spelled as the bimoment
         u[(int)Measure.Frequency] = new("Hz", 1);
         u[(int)Measure.Inertia] = inertia;
         return u;

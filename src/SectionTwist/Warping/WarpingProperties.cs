@@ -1,5 +1,5 @@
 using SectionTwist.Geometry;
-using SectionTwist.Meshing;
+using SectionTwist.Torsion;
 
 namespace SectionTwist.Warping;
 
@@ -8,23 +8,28 @@ internal static class WarpingProperties
 {
     /// <summary>
     /// Solves on the fine mesh (and on the coarse one for the error estimate, unless it is the same mesh); null for
-    /// profiles of more than one region.
+    /// profiles of more than one region. With <paramref name="singular"/> (sharp re-entrant corners) the warping shear
+    /// factor is the mesh value of a singular peak and its estimate is infinite.
     /// </summary>
-    public static WarpingResult? Compute(Mesh coarse, Mesh fine, SectionProperties props, double j, CancellationToken ct)
+    public static WarpingResult? Compute(TorsionSolution coarse, TorsionSolution fine, SectionProperties props, double j, bool singular, CancellationToken ct)
     {
-        var f = WarpingSolver.Solve(fine, props.Centroid, ct);
+        var f = WarpingSolver.Solve(fine.Mesh, props.Centroid, ct, fine.Laplacian);
         if (f is null) return null;
-        var c = ReferenceEquals(coarse, fine) ? null : WarpingSolver.Solve(coarse, props.Centroid, ct);
+        var c = ReferenceEquals(coarse.Mesh, fine.Mesh) ? null : WarpingSolver.Solve(coarse.Mesh, props.Centroid, ct, coarse.Laplacian);
         // Whole change between the meshes (not divided by 2^p - 1: the order of Iw is not known at corners), plus a
         // floor at the round-off level of the quantity's own scale.
         double size = Math.Sqrt(props.Area);
         double iwScale = Math.Max(f.WarpingConstant, 1e-12 * props.PolarMoment * props.Area);
-        var err = c is null
+        var err0 = c is null
             ? new WarpingErrorEstimate(double.NaN, double.NaN, double.NaN)
             : new WarpingErrorEstimate(
                 Point2.Distance(c.ShearCentre, f.ShearCentre) + 1e-9 * size,
                 Math.Abs(c.WarpingConstant - f.WarpingConstant) + 1e-9 * iwScale,
-                Math.Abs(c.MaxOmega - f.MaxOmega) + 1e-9 * props.Area);
+                Math.Abs(c.MaxOmega - f.MaxOmega) + 1e-9 * props.Area)
+            {
+                WarpingShearFactor = Math.Abs(c.MaxShearFactor - f.MaxShearFactor) + 1e-9 * props.Area * size,
+            };
+        var err = singular ? err0 with { WarpingShearFactor = double.PositiveInfinity } : err0;
         double ratio = f.WarpingConstant / (j * props.PolarMoment / props.Area);
         return new WarpingResult
         {
@@ -32,6 +37,8 @@ internal static class WarpingProperties
             WarpingConstant = f.WarpingConstant,
             MaxSectorialCoordinate = f.MaxOmega,
             MaxSectorialCoordinateLocation = f.MaxOmegaLocation,
+            WarpingShearFactor = f.MaxShearFactor,
+            WarpingShearFactorLocation = f.MaxShearFactorLocation,
             TorsionConstantUpperBound = f.TorsionConstantUpper,
             EstimatedError = err,
             WarpingRatio = ratio,

@@ -19,6 +19,15 @@ public sealed record WarpingResult
     /// <summary>Where |omega| is largest, m (one of the symmetric places when there are several).</summary>
     public required Point2 MaxSectorialCoordinateLocation { get; init; }
     /// <summary>
+    /// Warping shear factor q_w = max |grad chi|, m^3, where Laplacian(chi) = omega with d chi/dn = 0 on the boundary: the
+    /// warping shear stress of non-uniform torsion is tau_w = E |phi'''| q_w at its worst point. For thin walls
+    /// |grad chi| = S_w / t with the sectorial statical moment S_w, so q_w = max S_w / t (the thin-walled
+    /// tau_w = E S_w phi''' / t; Vlasov, Thin-Walled Elastic Beams, ch. 1). See docs/theory.md, section "Warping".
+    /// </summary>
+    public double WarpingShearFactor { get; init; }
+    /// <summary>Where <see cref="WarpingShearFactor"/> occurs, m.</summary>
+    public Point2 WarpingShearFactorLocation { get; init; }
+    /// <summary>
     /// Torsion constant from the warping function, Ip - integral |grad psi|^2, m^4: an upper bound on the same mesh where
     /// the stress-function value is a lower bound. For thin open sections it carries the cancellation of Ip against
     /// the energy and is less accurate than the stress-function J.
@@ -53,7 +62,11 @@ public sealed record WarpingResult
 /// <param name="ShearCentre">Distance, m.</param>
 /// <param name="WarpingConstant">Of Iw, m^6.</param>
 /// <param name="MaxSectorialCoordinate">Of the largest |omega|, m^2.</param>
-public sealed record WarpingErrorEstimate(double ShearCentre, double WarpingConstant, double MaxSectorialCoordinate);
+public sealed record WarpingErrorEstimate(double ShearCentre, double WarpingConstant, double MaxSectorialCoordinate)
+{
+    /// <summary>Of the warping shear factor, m^3 (NaN when not estimated).</summary>
+    public double WarpingShearFactor { get; init; } = double.NaN;
+}
 
 /// <summary>How much restrained warping matters for members of a section.</summary>
 public enum WarpingClass

@@ -15,6 +15,10 @@ internal sealed class WarpingSolution
     public required double MaxOmega { get; init; }
     /// <summary>Node where |Omega| is largest, m.</summary>
     public required Point2 MaxOmegaLocation { get; init; }
+    /// <summary>Largest |grad chi| of the warping shear function (<see cref="WarpingShear"/>), m^3: tau_w = E |phi'''| times this.</summary>
+    public required double MaxShearFactor { get; init; }
+    /// <summary>Node where |grad chi| is largest, m.</summary>
+    public required Point2 MaxShearFactorLocation { get; init; }
     /// <summary>Torsion constant from the warping function, Ip - integral |grad psi|^2 (an upper bound), m^4.</summary>
     public required double TorsionConstantUpper { get; init; }
 }

@@ -23,16 +23,24 @@ internal static class WarpingSolver
     /// Solves on a mesh of one connected region; coordinates are taken about <paramref name="centroid"/>. Returns null
     /// when the mesh has more than one region (disjoint parts warp independently; no single shear centre).
     /// </summary>
-    public static WarpingSolution? Solve(Mesh mesh, Point2 centroid, CancellationToken ct = default)
+    /// <remarks>
+    /// The matrix is the Laplacian of the stress-function solve on the same mesh: with <paramref name="shared"/> (kept by
+    /// that solve) it is neither assembled nor ordered again; the node fixed is the one the shared order eliminates last,
+    /// and only the numeric factorization is new.
+    /// </remarks>
+    public static WarpingSolution? Solve(Mesh mesh, Point2 centroid, CancellationToken ct = default, MeshLaplacian? shared = null)
     {
         int nNodes = mesh.NodeCount, nEl = mesh.ElementCount;
         for (int e = 1; e < nEl; e++) if (mesh.ElementRegion[e] != mesh.ElementRegion[0]) return null;
         double cx = centroid.X, cy = centroid.Y;
-        // DOF: node 0 fixed (psi = 0 there), the rest shifted down by one.
+        var laplacian = shared ?? MeshLaplacian.Assemble(mesh, new double[6 * nEl], ct);
+        // DOF: the last node of the shared order fixed (psi = 0 there), the rest numbered in node order.
+        int fixedNode = laplacian.LastNode(ct);
         int n = nNodes - 1;
+        var map = new int[nNodes];
+        for (int i = 0; i < nNodes; i++) map[i] = i < fixedNode ? i : i - 1;
+        map[fixedNode] = -1;
         var f = new double[n];
-        var trip = new TripletMatrix(n, nEl * 36);
-        Span<double> ke = stackalloc double[36];
         Span<double> fe = stackalloc double[6];
         Span<double> xe = stackalloc double[6];
         Span<double> ye = stackalloc double[6];
@@ -43,7 +51,6 @@ internal static class WarpingSolver
         {
             if ((e & 4095) == 0) ct.ThrowIfCancellationRequested();
             Gather(mesh, e, cx, cy, xe, ye);
-            TorsionSolver.ElementMatrices(xe, ye, ke, fe);
             var rule = P2Triangle.IsStraight(xe, ye) ? P2Triangle.Degree2 : P2Triangle.Degree5;
             fe.Clear();
             for (int q = 0; q < rule.Count; q++)
@@ -56,29 +63,29 @@ internal static class WarpingSolver
             }
             for (int a = 0; a < 6; a++)
             {
-                int da = mesh.Elements[6 * e + a] - 1;
-                if (da < 0) continue;
-                f[da] += fe[a];
-                for (int b = 0; b < 6; b++)
-                {
-                    int db = mesh.Elements[6 * e + b] - 1;
-                    if (db >= 0) trip.Add(da, db, ke[6 * a + b]);
-                }
+                int da = map[mesh.Elements[6 * e + a]];
+                if (da >= 0) f[da] += fe[a];
             }
         }
         var u = new double[n];
-        if (n > 0) SpdSolver.Create(trip.ToCsc(), ct).Solve(f, u);
+        var solver = n > 0 ? laplacian.System(map, n, SpdSolver.DefaultTolerance, ct).Solver : null;
+        solver?.Solve(f, u);
         var psi = new double[nNodes];
-        for (int i = 1; i < nNodes; i++) psi[i] = u[i - 1];
+        for (int i = 0; i < nNodes; i++) psi[i] = map[i] < 0 ? 0 : u[map[i]];
         double energy = 0; // integral |grad psi|^2 = f . u (Galerkin orthogonality)
         for (int i = 0; i < n; i++) energy += f[i] * u[i];
 
-        // Moments of the mesh domain and of psi (about the centroid): Trefftz conditions.
-        Integrate(mesh, cx, cy, psi, ref m);
-        double det = m.Ixx * m.Iyy - m.Ixy * m.Ixy;
-        double xs = (m.PsiX * m.Ixy - m.Iyy * m.PsiY) / det;
-        double ys = (m.Ixx * m.PsiX - m.Ixy * m.PsiY) / det;
-        // omega = psi - ys (x - x0) + xs (y - y0) + c with zero mean (x0, y0: the mesh domain's own centroid offset)
+        // Moments of the mesh domain and of psi about (cx, cy), one pass: Trefftz conditions.
+        var loads = new NodeLoads(nNodes);
+        Integrate(mesh, cx, cy, psi, ref m, loads);
+        // second moments about the mesh domain's own centroid (it differs from the exact one by the curved-edge error)
+        double xc = m.X / m.A, yc = m.Y / m.A;
+        double ixx = m.Ixx - m.A * yc * yc, iyy = m.Iyy - m.A * xc * xc, ixy = m.Ixy - m.A * xc * yc;
+        double psiX = m.PsiX - xc * m.Psi, psiY = m.PsiY - yc * m.Psi;
+        double det = ixx * iyy - ixy * ixy;
+        double xs = (psiX * ixy - iyy * psiY) / det;
+        double ys = (ixx * psiX - ixy * psiY) / det;
+        // omega = psi - ys x + xs y + c with zero mean (x, y about (cx, cy))
         double c = -(m.Psi - ys * m.X + xs * m.Y) / m.A;
         var omega = new double[nNodes];
         double best = -1; int at = 0;
@@ -88,15 +95,25 @@ internal static class WarpingSolver
             omega[i] = psi[i] - ys * x + xs * y + c;
             if (Math.Abs(omega[i]) > best) { best = Math.Abs(omega[i]); at = i; }
         }
-        var mo = new Moments();
-        Integrate(mesh, cx, cy, omega, ref mo);
+        // Iw = integral (psi + c + a x + b y)^2 dA from the same moments (no second pass): the rounding this adds is of
+        // order 1e-16 integral psi^2, far below the discretization error even for thin angles where Iw is small.
+        double a1 = -ys, b1 = xs;
+        double iw = m.Psi2 + c * c * m.A + a1 * a1 * m.Iyy + b1 * b1 * m.Ixx
+            + 2 * (c * m.Psi + a1 * m.PsiX + b1 * m.PsiY + c * a1 * m.X + c * b1 * m.Y + a1 * b1 * m.Ixy);
+        // warping shear: load integral(omega N_i) = the same combination of the node integrals
+        var g = new double[nNodes];
+        for (int i = 0; i < nNodes; i++) g[i] = loads.Psi[i] + c * loads.One[i] + a1 * loads.X[i] + b1 * loads.Y[i];
+        var (shear, shearAt) = solver is null ? (0.0, mesh.Node(0)) : WarpingShear.Solve(mesh, map, solver, g, ct);
         return new WarpingSolution
         {
+            MaxShearFactor = shear,
+            MaxShearFactorLocation = shearAt,
             Omega = omega,
             ShearCentre = new Point2(cx + xs, cy + ys),
-            WarpingConstant = mo.Psi2,
+            WarpingConstant = Math.Max(0, iw),
             MaxOmega = best,
             MaxOmegaLocation = mesh.Node(at),
+            // J = Ip - integral |grad psi|^2 with Ip about the origin psi was solved about (cx, cy)
             TorsionConstantUpper = m.Ixx + m.Iyy - energy,
         };
     }
@@ -107,8 +124,8 @@ internal static class WarpingSolver
         for (int a = 0; a < 6; a++) { xe[a] -= cx; ye[a] -= cy; }
     }
 
-    /// <summary>Area moments of the mesh domain and moments of the nodal field <paramref name="g"/> (P2 interpolation).</summary>
-    private static void Integrate(Mesh mesh, double cx, double cy, double[] g, ref Moments m)
+    /// <summary>Area moments of the mesh domain and moments of the nodal field <paramref name="g"/> (P2 interpolation), about (cx, cy).</summary>
+    private static void Integrate(Mesh mesh, double cx, double cy, double[] g, ref Moments m, NodeLoads loads)
     {
         Span<double> xe = stackalloc double[6];
         Span<double> ye = stackalloc double[6];
@@ -127,12 +144,23 @@ internal static class WarpingSolver
                 m.A += w; m.X += w * x; m.Y += w * y;
                 m.Ixx += w * y * y; m.Iyy += w * x * x; m.Ixy += w * x * y;
                 m.Psi += w * v; m.PsiX += w * v * x; m.PsiY += w * v * y; m.Psi2 += w * v * v;
+                for (int a = 0; a < 6; a++)
+                {
+                    int nd = mesh.Elements[6 * e + a];
+                    double wn = w * nq[a];
+                    loads.One[nd] += wn; loads.X[nd] += wn * x; loads.Y[nd] += wn * y; loads.Psi[nd] += wn * v;
+                }
             }
         }
-        // second moments about the mesh domain's own centroid (it differs from the exact one by the curved-edge error)
-        double xc = m.X / m.A, yc = m.Y / m.A;
-        m.Ixx -= m.A * yc * yc; m.Iyy -= m.A * xc * xc; m.Ixy -= m.A * xc * yc;
-        m.PsiX -= xc * m.Psi; m.PsiY -= yc * m.Psi;
+    }
+
+    /// <summary>Node integrals of N_i, x N_i, y N_i and psi N_i (x, y about the centroid).</summary>
+    private sealed class NodeLoads(int n)
+    {
+        public double[] One { get; } = new double[n];
+        public double[] X { get; } = new double[n];
+        public double[] Y { get; } = new double[n];
+        public double[] Psi { get; } = new double[n];
     }
 
     private struct Moments

@@ -25,15 +25,25 @@ internal static class ShaftWarping
         if (model.Segments.Any(s => s.Section is { WarpingConstant: > 0 }) is false)
             return r with { WarpingWarnings = new[] { "warping restraints are given but no segment has a warping constant (no open section); they change nothing" } };
         if (model.Springs.Count > 0)
-            throw new SectionTwistException("warping", "restrained warping with torsional springs (couplings) between stations is not supported; model the member on each side of the coupling as its own shaft");
+        {
+            var sp = model.Springs[0];
+            throw new SectionTwistException("warping", $"spring {sp.Label} (stations {sp.StationA} and {sp.StationB}){(model.Springs.Count > 1 ? $" and {model.Springs.Count - 1} more" : "")}: " +
+                "restrained warping cannot be combined with torsional springs (couplings); model the member on each side of the coupling as its own shaft file, or state 'warping: free'");
+        }
         var segs = model.Segments.Select(s =>
         {
-            var sec = s.Section ?? throw new SectionTwistException("warping", $"segment {s.Label}: tapered segments cannot be combined with restrained warping; use prismatic segments");
+            var sec = s.Section ?? throw new SectionTwistException("warping", $"segment {s.Label} (stations {s.From} to {s.To}): a tapered segment cannot be combined with restrained warping; split it into prismatic segments of stepped sections, or state 'warping: free'");
             double g = s.Material.ShearModulus, len = Length(model, s);
             var mat = sec.WarpingConstant is > 0 ? s.Material : s.Material with { YoungsModulus = s.Material.YoungsModulus ?? 2.6 * g };
             // A section without warping gets a warping length of 1e-4 of the segment: Saint-Venant torsion to round-off.
             double iw = sec.WarpingConstant is > 0 ? sec.WarpingConstant.Value : Math.Pow(1e-4 * len, 2) * g * sec.TorsionConstant / mat.YoungsModulus!.Value;
-            return new WarpingSegment(s.From, s.To, new WarpingSection(sec.TorsionConstant, iw, sec.MaxSectorialCoordinate ?? 0, sec.ShearPerTorque, sec.Description), mat) { Name = s.Name };
+            var section = new WarpingSection(sec.TorsionConstant, iw, sec.MaxSectorialCoordinate ?? 0, sec.ShearPerTorque, sec.Description)
+            {
+                // a section without warping (round, closed) has no warping shear to speak of: its factor stays 0 silently
+                WarpingShearFactor = sec.WarpingShearFactor ?? (sec.WarpingConstant is > 0 ? 0 : double.Epsilon),
+                ShearUnbounded = sec.PeakShearUnbounded,
+            };
+            return new WarpingSegment(s.From, s.To, section, mat) { Name = s.Name };
         }).ToArray();
         var member = new WarpingMember
         {
@@ -44,6 +54,7 @@ internal static class ShaftWarping
             Warping = model.Warping,
         };
         var result = WarpingMemberSolver.Solve(member);
+        if (r.Bending is { } bending) result = WarpingBending.Combine(result, bending);
         return r with { Warping = result, WarpingWarnings = result.Warnings };
     }
 

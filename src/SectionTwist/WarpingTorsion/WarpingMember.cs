@@ -45,13 +45,27 @@ public sealed record WarpingSegment(string From, string To, WarpingSection Secti
 /// <param name="Description">Optional text for tables.</param>
 public sealed record WarpingSection(double TorsionConstant, double WarpingConstant, double MaxSectorialCoordinate, double ShearPerTorque, string? Description = null)
 {
+    /// <summary>
+    /// Warping shear factor q_w = max |grad chi|, m^3 (<see cref="Warping.WarpingResult.WarpingShearFactor"/>; thin walls:
+    /// max S_w / t); the warping shear stress is E |phi'''| q_w. 0 when not known: the warping shear is then left out
+    /// with a warning.
+    /// </summary>
+    public double WarpingShearFactor { get; init; }
+
+    /// <summary>True when the section's peak shear is unbounded (sharp re-entrant corner); shear results are then flagged.</summary>
+    public bool ShearUnbounded { get; init; }
+
     /// <summary>The values of an analysed section; it must have been analysed with <see cref="AnalysisOptions.Warping"/>.</summary>
     public static WarpingSection From(SectionResult result, string? description = null)
     {
         ArgumentNullException.ThrowIfNull(result);
         var w = result.Warping ?? throw new SectionTwistException("no-warping",
             $"{result.Profile.Name}: the section was analysed without its warping function; analyse it with AnalysisOptions.Warping = true");
-        return new(result.TorsionConstant, w.WarpingConstant, w.MaxSectorialCoordinate, result.MaxShearPerTorque, description ?? result.Profile.Name);
+        return new(result.TorsionConstant, w.WarpingConstant, w.MaxSectorialCoordinate, result.MaxShearPerTorque, description ?? result.Profile.Name)
+        {
+            WarpingShearFactor = w.WarpingShearFactor,
+            ShearUnbounded = double.IsPositiveInfinity(result.EstimatedRelativeError.MaxShear) || double.IsPositiveInfinity(w.EstimatedError.WarpingShearFactor),
+        };
     }
 }
 

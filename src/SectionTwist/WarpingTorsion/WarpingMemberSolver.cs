@@ -132,8 +132,9 @@ public static class WarpingMemberSolver
             {
                 double x = len * q / (pts.Length - 1);
                 el.Field(ends, x, phi);
+                double sv = Math.Abs(gj * phi[1]) * seg.Section.ShearPerTorque, tw = e * seg.Section.WarpingShearFactor * Math.Abs(phi[3]);
                 pts[q] = new WarpingPoint(x0 + x, phi[0], phi[1], gj * phi[1], -eiw * phi[3], -eiw * phi[2],
-                    e * seg.Section.MaxSectorialCoordinate * Math.Abs(phi[2]), Math.Abs(gj * phi[1]) * seg.Section.ShearPerTorque);
+                    e * seg.Section.MaxSectorialCoordinate * Math.Abs(phi[2]), sv, tw, sv + tw);
             }
             segs.Add(new WarpingSegmentResult
             {
@@ -142,6 +143,9 @@ public static class WarpingMemberSolver
                 MaxBimoment = pts.Max(p => Math.Abs(p.Bimoment)),
                 MaxWarpingNormalStress = pts.Max(p => p.WarpingNormalStress),
                 MaxSaintVenantShear = pts.Max(p => p.SaintVenantShear),
+                MaxWarpingShear = pts.Max(p => p.WarpingShear),
+                MaxCombinedShear = pts.Max(p => p.CombinedShear),
+                ShearUnbounded = seg.Section.ShearUnbounded,
                 MaxRotation = pts.Max(p => Math.Abs(p.Rotation)),
                 WarpingLength = Math.Sqrt(eiw / gj),
             });
@@ -149,7 +153,11 @@ public static class WarpingMemberSolver
         var warnings = new List<string>();
         if (!member.Warping.Values.Any(w => w.Kind != WarpingEndKind.Free))
             warnings.Add("warping is free at every station: the twist is T L / (G J) with no warping stresses; if any end or support restrains warping (end plates, continuity), state it, since twist and stresses change");
-        warnings.Add("warping shear stresses are not included in the shear values; lateral-torsional buckling, local buckling and connection design are not checked: follow the local steel design code");
+        foreach (var seg in elements.Select(x => x.Seg).Where(s => !(s.Section.WarpingShearFactor > 0)))
+            warnings.Add($"segment {seg.Label}: the section gives no warping shear factor; the warping shear is left out of the shear values (analyse the section with its warping function)");
+        foreach (var seg in elements.Select(x => x.Seg).Where(s => s.Section.ShearUnbounded))
+            warnings.Add($"segment {seg.Label}: the section has a sharp re-entrant corner; its Saint-Venant and warping shear peaks are unbounded (the tables say so); model the real fillet radii");
+        warnings.Add("the combined shear adds the Saint-Venant and warping peaks (a bound: they need not lie at the same point); lateral-torsional buckling, local buckling and connection design are not checked: follow the local steel design code and licensed engineering practice");
         return new WarpingMemberResult { Stations = st, Segments = segs.AsReadOnly(), Warnings = warnings.AsReadOnly() };
     }
 }

@@ -222,4 +222,15 @@ public partial class ApiDocsTests
         double gj = steel.ShearModulus * sec.TorsionConstant, a = Math.Sqrt(steel.YoungsModulus!.Value * sec.Warping!.WarpingConstant / gj);
         Tol.Rel(150 / gj * (1.2 - a * Math.Tanh(1.2 / a)), r.Stations[1].Rotation, 1e-9, "Vlasov ch. 5");
     }
+
+    [Fact]
+    public void Composite_example_matches_the_exact_bonded_bar()
+    {
+        var r = ApiExamples.SteelCoreInBrassSleeve();
+        // exact: GJ = G1 J1 + G2 J2 for bonded rings (Gere, Mechanics of Materials, sec. 3.8, from memory of the section)
+        double j1 = Math.PI * Math.Pow(0.020, 4) / 2, j2 = Math.PI * (Math.Pow(0.025, 4) - Math.Pow(0.020, 4)) / 2;
+        double gj = 79.3e9 * j1 + 37e9 * j2;
+        Tol.Rel(gj, r.TorsionalRigidity, 1e-6, "Gere sec. 3.8 (from memory of the section)");
+        Tol.Rel(79.3e9 * j1 / gj, r.Materials[0].TorqueShare, 1e-5, "Gere sec. 3.8 (from memory of the section)");
+    }
 }

@@ -1,4 +1,5 @@
 using System.Globalization;
+using SectionTwist.Composite;
 using SectionTwist.Dynamics;
 using SectionTwist.Geometry;
 using SectionTwist.Import;
@@ -242,5 +243,18 @@ public static class ApiExamples
         WarpingMemberResult result = WarpingMemberSolver.Solve(member);
         // result.Stations[1].Rotation in rad; result.Segments[0].MaxWarpingNormalStress in Pa.
         return result;
+    }
+
+    // --- docs/api.md: "Composite sections" ---
+    public static CompositeResult SteelCoreInBrassSleeve()
+    {
+        // A steel bar of 20 mm radius in a bonded brass sleeve to 25 mm: the interface circle is drawn by both parts.
+        Loop interfaceCircle = LoopBuilder.Circle(default, 0.020);
+        var core = new CompositePart("core", new Profile([new Region(interfaceCircle)]), ShaftMaterials.All["steel-1045-cd"]);
+        var sleeve = new CompositePart("sleeve",
+            new Profile([new Region(LoopBuilder.Circle(default, 0.025), [interfaceCircle])]), ShaftMaterials.All["brass"]);
+        var section = new CompositeSection([core, sleeve], "sleeved shaft");
+        // GJ in N*m^2; J of the reference material (here the steel) in m^4; per material tau/T in 1/m^3 and torque share.
+        return CompositeAnalyzer.Analyze(section, reference: core.Material);
     }
 }

@@ -23,6 +23,23 @@ internal static class Published
         return (Math.PI * k / 32, 16 * outer / (Math.PI * k));
     }
 
+    /// <summary>Ellipse warping constant from the exact warping function psi = -k x y, k = (a^2 - b^2)/(a^2 + b^2): Iw = k^2 pi a^3 b^3 / 24 (sec. 105).</summary>
+    public static double EllipseWarpingConstant(double a, double b)
+    {
+        double k = (a * a - b * b) / (a * a + b * b);
+        return k * k * Math.PI * a * a * a * b * b * b / 24;
+    }
+
+    /// <summary>
+    /// Cantilever in non-uniform torsion, warping restrained at the root, end torque T: phi(L) = T/(GJ) (L - a tanh(L/a)),
+    /// a = sqrt(E Iw / (G J)) (Vlasov, Thin-Walled Elastic Beams, 2nd ed., ch. 5).
+    /// </summary>
+    public static double RestrainedCantileverTwist(double t, double l, double g, double j, double e, double iw)
+    {
+        double a = Math.Sqrt(e * iw / (g * j));
+        return t / (g * j) * (l - a * Math.Tanh(l / a));
+    }
+
     /// <summary>Ellipse, semi-axes a &gt;= b: J = pi a^3 b^3 / (a^2 + b^2), tau = 2 T / (pi a b^2) (sec. 105).</summary>
     public static (double J, double Tau) Ellipse(double a, double b) =>
         (Math.PI * a * a * a * b * b * b / (a * a + b * b), 2 / (Math.PI * a * b * b));

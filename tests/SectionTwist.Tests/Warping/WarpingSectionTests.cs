@@ -81,6 +81,34 @@ public class WarpingSectionTests
         Assert.Equal(WarpingClass.WarpingSensitive, w.Classification);
     }
 
+    private const string WarpingShearSource = "Vlasov, Thin-Walled Elastic Beams, 2nd ed., ch. 1: tau_w = E S_w phi''' / t with the sectorial statical moment S_w";
+
+    // Warping shear of a channel (centreline b, h as above, tf = tw = t, fillets r = t so no corner is singular): omega
+    // runs e h / 2 at the corners and (e - b) h / 2 at the tips, so S_w along a flange is extreme where omega changes sign,
+    // x = e from the web: |S_w| = t h (b - e)^2 / 4, larger than at the corner (t h b (b - 2 e) / 4) and at mid-web
+    // (t h^2 b^2 t / (8 (6 b t + h t))); q_w = h (b - e)^2 / 4. The fillet adds a local concentration of order t / b.
+    [Theory]
+    [InlineData(1.0)]
+    [InlineData(2.0)]
+    [InlineData(4.0)]
+    public void Channel_warping_shear_matches_the_thin_walled_value(double t)
+    {
+        var w = Run(FormattableString.Invariant($"channel:h=200,b=80,tw={t},tf={t},r={t}")).Warping!;
+        double tt = t / 1000, b = 0.080 - tt / 2, h = 0.200 - tt;
+        double e = 3 * b * b * tt / (6 * b * tt + h * tt);
+        Tol.Rel(h * (b - e) * (b - e) / 4, w.WarpingShearFactor, 1.0 * tt / b, WarpingShearSource + "; S_w of the channel derived from it");
+        Assert.True(w.EstimatedError.WarpingShearFactor < 1e-3 * w.WarpingShearFactor, $"estimate {w.EstimatedError.WarpingShearFactor:E2}");
+    }
+
+    // A sharp re-entrant corner makes the warping shear singular, like the Saint-Venant peak (common practice, no source):
+    // its estimate is unbounded.
+    [Fact]
+    public void Warping_shear_at_a_sharp_corner_is_unbounded()
+    {
+        var w = Run("ibeam:h=200,b=100,tw=2,tf=2").Warping!;
+        Assert.True(double.IsPositiveInfinity(w.EstimatedError.WarpingShearFactor));
+    }
+
     // Channel, centreline dimensions b (flange, to the web centreline), h (between flange centrelines): shear centre
     // e = 3 b^2 tf / (6 b tf + h tw) from the web centreline, away from the flanges; Iw = tf b^3 h^2 (3 b tf + 2 h tw) / (12 (6 b tf + h tw)).
     [Theory]

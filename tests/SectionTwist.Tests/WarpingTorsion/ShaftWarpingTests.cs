@@ -62,6 +62,40 @@ public class ShaftWarpingTests
         Assert.Contains(r.WarpingWarnings, w => w.Contains("lateral-torsional buckling", StringComparison.Ordinal));
     }
 
+    // Bending and warping normal stresses add (superposition in linear elasticity; the thin-walled normal stress
+    // N/A + M y / I + B omega / Iw, Vlasov ch. 1): the reported sum is at least each part and at most the sum of their
+    // maxima.
+    [Fact]
+    public void Bending_and_warping_normal_stresses_are_combined()
+    {
+        string text = Beam.Replace("  - {name: B, after: 1200}", "  - {name: M, after: 600}\n  - {name: B, after: 600}", StringComparison.Ordinal)
+            .Replace("  - {from: A, to: B, section: beam, material: frame}", "  - {from: A, to: M, section: beam, material: frame}\n  - {from: M, to: B, section: beam, material: frame}", StringComparison.Ordinal)
+            + "warping: {A: restrained}\nbending:\n  bearings: [{at: A}, {at: B}]\n  loads:\n    - {at: M, force: {y: 0, z: -5 kN}}\n";
+        var r = Solve(text);
+        Assert.NotNull(r.Bending);
+        foreach (var s in r.Warping!.Segments)
+        {
+            double bendMax = r.Bending!.Samples.Where(b => b.Segment == s.Label).Max(b => Math.Abs(b.Stress.Normal));
+            double combined = s.MaxCombinedNormalStress!.Value;
+            Assert.True(combined >= s.MaxWarpingNormalStress * (1 - 1e-12) && combined >= bendMax * (1 - 1e-12), $"{s.Label}: {combined} below a part");
+            Assert.True(combined <= (s.MaxWarpingNormalStress + bendMax) * (1 + 1e-12), $"{s.Label}: {combined} above the sum of the maxima");
+        }
+        Assert.Null(Solve(Beam + "warping: {A: restrained}\n").Warping!.Segments[0].MaxCombinedNormalStress);
+    }
+
+    // Restrained warping with a coupling spring is refused with a message naming the spring, its stations and the remedy
+    // (the house rule for bad input; common practice, no source).
+    [Fact]
+    public void Restrained_warping_with_a_spring_names_the_spring_and_the_remedy()
+    {
+        string text = Beam.Replace("  - {name: B, after: 1200}", "  - {name: B, after: 1200}\n  - {name: C, after: 100}", StringComparison.Ordinal)
+            .Replace("  - {at: B, torque: 300}", "  - {at: C, torque: 300}", StringComparison.Ordinal)
+            + "springs:\n  - {name: coupling, between: [B, C], stiffness: 20 kN*m/rad}\nwarping: {A: restrained}\n";
+        var ex = Assert.Throws<SectionTwistException>(() => Solve(text));
+        Assert.Contains("spring coupling (stations B and C)", ex.Message, StringComparison.Ordinal);
+        Assert.Contains("warping: free", ex.Message, StringComparison.Ordinal);
+    }
+
     [Fact]
     public void A_bad_warping_value_names_the_line_and_the_remedy()
     {

@@ -41,6 +41,30 @@ public class WarpingMemberTests
         foreach (var p in r.Segments.SelectMany(s => s.Points)) Tol.Rel(t, p.SaintVenantTorque + p.WarpingTorque, 1e-7, "the two parts carry the whole torque");
     }
 
+    // Warping shear of the same cantilever: the warping torque -E Iw phi''' is T cosh((L - x)/a) / cosh(L/a) (Vlasov
+    // ch. 5; AISC Design Guide 9, from memory), so tau_w = E |phi'''| q_w = T q_w / Iw at the root and
+    // T q_w / (Iw cosh(L/a)) at the tip; the combined shear is the sum of the two peaks at each point (a bound; common
+    // practice, no source).
+    [Fact]
+    public void Cantilever_warping_shear_follows_the_warping_torque()
+    {
+        double t = 1000, l = 2, qw = 1.2e-4, gj = 81e9 * J, a = Math.Sqrt(210e9 * Iw / gj);
+        var st = new[] { new Station("A", 0), new Station("B", l) };
+        var sec = new WarpingSection(J, Iw, Omega, Tau) { WarpingShearFactor = qw };
+        var r = WarpingMemberSolver.Solve(new WarpingMember
+        {
+            Stations = st, Segments = [new WarpingSegment("A", "B", sec, Steel)], Loads = [new PointTorque("B", t)], FixedStations = ["A"],
+            Warping = new Dictionary<string, WarpingEnd> { ["A"] = WarpingEnd.Restrained },
+        });
+        var s = r.Segments[0];
+        Tol.Rel(t * qw / Iw, s.Points[0].WarpingShear, 1e-9, Cantilever + "; warping torque T at the root");
+        Tol.Rel(t * qw / Iw / Math.Cosh(l / a), s.Points[^1].WarpingShear, 1e-7, Cantilever + "; warping torque T / cosh(L/a) at the tip");
+        Tol.Rel(t * qw / Iw, s.MaxWarpingShear, 1e-9, Cantilever);
+        foreach (var p in s.Points) Tol.Rel(p.SaintVenantShear + p.WarpingShear, p.CombinedShear, 1e-12, "sum of the peaks");
+        Assert.DoesNotContain(r.Warnings, w => w.Contains("no warping shear factor", StringComparison.Ordinal));
+        Assert.False(s.ShearUnbounded);
+    }
+
     // Both ends fixed and warping-restrained, torque T at mid-span: by symmetry phi' = 0 at mid-span too, and each half
     // carries T/2: phi(L/2) = T/(2GJ) (L/2 - 2a tanh(L/(4a))) (solution of the differential equation, Vlasov ch. 5;
     // the same case in AISC Design Guide 9, from memory).

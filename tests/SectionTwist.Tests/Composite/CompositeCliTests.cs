@@ -1,0 +1,95 @@
+using System.Text.Json.Nodes;
+using SectionTwist.Tests.Cli;
+using SectionTwist.Tests.Import;
+
+namespace SectionTwist.Tests.Composite;
+
+/// <summary>
+/// <c>section --material</c>: composite templates and drawing layers. Reference values: the exact concentric composite
+/// bar, (G J)_eff = G1 J1 + G2 J2 and tau_i = G_i r T / (G J)_eff (Gere, Mechanics of Materials, sec. 3.8, from memory
+/// of the section number); library moduli steel 79.3 GPa, brass 37 GPa (Gere, as in ShaftMaterials).
+/// </summary>
+public sealed class CompositeCliTests : IDisposable
+{
+    private readonly string _dir = CliRunner.TempDir();
+
+    public void Dispose() => Directory.Delete(_dir, recursive: true);
+
+    private static double Ring(double a, double b) => Math.PI * (Math.Pow(b, 4) - Math.Pow(a, 4)) / 2;
+
+    [Fact]
+    public void Sleeved_template_prints_rigidity_shares_peaks_and_the_caution()
+    {
+        var (code, output, err) = CliRunner.Run("section", "sleeved:d=40,t=5", "--material", "core=steel-1045-cd,sleeve=brass", "--accuracy", "1e-3");
+        Assert.True(code == 0, err);
+        double gj = 79.3e9 * Ring(0, 0.020) + 37e9 * Ring(0.020, 0.025);
+        Assert.Contains("torsional rigidity GJ", output);
+        Assert.Contains("N·m²", output);
+        Assert.Contains(NumberText(gj), output);
+        Assert.Contains("torque share", output);
+        Assert.Contains("MPa per kN·m", output);
+        Assert.Contains("caution: Composite section", output);
+        Assert.Contains("licensed engineering practice", output);
+    }
+
+    // the rigidity printed to 6 significant digits by the Units facility
+    private static string NumberText(double v) => SectionTwist.Units.NumberText.Format(v, 6);
+
+    [Fact]
+    public void Composite_json_matches_its_schema_and_the_exact_values()
+    {
+        var n = JsonSchemaCheck.Valid("section-composite", "section", "filled:D=50,t=4", "--material", "core=aluminium-6061-t6,tube=steel-s355", "--reference", "tube", "--accuracy", "1e-3", "--json");
+        double gj = 26e9 * Ring(0, 0.021) + 79.3e9 * Ring(0.021, 0.025);
+        const string src = "exact composite bar (Gere sec. 3.8, from memory of the section)";
+        Tol.Rel(gj, (double)n["torsionalRigidity"]!, 1e-5, src);
+        Tol.Rel(gj / 79.3e9, (double)n["equivalentTorsionConstant"]!, 1e-5, src);
+        var tube = n["materials"]!.AsArray().Single(m => (string?)m!["parts"]![0] == "tube")!;
+        Tol.Rel(79.3e9 * 0.025 / gj, (double)tube["maxShearPerTorque"]!, 5e-3, src);
+        Tol.Rel(79.3e9 * Ring(0.021, 0.025) / gj, (double)tube["torqueShare"]!, 1e-4, src);
+        Assert.Contains("bonded", (string?)n["caution"]);
+    }
+
+    [Fact]
+    public void Drawing_layers_are_the_parts()
+    {
+        string path = Path.Combine(_dir, "sleeved.dxf");
+        // core circle r 10 on SHAFT; the sleeve ring r 10 .. 15 on SLEEVE (its inner circle drawn again)
+        File.WriteAllText(path, new DxfText().Header(4).Entities().Circle(0, 0, 10, "SHAFT").Circle(0, 0, 15, "SLEEVE").Circle(0, 0, 10, "SLEEVE").End().ToString());
+        var n = JsonSchemaCheck.Valid("section-composite", "section", path, "--material", "SHAFT=steel-1045-cd,SLEEVE=brass", "--accuracy", "1e-3", "--json");
+        double gj = 79.3e9 * Ring(0, 0.010) + 37e9 * Ring(0.010, 0.015);
+        Tol.Rel(gj, (double)n["torsionalRigidity"]!, 1e-5, "exact composite bar (Gere sec. 3.8, from memory of the section)");
+        Assert.Equal("SHAFT", (string?)n["materials"]![0]!["parts"]![0]);
+    }
+
+    [Fact]
+    public void A_composite_template_without_materials_names_its_parts()
+    {
+        var (code, _, err) = CliRunner.Run("section", "sleeved:d=40,t=5");
+        Assert.Equal(2, code);
+        Assert.Contains("core, sleeve", err);
+        Assert.DoesNotContain("   at ", err);
+    }
+
+    [Fact]
+    public void A_mistyped_part_or_material_is_named_with_the_nearest()
+    {
+        var (code, _, err) = CliRunner.Run("section", "sleeved:d=40,t=5", "--material", "core=steel-1045-cd,sleve=brass");
+        Assert.Equal(2, code);
+        Assert.Contains("'sleve'", err);
+        Assert.Contains("sleeve", err);
+        (code, _, err) = CliRunner.Run("section", "sleeved:d=40,t=5", "--material", "core=steel-1054-cd,sleeve=brass");
+        Assert.Equal(2, code);
+        Assert.Contains("steel-1045-cd", err);
+    }
+
+    [Fact]
+    public void Layers_that_share_part_of_an_edge_are_refused_with_the_remedy()
+    {
+        string path = Path.Combine(_dir, "halves.dxf");
+        // two rectangles side by side: they share one edge, not a whole loop
+        File.WriteAllText(path, new DxfText().Header(4).Entities().Rect(0, 0, 20, 10, "A").Rect(20, 0, 20, 10, "B").End().ToString());
+        var (code, _, err) = CliRunner.Run("section", path, "--material", "A=steel-1045-cd,B=brass");
+        Assert.Equal(2, code);
+        Assert.Contains("whole closed loops", err);
+    }
+}
