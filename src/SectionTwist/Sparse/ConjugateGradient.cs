@@ -99,6 +99,7 @@ internal static class ConjugateGradient
         return Math.Sqrt(s) * UnitRoundoff;
     }
 
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveOptimization)] // Vector<T>: not in ReadyToRun images
     private static double Dot(double[] u, double[] v)
     {
         var vu = System.Numerics.Vector<double>.Count;

@@ -1,4 +1,5 @@
 using System.Numerics;
+using System.Runtime.CompilerServices;
 using System.Runtime.InteropServices;
 
 namespace SectionTwist.Sparse;
@@ -17,6 +18,7 @@ internal static class DenseKernels
     /// column-major block at <paramref name="off"/> with leading dimension <paramref name="ld"/> and
     /// <paramref name="k"/> columns; C is column-major m x ncols (entries above the diagonal are left unset).
     /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)] // Vector<T> code is left out of ReadyToRun images: JIT it optimized at once
     public static void LowerProduct(double[] l, long off, int ld, int r0, int m, int ncols, int k, double[] c)
     {
         var cs = c.AsSpan(0, m * ncols);
@@ -42,6 +44,7 @@ internal static class DenseKernels
     /// In-place Cholesky of the nc x nc diagonal block of an nr x nc column-major block (leading dimension nr) and
     /// L21 = A21 L11^-T for the rows below; returns the local column of a non-positive pivot, or -1.
     /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)] // Vector<T> code is left out of ReadyToRun images: JIT it optimized at once
     public static int FactorPanel(double[] l, long off, int nr, int nc)
     {
         for (int j = 0; j < nc; j++)
@@ -71,6 +74,7 @@ internal static class DenseKernels
     }
 
     /// <summary>y += s0 x0 + s1 x1 + s2 x2 + s3 x3.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)] // Vector<T> code is left out of ReadyToRun images: JIT it optimized at once
     private static void Axpy4(Span<double> y, ReadOnlySpan<double> x0, ReadOnlySpan<double> x1, ReadOnlySpan<double> x2,
         ReadOnlySpan<double> x3, double s0, double s1, double s2, double s3)
     {
@@ -91,6 +95,7 @@ internal static class DenseKernels
     }
 
     /// <summary>y += s x.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)] // Vector<T> code is left out of ReadyToRun images: JIT it optimized at once
     private static void Axpy1(Span<double> y, ReadOnlySpan<double> x, double s)
     {
         int n = y.Length, i = 0, w = Vector<double>.Count;
@@ -99,6 +104,7 @@ internal static class DenseKernels
         for (; i < n; i++) y[i] += s * x[i];
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)] // Vector<T> code is left out of ReadyToRun images: JIT it optimized at once
     private static void Scale(Span<double> y, double s)
     {
         int n = y.Length, i = 0, w = Vector<double>.Count;
