@@ -32,30 +32,7 @@ internal static class CompositeSolver
         for (int i = 0; i < nNodes; i++) { int l = mesh.NodeLoop[i]; dof[i] = l < 0 ? nd++ : holeDof[l]; }
         var f = new double[nd];
         for (int l = 0; l < loops.Length; l++) if (holeDof[l] >= 0) f[holeDof[l]] += 2 * holeArea[l];
-        var trip = new TripletMatrix(nd, nEl * 36);
-        Span<double> ke = stackalloc double[36];
-        Span<double> fe = stackalloc double[6];
-        Span<double> xe = stackalloc double[6];
-        Span<double> ye = stackalloc double[6];
-        for (int e = 0; e < nEl; e++)
-        {
-            if ((e & 4095) == 0) ct.ThrowIfCancellationRequested();
-            double w = zoneWeight[mesh.ElementZone[e]];
-            TorsionSolver.Gather(mesh, e, xe, ye);
-            TorsionSolver.ElementMatrices(xe, ye, ke, fe);
-            for (int a = 0; a < 6; a++)
-            {
-                int da = dof[mesh.Elements[6 * e + a]];
-                if (da < 0) continue;
-                f[da] += fe[a];
-                for (int b = 0; b < 6; b++)
-                {
-                    int db = dof[mesh.Elements[6 * e + b]];
-                    if (db >= 0) trip.Add(da, db, w * ke[6 * a + b]);
-                }
-            }
-        }
-        var k = trip.ToCsc();
+        var k = TorsionSolver.AssembleReduced(mesh, dof, nd, f, ct, e => zoneWeight[mesh.ElementZone[e]]);
         var u = new double[nd];
         if (nd > 0) SpdSolver.Create(k, SpdSolver.DefaultTolerance, ct).Solve(f, u);
         double residual = nd > 0 ? k.RelativeResidual(u, f) : 0;
@@ -63,6 +40,8 @@ internal static class CompositeSolver
         for (int i = 0; i < nd; i++) j += u[i] * f[i];
         var psi = new double[nNodes];
         for (int i = 0; i < nNodes; i++) psi[i] = dof[i] < 0 ? 0 : u[dof[i]];
+        Span<double> xe = stackalloc double[6];
+        Span<double> ye = stackalloc double[6];
 
         // per material: torque integral(x tau_zy - y tau_zx) = -integral(x psi_x + y psi_y) about the origin, area, and
         // nodal gradients averaged over that material's elements only (the tangential shear jumps at an interface)

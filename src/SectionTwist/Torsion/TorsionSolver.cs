@@ -119,8 +119,12 @@ internal static class TorsionSolver
     /// <summary>How the last two-grid solve on this thread ended (for tests and benchmarks).</summary>
     [ThreadStatic] internal static ConjugateGradient.Outcome? LastTwoGrid;
 
-    /// <summary>Assembles the matrix of the unknowns <paramref name="dof"/> directly (Dirichlet nodes dropped, hole nodes merged) and adds the loads to <paramref name="f"/>.</summary>
-    private static CscMatrix AssembleReduced(Mesh mesh, int[] dof, int n, double[] f, CancellationToken ct)
+    /// <summary>
+    /// Assembles the matrix of the unknowns <paramref name="dof"/> directly (Dirichlet nodes dropped, hole nodes merged) and
+    /// adds the loads to <paramref name="f"/>; with <paramref name="elementWeight"/> each element's stiffness (not its load)
+    /// is scaled by its weight (the composite section's G_ref / G_e).
+    /// </summary>
+    internal static CscMatrix AssembleReduced(Mesh mesh, int[] dof, int n, double[] f, CancellationToken ct, Func<int, double>? elementWeight = null)
     {
         int nEl = mesh.ElementCount;
         var trip = new TripletMatrix(n, nEl * 36);
@@ -133,6 +137,7 @@ internal static class TorsionSolver
             if ((e & 4095) == 0) ct.ThrowIfCancellationRequested();
             Gather(mesh, e, xe, ye);
             ElementMatrices(xe, ye, ke, fe);
+            double w = elementWeight?.Invoke(e) ?? 1;
             for (int a = 0; a < 6; a++)
             {
                 int da = dof[mesh.Elements[6 * e + a]];
@@ -141,7 +146,7 @@ internal static class TorsionSolver
                 for (int b = 0; b < 6; b++)
                 {
                     int db = dof[mesh.Elements[6 * e + b]];
-                    if (db >= 0) trip.Add(da, db, ke[6 * a + b]);
+                    if (db >= 0) trip.Add(da, db, w * ke[6 * a + b]);
                 }
             }
         }
