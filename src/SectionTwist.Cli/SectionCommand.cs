@@ -110,7 +110,7 @@ internal sealed class SectionCommand : ICommand
         using (var progress = new ProgressLine(ctx, $"section {source}"))
         using (progress.Pulse("plastic torsion"))
             plastic = plasticYield is { } yv ? Plastic.PlasticAnalyzer.Analyze(result, yv.Item1, new Plastic.PlasticOptions { MemoryBudgetBytes = ctx.MemoryBudget ?? AnalysisOptions.DefaultMemoryBudget }, ctx.Cancellation) : null;
-        if (plastic is not null && plasticPlot is not null) PlasticPlotHook.Write(plastic, plasticPlot);
+        if (plastic is not null && plasticPlot is not null) PlasticPlotHook.Write(plastic, plasticPlot, SectionPlotHook.Title(source, srcOptions.Part));
         if (json) ctx.Out.WriteLine(SectionJson.Write(result, source, plastic is null ? null : w => PlasticCli.WriteJson(w, plastic, plasticYield!.Value.Item2)));
         else
         {

@@ -18,6 +18,18 @@ public sealed class PlasticCliTests
         Assert.True(bytes.Length > 1000 && bytes[1] == (byte)'P' && bytes[2] == (byte)'N' && bytes[3] == (byte)'G', "a PNG was written");
     }
 
+    [Fact]
+    public void The_plastic_picture_is_titled_by_the_section_not_by_the_output_file()
+    {
+        // issue 11, pictures: "the plot title from the section, not from the output file's name"
+        string svg = Path.Combine(CliRunner.TempDir(), "out-file-name.svg");
+        var (exit, _, err) = CliRunner.Run("section", "rect:b=40,h=10", "--accuracy", "1e-3", "--plastic", "100MPa", "--plastic-plot", svg);
+        Assert.True(exit == 0, err);
+        string text = File.ReadAllText(svg);
+        Assert.Contains("rect:b=40,h=10: plastic zone", text, StringComparison.Ordinal);
+        Assert.DoesNotContain("out-file-name", text, StringComparison.Ordinal);
+    }
+
     [Theory]
     [InlineData("--plastic", "granite", "neither a material")]
     [InlineData("--plastic", "140", "neither a material")]
