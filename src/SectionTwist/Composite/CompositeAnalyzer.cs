@@ -39,8 +39,11 @@ public static class CompositeAnalyzer
             throw new SectionTwistException("memory-budget",
                 $"{section.Name}: the composite analysis at accuracy {acc.ToString("G2", CultureInfo.InvariantCulture)} needs about {need.ToString("G3", CultureInfo.InvariantCulture)} elements, more than the limit of {maxElements.ToString(CultureInfo.InvariantCulture)}; ask for a coarser accuracy (--accuracy) or raise --memory-budget MB");
         var materials = section.Materials;
-        var coarse = SolveAt(section, reference, h, ct);
-        var fine = SolveAt(section, reference, h / 2, ct);
+        // the estimate counts the envelope only: a thin part (a 5 mm sleeve on a 1 km core) needs far more elements, so the
+        // mesher gets the limit too and refuses instead of growing past the memory budget
+        int cap = (int)Math.Min(int.MaxValue / 4, maxElements);
+        var coarse = SolveAt(section, reference, h, ct, cap);
+        var fine = SolveAt(section, reference, h / 2, ct, cap);
         double gjRef = reference.ShearModulus;
         double jErr = Math.Abs(fine.J - coarse.J) / fine.J;
         var warnings = new List<AnalysisWarning>();
@@ -86,10 +89,10 @@ public static class CompositeAnalyzer
     }
 
     /// <summary>Meshes with edge length <paramref name="h"/>, finds each zone's part and solves.</summary>
-    internal static CompositeSolution SolveAt(CompositeSection section, Material reference, double h, CancellationToken ct)
+    internal static CompositeSolution SolveAt(CompositeSection section, Material reference, double h, CancellationToken ct, int maxTriangles = 4_000_000)
     {
         var env = section.Envelope;
-        var mesh = Mesher.Generate(env, section.Interfaces, new MeshOptions { MaxEdgeLength = h }, out _, ct);
+        var mesh = Mesher.Generate(env, section.Interfaces, new MeshOptions { MaxEdgeLength = h, MaxTriangles = maxTriangles }, out _, ct);
         int zones = mesh.ZoneSample.Length;
         var weight = new double[zones];
         var material = new int[zones];
