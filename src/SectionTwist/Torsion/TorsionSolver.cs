@@ -127,7 +127,9 @@ internal static class TorsionSolver
     internal static CscMatrix AssembleReduced(Mesh mesh, int[] dof, int n, double[] f, CancellationToken ct, Func<int, double>? elementWeight = null)
     {
         int nEl = mesh.ElementCount;
-        var trip = new TripletMatrix(n, nEl * 36);
+        var elementDofs = new int[6 * nEl];
+        for (int i = 0; i < elementDofs.Length; i++) elementDofs[i] = dof[mesh.Elements[i]];
+        var asm = new ElementAssembler(n, elementDofs, 6);
         Span<double> ke = stackalloc double[36];
         Span<double> fe = stackalloc double[6];
         Span<double> xe = stackalloc double[6];
@@ -137,20 +139,14 @@ internal static class TorsionSolver
             if ((e & 4095) == 0) ct.ThrowIfCancellationRequested();
             Gather(mesh, e, xe, ye);
             ElementMatrices(xe, ye, ke, fe);
-            double w = elementWeight?.Invoke(e) ?? 1;
             for (int a = 0; a < 6; a++)
             {
-                int da = dof[mesh.Elements[6 * e + a]];
-                if (da < 0) continue;
-                f[da] += fe[a];
-                for (int b = 0; b < 6; b++)
-                {
-                    int db = dof[mesh.Elements[6 * e + b]];
-                    if (db >= 0) trip.Add(da, db, w * ke[6 * a + b]);
-                }
+                int da = elementDofs[6 * e + a];
+                if (da >= 0) f[da] += fe[a];
             }
+            asm.Add(e, ke, elementWeight?.Invoke(e) ?? 1);
         }
-        return trip.ToCsc();
+        return asm.ToCsc();
     }
 
     internal static void Gather(Mesh mesh, int e, Span<double> xe, Span<double> ye)
