@@ -4,7 +4,7 @@ namespace SectionTwist.Sparse;
 /// Left-looking supernodal sparse Cholesky factorization (Ng and Peyton, "Block sparse Cholesky algorithms on advanced
 /// uniprocessor computers", SIAM J. Sci. Comput. 14(5), 1993; Rothberg and Gupta 1991): each supernode is a dense
 /// column-major block; the descendants that update it are kept in linked lists keyed by the next supernode they touch;
-/// the update is one dense product (<see cref="DenseKernels.LowerProduct"/>) scattered through relative row indices,
+/// the update is one dense product (<see cref="SyrkKernel.LowerProductParallel"/>) scattered through relative row indices,
 /// then the block is factored in place (<see cref="DenseKernels.FactorPanel"/>). All workspaces are sized from the
 /// symbolic analysis before the loop.
 /// </summary>
@@ -60,12 +60,12 @@ internal sealed class SupernodalCholesky : ISpdSolver
                 int p1 = pos[d], p2 = p1;
                 while (p2 < dnr && rows[drp + p2] < l) p2++;
                 int m = dnr - p1, ncu = p2 - p1;
-                DenseKernels.LowerProduct(lx, valPtr[d], dnr, p1, m, ncu, dnc, c);
+                SyrkKernel.LowerProductParallel(lx, valPtr[d] + p1, dnr, m, dnc, c, 0, m, true, ncu);
                 for (int jj = 0; jj < ncu; jj++)
                 {
                     long colOff = off + (long)(rows[drp + p1 + jj] - f) * nr;
                     int cOff = jj * m;
-                    for (int ii = jj; ii < m; ii++) lx[colOff + map[rows[drp + p1 + ii]]] -= c[cOff + ii];
+                    for (int ii = jj; ii < m; ii++) lx[colOff + map[rows[drp + p1 + ii]]] += c[cOff + ii];
                 }
                 pos[d] = p2;
                 if (p2 < dnr)

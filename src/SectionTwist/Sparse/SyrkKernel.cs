@@ -1,0 +1,148 @@
+using System.Runtime.CompilerServices;
+using System.Runtime.InteropServices;
+using System.Runtime.Intrinsics;
+
+namespace SectionTwist.Sparse;
+
+/// <summary>
+/// Register-blocked lower-trapezoidal product C = A A' (the BLAS SYRK/GEMM step of a supernodal Cholesky update) on a
+/// column-major block, with <see cref="Vector256{T}"/> fused multiply-adds: C is computed in 8 x 4 tiles held in eight
+/// vector registers over a block of at most <see cref="DepthBlock"/> columns of A, so each A element loaded feeds four
+/// multiply-adds (the micro-kernel structure of Goto and van de Geijn, "Anatomy of high-performance matrix
+/// multiplication", ACM TOMS 34(3), 2008, sec. 5, without packing: the supernode's columns are already contiguous).
+/// Tiles on the diagonal are computed whole, so entries of C just above its diagonal (row &lt; column, within
+/// the tile) are overwritten too: callers use only the lower trapezoid and must allow the strict upper part to change.
+/// </summary>
+internal static class SyrkKernel
+{
+    /// <summary>Columns of A (the inner dimension) per pass over C, to keep an A tile in the first-level cache.</summary>
+    public const int DepthBlock = 192;
+
+    /// <summary>Multiply-adds above which <see cref="LowerProductParallel"/> splits the columns over two threads.</summary>
+    public const long ParallelWork = 1_500_000;
+
+    /// <summary>
+    /// <see cref="LowerProduct"/> over columns [0, <paramref name="ncols"/>), on two threads when the product is large:
+    /// the columns are split where the two parts of the trapezoid hold about the same work (a multiple of 4 columns),
+    /// each entry is computed by one thread in the same order either way, so the result does not depend on the split.
+    /// </summary>
+    public static void LowerProductParallel(double[] a, long aOff, int lda, int m, int k, double[] c, long cOff, int ldc,
+        bool overwrite, int ncols)
+    {
+        double work = ((double)m * ncols - 0.5 * ncols * (double)ncols) * k;
+        if (work < ParallelWork || Environment.ProcessorCount < 2 || ncols < 8)
+        {
+            LowerProduct(a, aOff, lda, m, k, c, cOff, ldc, overwrite, 0, ncols);
+            return;
+        }
+        // columns [0, s) hold half of the trapezoid: s m - s^2 / 2 = (ncols m - ncols^2 / 2) / 2
+        double half = 0.5 * ((double)m * ncols - 0.5 * ncols * (double)ncols);
+        double s = m - Math.Sqrt(Math.Max(0, (double)m * m - 2 * half));
+        int split = Math.Clamp((int)Math.Round(s / 4) * 4, 4, ncols - 1);
+        Parallel.Invoke(
+            () => LowerProduct(a, aOff, lda, m, k, c, cOff, ldc, overwrite, 0, split),
+            () => LowerProduct(a, aOff, lda, m, k, c, cOff, ldc, overwrite, split, ncols));
+    }
+
+    /// <summary>
+    /// For <paramref name="col0"/> &lt;= j &lt; <paramref name="col1"/> and j &lt;= i &lt; <paramref name="m"/>: with <paramref name="overwrite"/>,
+    /// C[i, j] = -S[i, j], otherwise C[i, j] -= S[i, j], where S[i, j] = sum over t &lt; <paramref name="k"/> of
+    /// A[i, t] A[j, t]; A[i, t] = <paramref name="a"/>[aOff + i + t lda], C[i, j] = <paramref name="c"/>[cOff + i + j ldc].
+    /// Columns [<paramref name="col0"/>, <paramref name="col1"/>) of C only (a thread's share), col0 a multiple of 4.
+    /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    public static void LowerProduct(double[] a, long aOff, int lda, int m, int k, double[] c, long cOff, int ldc,
+        bool overwrite, int col0, int col1)
+    {
+        if (m <= 0 || col1 <= col0) return;
+        if (aOff < 0 || aOff + (long)Math.Max(k - 1, 0) * lda + m > a.Length) throw new ArgumentOutOfRangeException(nameof(aOff));
+        if (cOff < 0 || cOff + (long)(col1 - 1) * ldc + m > c.Length) throw new ArgumentOutOfRangeException(nameof(cOff));
+        ref double pa = ref Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(a), (nint)aOff);
+        ref double pc = ref Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(c), (nint)cOff);
+        if (k == 0)
+        {
+            if (overwrite)
+                for (int j = col0; j < col1; j++) c.AsSpan((int)(cOff + (long)j * ldc + j), m - j).Clear();
+            return;
+        }
+        for (int t0 = 0; t0 < k; t0 += DepthBlock)
+        {
+            int kb = Math.Min(DepthBlock, k - t0);
+            bool ow = overwrite && t0 == 0;
+            ref double pat = ref Unsafe.Add(ref pa, (nint)((long)t0 * lda));
+            int j0 = col0;
+            for (; j0 + 4 <= col1; j0 += 4)
+            {
+                int i0 = j0;
+                for (; i0 + 8 <= m; i0 += 8) Tile8x4(ref pat, lda, kb, i0, j0, ref pc, ldc, ow);
+                for (; i0 < m; i0++)
+                    for (int j = j0; j < j0 + 4; j++) Single(ref pat, lda, kb, i0, j, ref pc, ldc, ow);
+            }
+            for (; j0 < col1; j0++)
+                for (int i0 = j0; i0 < m; i0++) Single(ref pat, lda, kb, i0, j0, ref pc, ldc, ow);
+        }
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining | MethodImplOptions.AggressiveOptimization)]
+    private static void Tile8x4(ref double a, int lda, int k, int i0, int j0, ref double c, int ldc, bool overwrite)
+    {
+        var c00 = Vector256<double>.Zero; var c10 = Vector256<double>.Zero;
+        var c01 = Vector256<double>.Zero; var c11 = Vector256<double>.Zero;
+        var c02 = Vector256<double>.Zero; var c12 = Vector256<double>.Zero;
+        var c03 = Vector256<double>.Zero; var c13 = Vector256<double>.Zero;
+        ref double ai = ref Unsafe.Add(ref a, i0);
+        ref double aj = ref Unsafe.Add(ref a, j0);
+        for (int t = 0; t < k; t++)
+        {
+            var x0 = Vector256.LoadUnsafe(ref ai);
+            var x1 = Vector256.LoadUnsafe(ref ai, 4);
+            var b0 = Vector256.Create(aj);
+            var b1 = Vector256.Create(Unsafe.Add(ref aj, 1));
+            var b2 = Vector256.Create(Unsafe.Add(ref aj, 2));
+            var b3 = Vector256.Create(Unsafe.Add(ref aj, 3));
+            c00 = Vector256.FusedMultiplyAdd(x0, b0, c00); c10 = Vector256.FusedMultiplyAdd(x1, b0, c10);
+            c01 = Vector256.FusedMultiplyAdd(x0, b1, c01); c11 = Vector256.FusedMultiplyAdd(x1, b1, c11);
+            c02 = Vector256.FusedMultiplyAdd(x0, b2, c02); c12 = Vector256.FusedMultiplyAdd(x1, b2, c12);
+            c03 = Vector256.FusedMultiplyAdd(x0, b3, c03); c13 = Vector256.FusedMultiplyAdd(x1, b3, c13);
+            ai = ref Unsafe.Add(ref ai, lda);
+            aj = ref Unsafe.Add(ref aj, lda);
+        }
+        ref double d = ref Unsafe.Add(ref c, (nint)((long)j0 * ldc + i0));
+        Store(ref d, c00, c10, overwrite);
+        Store(ref Unsafe.Add(ref d, ldc), c01, c11, overwrite);
+        Store(ref Unsafe.Add(ref d, 2 * ldc), c02, c12, overwrite);
+        Store(ref Unsafe.Add(ref d, 3 * ldc), c03, c13, overwrite);
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static void Store(ref double d, Vector256<double> lo, Vector256<double> hi, bool overwrite)
+    {
+        if (overwrite)
+        {
+            lo = -lo;
+            hi = -hi;
+        }
+        else
+        {
+            lo = Vector256.LoadUnsafe(ref d) - lo;
+            hi = Vector256.LoadUnsafe(ref d, 4) - hi;
+        }
+        lo.StoreUnsafe(ref d);
+        hi.StoreUnsafe(ref d, 4);
+    }
+
+    private static void Single(ref double a, int lda, int k, int i, int j, ref double c, int ldc, bool overwrite)
+    {
+        double s = 0;
+        ref double ai = ref Unsafe.Add(ref a, i);
+        ref double aj = ref Unsafe.Add(ref a, j);
+        for (int t = 0; t < k; t++)
+        {
+            s = Math.FusedMultiplyAdd(ai, aj, s);
+            ai = ref Unsafe.Add(ref ai, lda);
+            aj = ref Unsafe.Add(ref aj, lda);
+        }
+        ref double d = ref Unsafe.Add(ref c, (nint)((long)j * ldc + i));
+        d = overwrite ? -s : d - s;
+    }
+}
