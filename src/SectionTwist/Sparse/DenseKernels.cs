@@ -22,16 +22,19 @@ internal static class DenseKernels
     /// left-looking (Golub and Van Loan, sec. 4.2.9, block Cholesky): each block of <see cref="PanelBlock"/> columns
     /// is first updated by all columns before it with the register-blocked product of <see cref="SyrkKernel"/>
     /// (SYRK on the diagonal block, GEMM below it, in one call), then factored column by column. The strict upper
-    /// triangle of the diagonal block is used as scratch and holds no meaning afterwards.
+    /// triangle of the diagonal block is used as scratch and holds no meaning afterwards. With
+    /// <paramref name="parallelKernels"/> large block updates run on two threads.
     /// </summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)] // Vector<T> code is left out of ReadyToRun images: JIT it optimized at once
-    public static int FactorPanel(double[] l, long off, int nr, int nc)
+    public static int FactorPanel(double[] l, long off, int nr, int nc, bool parallelKernels = true)
     {
         for (int j0 = 0; j0 < nc; j0 += PanelBlock)
         {
             int jb = Math.Min(PanelBlock, nc - j0);
-            if (j0 > 0)
+            if (j0 > 0 && parallelKernels)
                 SyrkKernel.LowerProductParallel(l, off + j0, nr, nr - j0, j0, l, off + (long)j0 * nr + j0, nr, false, jb);
+            else if (j0 > 0)
+                SyrkKernel.LowerProduct(l, off + j0, nr, nr - j0, j0, l, off + (long)j0 * nr + j0, nr, false, 0, jb);
             int bad = FactorColumns(l, off, nr, j0, jb);
             if (bad >= 0) return bad;
         }
@@ -87,6 +90,15 @@ internal static class DenseKernels
             }
         }
         for (; i < n; i++) y[i] += s0 * x0[i] + s1 * x1[i] + s2 * x2[i] + s3 * x3[i];
+    }
+
+    /// <summary>y += x.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)] // Vector<T> code is left out of ReadyToRun images: JIT it optimized at once
+    public static void AddTo(Span<double> y, ReadOnlySpan<double> x)
+    {
+        int n = y.Length, i = 0, w = Vector<double>.Count;
+        for (; i + w <= n; i += w) (new Vector<double>(y[i..]) + new Vector<double>(x[i..])).CopyTo(y[i..]);
+        for (; i < n; i++) y[i] += x[i];
     }
 
     /// <summary>y += s x.</summary>

@@ -75,6 +75,7 @@ internal static class SyrkKernel
             {
                 int i0 = j0;
                 for (; i0 + 8 <= m; i0 += 8) Tile8x4(ref pat, lda, kb, i0, j0, ref pc, ldc, ow);
+                if (i0 + 4 <= m) { Tile4x4(ref pat, lda, kb, i0, j0, ref pc, ldc, ow); i0 += 4; }
                 for (; i0 < m; i0++)
                     for (int j = j0; j < j0 + 4; j++) Single(ref pat, lda, kb, i0, j, ref pc, ldc, ow);
             }
@@ -113,6 +114,34 @@ internal static class SyrkKernel
         Store(ref Unsafe.Add(ref d, 2 * ldc), c02, c12, overwrite);
         Store(ref Unsafe.Add(ref d, 3 * ldc), c03, c13, overwrite);
     }
+
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static void Tile4x4(ref double a, int lda, int k, int i0, int j0, ref double c, int ldc, bool overwrite)
+    {
+        var c0 = Vector256<double>.Zero; var c1 = Vector256<double>.Zero;
+        var c2 = Vector256<double>.Zero; var c3 = Vector256<double>.Zero;
+        ref double ai = ref Unsafe.Add(ref a, i0);
+        ref double aj = ref Unsafe.Add(ref a, j0);
+        for (int t = 0; t < k; t++)
+        {
+            var x0 = Vector256.LoadUnsafe(ref ai);
+            c0 = Vector256.FusedMultiplyAdd(x0, Vector256.Create(aj), c0);
+            c1 = Vector256.FusedMultiplyAdd(x0, Vector256.Create(Unsafe.Add(ref aj, 1)), c1);
+            c2 = Vector256.FusedMultiplyAdd(x0, Vector256.Create(Unsafe.Add(ref aj, 2)), c2);
+            c3 = Vector256.FusedMultiplyAdd(x0, Vector256.Create(Unsafe.Add(ref aj, 3)), c3);
+            ai = ref Unsafe.Add(ref ai, lda);
+            aj = ref Unsafe.Add(ref aj, lda);
+        }
+        ref double d = ref Unsafe.Add(ref c, (nint)((long)j0 * ldc + i0));
+        Store4(ref d, c0, overwrite);
+        Store4(ref Unsafe.Add(ref d, ldc), c1, overwrite);
+        Store4(ref Unsafe.Add(ref d, 2 * ldc), c2, overwrite);
+        Store4(ref Unsafe.Add(ref d, 3 * ldc), c3, overwrite);
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static void Store4(ref double d, Vector256<double> v, bool overwrite)
+        => (overwrite ? -v : Vector256.LoadUnsafe(ref d) - v).StoreUnsafe(ref d);
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static void Store(ref double d, Vector256<double> lo, Vector256<double> hi, bool overwrite)

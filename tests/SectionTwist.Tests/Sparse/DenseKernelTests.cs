@@ -79,6 +79,17 @@ public class DenseKernelTests
     }
 
     [Fact]
+    public void RelabelledTreeIsTheTreeOfThePostorderedMatrix()
+    {
+        var a = ReferenceProblems.P2Laplacian(20, out _);
+        foreach (var ord in new[] { FillOrdering.Amd, FillOrdering.Natural })
+        {
+            var s = SymbolicCholesky.Analyze(a, ord);
+            Assert.Equal(EliminationTree.Parents(a.N, s.Fp, s.Fi), s.Parent);
+        }
+    }
+
+    [Fact]
     public void SupernodalEqualsSimplicialWithWideSupernodes()
     {
         // nested dissection at 14,161 unknowns: separator supernodes wider than one panel block, updates on two threads
@@ -86,6 +97,15 @@ public class DenseKernelTests
         var (x, b) = SparseTestUtil.Manufactured(a);
         var s = SymbolicCholesky.Analyze(a, FillOrdering.NestedDissection, coords);
         Assert.Contains(Enumerable.Range(0, s.Supernodes.Count), k => s.Supernodes.Start[k + 1] - s.Supernodes.Start[k] > 2 * DenseKernels.PanelBlock);
+        Assert.True(s.Flops >= SupernodalFactorizer.ParallelWork);
+        var split = SubtreeSplit.Choose(s.Supernodes);
+        Assert.NotNull(split); // the two-thread phase runs (on a machine with two or more cores)
+        var owner = new int[s.Supernodes.Count];
+        for (int t = 0; t < 2; t++)
+            foreach (int r in split[t])
+                for (int k = split.First[r]; k <= r; k++) { Assert.Equal(0, owner[k]); owner[k] = t + 1; }
+        Assert.Contains(1, owner);
+        Assert.Contains(2, owner);
         var x1 = new double[a.N];
         var x2 = new double[a.N];
         SimplicialCholesky.Factorize(s, a).Solve(b, x1);
@@ -93,5 +113,17 @@ public class DenseKernelTests
         Assert.True(a.RelativeResidual(x2, b) < 1e-13);
         Assert.True(SparseTestUtil.RelativeError(x2, x1) < 1e-11);
         Assert.True(SparseTestUtil.RelativeError(x2, x) < 1e-10);
+    }
+
+    [Fact]
+    public void ParallelFactorizationReportsAnIndefiniteMatrix()
+    {
+        var a = ReferenceProblems.P2Laplacian(60, out var coords);
+        var s = SymbolicCholesky.Analyze(a, FillOrdering.NestedDissection, coords);
+        // flip the sign of the first pivot's diagonal entry: it lies in a subtree of the two-thread phase
+        int c = s.Perm[0];
+        for (int p = a.ColPtr[c]; p < a.ColPtr[c + 1]; p++) if (a.RowIdx[p] == c) a.Values[p] = -a.Values[p];
+        var e = Assert.Throws<SectionTwistException>(() => SupernodalCholesky.Factorize(s, a));
+        Assert.Contains("not positive definite", e.Message);
     }
 }
