@@ -92,6 +92,21 @@ internal static class DenseKernels
         for (; i < n; i++) y[i] += s0 * x0[i] + s1 * x1[i] + s2 * x2[i] + s3 * x3[i];
     }
 
+    /// <summary>y += s x (for the triangular solves).</summary>
+    public static void Axpy(Span<double> y, ReadOnlySpan<double> x, double s) => Axpy1(y, x, s);
+
+    /// <summary>Dot product of two spans of equal length.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)] // Vector<T> code is left out of ReadyToRun images: JIT it optimized at once
+    public static double Dot(ReadOnlySpan<double> x, ReadOnlySpan<double> y)
+    {
+        int n = x.Length, i = 0, w = Vector<double>.Count;
+        var acc = Vector<double>.Zero;
+        for (; i + w <= n; i += w) acc += new Vector<double>(x[i..]) * new Vector<double>(y[i..]);
+        double s = Vector.Sum(acc);
+        for (; i < n; i++) s += x[i] * y[i];
+        return s;
+    }
+
     /// <summary>y += x.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)] // Vector<T> code is left out of ReadyToRun images: JIT it optimized at once
     public static void AddTo(Span<double> y, ReadOnlySpan<double> x)
