@@ -48,7 +48,7 @@ internal sealed class SupernodalFactorizer
                 try
                 {
                     queues[t] = [];
-                    var ws = new Workspace(sn, s.N);
+                    var ws = Workspace.For(sn, s.N, split[t], split.First);
                     foreach (int root in split[t])
                         for (int k = split.First[root]; k <= root; k++)
                         {
@@ -79,6 +79,22 @@ internal sealed class SupernodalFactorizer
     private readonly record struct Workspace(int[] Map, double[] C, int[] Rel)
     {
         public Workspace(Supernodes sn, int n) : this(new int[n], new double[sn.MaxUpdate], new int[Math.Max(1, sn.MaxRows)]) { }
+
+        /// <summary>Scratch sized for the subtrees rooted at <paramref name="roots"/> (an update block fits in the
+        /// square of the rows below the descendant's own columns).</summary>
+        public static Workspace For(Supernodes sn, int n, List<int> roots, int[] first)
+        {
+            long maxUpdate = 1;
+            int maxRows = 1;
+            foreach (int r in roots)
+                for (int k = first[r]; k <= r; k++)
+                {
+                    long nr = sn.RowPtr[k + 1] - sn.RowPtr[k], nc = sn.Start[k + 1] - sn.Start[k];
+                    maxUpdate = Math.Max(maxUpdate, (nr - nc) * (nr - nc));
+                    maxRows = Math.Max(maxRows, (int)nr);
+                }
+            return new Workspace(new int[n], new double[maxUpdate], new int[maxRows]);
+        }
     }
 
     /// <summary>Pushes <paramref name="d"/> on the list of the next supernode it updates.</summary>
