@@ -79,8 +79,7 @@ internal static class SyrkKernel
                 for (; i0 < m; i0++)
                     for (int j = j0; j < j0 + 4; j++) Single(ref pat, lda, kb, i0, j, ref pc, ldc, ow);
             }
-            for (; j0 < col1; j0++)
-                for (int i0 = j0; i0 < m; i0++) Single(ref pat, lda, kb, i0, j0, ref pc, ldc, ow);
+            for (; j0 < col1; j0++) Column(ref pat, lda, kb, m, j0, ref pc, ldc, ow);
         }
     }
 
@@ -113,6 +112,44 @@ internal static class SyrkKernel
         Store(ref Unsafe.Add(ref d, ldc), c01, c11, overwrite);
         Store(ref Unsafe.Add(ref d, 2 * ldc), c02, c12, overwrite);
         Store(ref Unsafe.Add(ref d, 3 * ldc), c03, c13, overwrite);
+    }
+
+    /// <summary>Rows [j, m) of column j: 8 and 4 rows at a time in vector registers, the last rows scalar.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static void Column(ref double a, int lda, int k, int m, int j, ref double c, int ldc, bool overwrite)
+    {
+        int i0 = j;
+        ref double dcol = ref Unsafe.Add(ref c, (nint)((long)j * ldc));
+        for (; i0 + 8 <= m; i0 += 8)
+        {
+            var c0 = Vector256<double>.Zero; var c1 = Vector256<double>.Zero;
+            ref double ai = ref Unsafe.Add(ref a, i0);
+            ref double aj = ref Unsafe.Add(ref a, j);
+            for (int t = 0; t < k; t++)
+            {
+                var b = Vector256.Create(aj);
+                c0 = Vector256.FusedMultiplyAdd(Vector256.LoadUnsafe(ref ai), b, c0);
+                c1 = Vector256.FusedMultiplyAdd(Vector256.LoadUnsafe(ref ai, 4), b, c1);
+                ai = ref Unsafe.Add(ref ai, lda);
+                aj = ref Unsafe.Add(ref aj, lda);
+            }
+            Store(ref Unsafe.Add(ref dcol, i0), c0, c1, overwrite);
+        }
+        if (i0 + 4 <= m)
+        {
+            var c0 = Vector256<double>.Zero;
+            ref double ai = ref Unsafe.Add(ref a, i0);
+            ref double aj = ref Unsafe.Add(ref a, j);
+            for (int t = 0; t < k; t++)
+            {
+                c0 = Vector256.FusedMultiplyAdd(Vector256.LoadUnsafe(ref ai), Vector256.Create(aj), c0);
+                ai = ref Unsafe.Add(ref ai, lda);
+                aj = ref Unsafe.Add(ref aj, lda);
+            }
+            Store4(ref Unsafe.Add(ref dcol, i0), c0, overwrite);
+            i0 += 4;
+        }
+        for (; i0 < m; i0++) Single(ref a, lda, k, i0, j, ref c, ldc, overwrite);
     }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
@@ -160,6 +197,7 @@ internal static class SyrkKernel
         hi.StoreUnsafe(ref d, 4);
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static void Single(ref double a, int lda, int k, int i, int j, ref double c, int ldc, bool overwrite)
     {
         double s = 0;
