@@ -83,13 +83,27 @@ public sealed class CompositeCliTests : IDisposable
     }
 
     [Fact]
-    public void Layers_that_share_part_of_an_edge_are_refused_with_the_remedy()
+    public void Drawing_layers_that_share_an_edge_are_analysed_as_bonded_parts()
     {
         string path = Path.Combine(_dir, "halves.dxf");
-        // two rectangles side by side: they share one edge, not a whole loop
-        File.WriteAllText(path, new DxfText().Header(4).Entities().Rect(0, 0, 20, 10, "A").Rect(20, 0, 20, 10, "B").End().ToString());
+        // two rectangles side by side on layers CORE and SKIN: they share one edge from the outline to the outline
+        File.WriteAllText(path, new DxfText().Header(4).Entities().Rect(0, 0, 20, 10, "CORE").Rect(20, 0, 20, 10, "SKIN").End().ToString());
+        var (code, outText, err) = CliRunner.Run("section", path, "--material", "CORE=steel-1045-cd,SKIN=brass", "--json");
+        Assert.True(code == 0, err);
+        var n = System.Text.Json.Nodes.JsonNode.Parse(outText)!;
+        Assert.Equal("CORE", (string?)n["materials"]![0]!["parts"]![0]);
+        Assert.Equal("SKIN", (string?)n["materials"]![1]!["parts"]![0]);
+        Tol.Rel(1.0, (double)n["materials"]![0]!["torqueShare"]! + (double)n["materials"]![1]!["torqueShare"]!, 1e-5, "the shares add to the whole torque (equilibrium)");
+    }
+
+    [Fact]
+    public void Drawing_layers_that_touch_at_a_corner_are_refused_with_the_remedy()
+    {
+        string path = Path.Combine(_dir, "corner.dxf");
+        File.WriteAllText(path, new DxfText().Header(4).Entities().Rect(0, 0, 20, 10, "A").Rect(20, 10, 20, 10, "B").End().ToString());
         var (code, _, err) = CliRunner.Run("section", path, "--material", "A=steel-1045-cd,B=brass");
         Assert.Equal(2, code);
-        Assert.Contains("whole closed loops", err);
+        Assert.Contains("touch only at the point", err);
+        Assert.DoesNotContain("   at ", err);
     }
 }
