@@ -77,7 +77,7 @@ public static class CompositeAnalyzer
             TorsionalRigidity = gjRef * fine.J, EquivalentTorsionConstant = fine.J,
             Materials = perMaterial.AsReadOnly(), EstimatedRelativeError = jErr,
             Mesh = new MeshSummary(fine.Mesh.NodeCount, fine.Mesh.ElementCount, MeshQuality.MinAngleDegrees(fine.Mesh)),
-            Warnings = warnings.AsReadOnly(),
+            Warnings = warnings.AsReadOnly(), Solution = fine,
         };
     }
 
