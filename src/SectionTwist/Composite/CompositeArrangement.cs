@@ -27,6 +27,8 @@ internal sealed class CompositeArrangement
     private readonly List<Point2> _vertex = [];
     private readonly Dictionary<(long, long), List<int>> _grid = [];
     private readonly double _cell;
+    private readonly int[] _byX = [];
+    private readonly double[] _xs = [];
 
     private sealed record Piece(int Part, Segment Curve, int A, int B, Point2 Mid);
 
@@ -46,6 +48,8 @@ internal sealed class CompositeArrangement
                 foreach (var h in r.Holes) foreach (var s in h.Oriented(counterClockwise: false).Segments) segs.Add((i, s));
             }
         foreach (var (_, s) in segs) { Canonical(s.Start); Canonical(s.End); }
+        _byX = Enumerable.Range(0, _vertex.Count).OrderBy(v => _vertex[v].X).ToArray();
+        _xs = _byX.Select(v => _vertex[v].X).ToArray();
         var pieces = new List<Piece>();
         foreach (var (part, s) in segs) Split(part, s, pieces);
         var shared = Match(pieces, out var single);
@@ -91,10 +95,15 @@ internal sealed class CompositeArrangement
     {
         var box = s.Bounds;
         var cuts = new List<(double T, int V)> { (0, Canonical(s.Start)), (1, Canonical(s.End)) };
-        for (int v = 0; v < _vertex.Count; v++)
+        // the vertices within the segment's box, found through the vertices sorted by x
+        int lo = Array.BinarySearch(_xs, box.MinX - _tol);
+        if (lo < 0) lo = ~lo;
+        while (lo > 0 && _xs[lo - 1] >= box.MinX - _tol) lo--;
+        for (int k = lo; k < _xs.Length && _xs[k] <= box.MaxX + _tol; k++)
         {
+            int v = _byX[k];
             var p = _vertex[v];
-            if (p.X < box.MinX - _tol || p.X > box.MaxX + _tol || p.Y < box.MinY - _tol || p.Y > box.MaxY + _tol) continue;
+            if (p.Y < box.MinY - _tol || p.Y > box.MaxY + _tol) continue;
             if (v == cuts[0].V || v == cuts[1].V) continue;
             var (q, t) = s.Closest(p);
             if (Point2.Distance(p, q) <= _tol && t > 0 && t < 1) cuts.Add((t, v));

@@ -106,4 +106,22 @@ public sealed class CompositeCliTests : IDisposable
         Assert.Contains("touch only at the point", err);
         Assert.DoesNotContain("   at ", err);
     }
+
+    [Fact]
+    public void Clad_strip_sample_is_near_the_thin_strip_limit()
+    {
+        string path = Path.Combine(RepoPaths.SampleProfiles, "composite", "winch-clad-strip.dxf");
+        var (code, outText, err) = CliRunner.Run("section", path, "--material", "CORE=steel-1045-cd,SKIN=brass", "--json");
+        Assert.True(code == 0, err);
+        var n = System.Text.Json.Nodes.JsonNode.Parse(outText)!;
+        double g1 = (double)n["materials"]![0]!["shearModulus"]!, g2 = (double)n["materials"]![1]!["shearModulus"]!;
+        // thin-strip limit, derived in CompositeBimetalTests from the membrane analogy: GJ = 4 b integral(G (y - y0)^2 dy)
+        double b = 0.060, t1 = 0.0025, t2 = 0.0015, t = t1 + t2;
+        double y0 = (g1 * t1 * t1 / 2 + g2 * (t1 * t2 + t2 * t2 / 2)) / (g1 * t1 + g2 * t2);
+        double I(double lo, double hi) => (Math.Pow(hi - y0, 3) - Math.Pow(lo - y0, 3)) / 3;
+        double thin = 4 * b * (g1 * I(0, t1) + g2 * I(t1, t));
+        double shortfall = 1 - (double)n["torsionalRigidity"]! / thin;
+        // the short edges lower it by about 0.63 t / b (Timoshenko and Goodier sec. 109 for one material)
+        Assert.InRange(shortfall, 0.3 * t / b, 0.8 * t / b);
+    }
 }
