@@ -113,7 +113,8 @@ internal sealed class CompositeArrangement
         {
             var (t0, a) = cuts[i];
             var (t1, b) = cuts[i + 1];
-            if (a == b && cuts.Count > 2) continue; // two cuts snapped onto one vertex
+            // two cuts snapped onto one vertex, or a segment shorter than the snap distance: nothing to keep
+            if (a == b && (cuts.Count > 2 || s.Length <= 4 * _tol)) continue;
             var curve = SubCurve(part, s, t0, t1, _vertex[a], _vertex[b]);
             pieces.Add(new Piece(part, curve, a, b, curve.PointAt(0.5)));
         }
