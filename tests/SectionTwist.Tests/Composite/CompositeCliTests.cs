@@ -124,4 +124,15 @@ public sealed class CompositeCliTests : IDisposable
         // the short edges lower it by about 0.63 t / b (Timoshenko and Goodier sec. 109 for one material)
         Assert.InRange(shortfall, 0.3 * t / b, 0.8 * t / b);
     }
+
+    [Fact]
+    public void Composite_plot_writes_a_picture()
+    {
+        string png = Path.Combine(_dir, "clad.png");
+        string path = Path.Combine(RepoPaths.SampleProfiles, "composite", "winch-clad-strip.dxf");
+        var (code, _, err) = CliRunner.Run("section", path, "--material", "CORE=steel-1045-cd,SKIN=brass", "--accuracy", "1e-3", "--plot", png);
+        Assert.True(code == 0, err);
+        var bytes = File.ReadAllBytes(png);
+        Assert.Equal(new byte[] { 0x89, (byte)'P', (byte)'N', (byte)'G' }, bytes.Take(4).ToArray());
+    }
 }

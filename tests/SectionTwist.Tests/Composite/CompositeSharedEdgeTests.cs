@@ -99,4 +99,27 @@ public class CompositeSharedEdgeTests(ITestOutputHelper output)
         Tol.Rel(1.0, r.Materials.Sum(m => m.TorqueShare), 1e-6, "the shares add to the whole torque (equilibrium)");
         Assert.Equal(3, s.Interfaces.Count);
     }
+
+    [Theory]
+    [InlineData("edge insert")]
+    [InlineData("half-discs")]
+    [InlineData("split tube")]
+    public void Every_element_has_the_material_of_the_part_containing_its_centroid(string name)
+    {
+        var s = name switch
+        {
+            "edge insert" => EdgeInsert(0.04, 0.02, 0.01, 0.005, Steel, CompositeExactTests.Brass),
+            "half-discs" => HalfDiscs(0.01, Steel, CompositeExactTests.Brass),
+            _ => SplitTube(0.02, 0.01, Steel, CompositeExactTests.Brass),
+        };
+        var sol = CompositeAnalyzer.SolveAt(s, Steel, s.Envelope.Bounds.Diagonal / 15, default);
+        var mesh = sol.Mesh;
+        for (int e = 0; e < mesh.ElementCount; e++)
+        {
+            var a = mesh.Node(mesh.Elements[6 * e]); var b = mesh.Node(mesh.Elements[6 * e + 1]); var c = mesh.Node(mesh.Elements[6 * e + 2]);
+            var centroid = new SectionTwist.Geometry.Point2((a.X + b.X + c.X) / 3, (a.Y + b.Y + c.Y) / 3);
+            // parts and materials are in the same order here (two parts, two materials); derived in the test
+            Assert.Equal(s.PartAt(centroid), sol.ZoneMaterial[mesh.ElementZone[e]]);
+        }
+    }
 }
