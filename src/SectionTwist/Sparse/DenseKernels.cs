@@ -73,7 +73,7 @@ internal static class DenseKernels
 
     /// <summary>y += s0 x0 + s1 x1 + s2 x2 + s3 x3.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)] // Vector<T> code is left out of ReadyToRun images: JIT it optimized at once
-    private static void Axpy4(Span<double> y, ReadOnlySpan<double> x0, ReadOnlySpan<double> x1, ReadOnlySpan<double> x2,
+    internal static void Axpy4(Span<double> y, ReadOnlySpan<double> x0, ReadOnlySpan<double> x1, ReadOnlySpan<double> x2,
         ReadOnlySpan<double> x3, double s0, double s1, double s2, double s3)
     {
         int n = y.Length, i = 0, w = Vector<double>.Count;

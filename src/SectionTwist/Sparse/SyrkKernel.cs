@@ -1,6 +1,7 @@
 using System.Runtime.CompilerServices;
 using System.Runtime.InteropServices;
 using System.Runtime.Intrinsics;
+using System.Runtime.Intrinsics.X86;
 
 namespace SectionTwist.Sparse;
 
@@ -17,6 +18,13 @@ internal static class SyrkKernel
 {
     /// <summary>Columns of A (the inner dimension) per pass over C, to keep an A tile in the first-level cache.</summary>
     public const int DepthBlock = 192;
+
+    /// <summary>
+    /// True where 256-bit vectors and fused multiply-add run in hardware (the register-blocked path); elsewhere, e.g.
+    /// a Native AOT build for the baseline x64 instruction set or ARM64, <see cref="LowerProduct"/> takes a portable
+    /// <see cref="System.Numerics.Vector{T}"/> path (emulated 256-bit vectors would be many times slower). Settable for tests.
+    /// </summary>
+    internal static bool Accelerated { get; set; } = Vector256.IsHardwareAccelerated && Fma.IsSupported;
 
     /// <summary>Multiply-adds above which <see cref="LowerProductParallel"/> splits the columns over two threads.</summary>
     public const long ParallelWork = 1_500_000;
@@ -57,6 +65,11 @@ internal static class SyrkKernel
         if (m <= 0 || col1 <= col0) return;
         if (aOff < 0 || aOff + (long)Math.Max(k - 1, 0) * lda + m > a.Length) throw new ArgumentOutOfRangeException(nameof(aOff));
         if (cOff < 0 || cOff + (long)(col1 - 1) * ldc + m > c.Length) throw new ArgumentOutOfRangeException(nameof(cOff));
+        if (!Accelerated)
+        {
+            Portable(a, aOff, lda, m, k, c, cOff, ldc, overwrite, col0, col1);
+            return;
+        }
         ref double pa = ref Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(a), (nint)aOff);
         ref double pc = ref Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(c), (nint)cOff);
         if (k == 0)
@@ -80,6 +93,34 @@ internal static class SyrkKernel
                     for (int j = j0; j < j0 + 4; j++) Single(ref pat, lda, kb, i0, j, ref pc, ldc, ow);
             }
             for (; j0 < col1; j0++) Column(ref pat, lda, kb, m, j0, ref pc, ldc, ow);
+        }
+    }
+
+    /// <summary>
+    /// The same product as column axpys grouped four source columns at a time on <see cref="System.Numerics.Vector{T}"/>
+    /// (Golub and Van Loan, sec. 4.2.5), for hardware without 256-bit vectors and fused multiply-add.
+    /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)] // Vector<T> code is left out of ReadyToRun images: JIT it optimized at once
+    private static void Portable(double[] a, long aOff, int lda, int m, int k, double[] c, long cOff, int ldc,
+        bool overwrite, int col0, int col1)
+    {
+        if (overwrite)
+            for (int j = col0; j < col1; j++) c.AsSpan((int)(cOff + (long)j * ldc + j), m - j).Clear();
+        int t = 0;
+        for (; t + 3 < k; t += 4)
+        {
+            var a0 = a.AsSpan((int)(aOff + (long)t * lda), m);
+            var a1 = a.AsSpan((int)(aOff + (long)(t + 1) * lda), m);
+            var a2 = a.AsSpan((int)(aOff + (long)(t + 2) * lda), m);
+            var a3 = a.AsSpan((int)(aOff + (long)(t + 3) * lda), m);
+            for (int j = col0; j < col1; j++)
+                DenseKernels.Axpy4(c.AsSpan((int)(cOff + (long)j * ldc + j), m - j), a0[j..], a1[j..], a2[j..], a3[j..],
+                    -a0[j], -a1[j], -a2[j], -a3[j]);
+        }
+        for (; t < k; t++)
+        {
+            var a0 = a.AsSpan((int)(aOff + (long)t * lda), m);
+            for (int j = col0; j < col1; j++) DenseKernels.Axpy(c.AsSpan((int)(cOff + (long)j * ldc + j), m - j), a0[j..], -a0[j]);
         }
     }
 

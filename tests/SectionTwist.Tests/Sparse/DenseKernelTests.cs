@@ -17,6 +17,23 @@ public class DenseKernelTests
     [InlineData(41, 41, 3)]
     public void LowerProductMatchesTripleLoop(int m, int ncols, int k)
     {
+        bool accelerated = SyrkKernel.Accelerated;
+        try
+        {
+            foreach (bool fast in new[] { true, false })
+            {
+                SyrkKernel.Accelerated = fast && accelerated; // the portable path too
+                CheckLowerProduct(m, ncols, k);
+            }
+        }
+        finally
+        {
+            SyrkKernel.Accelerated = accelerated;
+        }
+    }
+
+    private static void CheckLowerProduct(int m, int ncols, int k)
+    {
         var rng = new Random(m * 1000 + k);
         int lda = m + 3, ldc = m + 1;
         var a = new double[5 + lda * Math.Max(k, 1)];
