@@ -53,7 +53,7 @@ internal static class BenchParts
         }
         string self = Environment.ProcessPath ?? "dotnet";
         if (Path.GetFileNameWithoutExtension(self).Equals("dotnet", StringComparison.OrdinalIgnoreCase))
-            return (self, typeof(BenchParts).Assembly.Location);
+            return (self, Path.Combine(AppContext.BaseDirectory, "sectiontwist.dll"));
         return (self, "");
     }
 

@@ -18,6 +18,7 @@ internal static class Program
 
     public static int Main(string[] argv)
     {
+        if (PluginRelay.Needed(argv)) return PluginRelay.Run(argv, Console.Error);
         var ctx = new CliContext(Console.Out, Console.Error, !Console.IsErrorRedirected);
         using var interrupt = new CancellationTokenSource();
         Console.CancelKeyPress += (_, e) => { e.Cancel = true; interrupt.Cancel(); };

@@ -91,10 +91,11 @@ internal sealed class SectionCommand : ICommand
         if (jobs is not null) throw new UsageException("--jobs applies to a batch of several SOURCEs");
         if (materialText.Count > 0 || Profiles.ProfileTemplates.IsComposite(args.Positional[0]))
         {
-            if (warping || plasticYield is not null || plot is not null || dxf is not null)
-                throw new UsageException("--warping, --plastic, --plot and --dxf are not available for composite sections yet; leave them out");
+            if (warping || plasticYield is not null || dxf is not null)
+                throw new UsageException("--warping, --plastic and --dxf are not available for composite sections yet; leave them out");
             LoadPlugins(plugins);
-            return RunComposite(ctx, args.Positional[0], CompositeCli.ParseMaterials(materialText), referenceText, srcOptions, accuracy, json, units, drawingNotes);
+            if (plot is not null) OutputPaths.CheckFile(plot, "--plot");
+            return RunComposite(ctx, args.Positional[0], CompositeCli.ParseMaterials(materialText), referenceText, srcOptions, accuracy, json, units, drawingNotes, plot, torque);
         }
         if (referenceText is not null) throw new UsageException("--reference needs --material (a composite section)");
         LoadPlugins(plugins);
@@ -133,7 +134,7 @@ internal sealed class SectionCommand : ICommand
     }
 
     private static int RunComposite(CliContext ctx, string source, IReadOnlyList<KeyValuePair<string, Shaft.Material>> materials, string? referenceText,
-        ProfileSourceOptions srcOptions, double accuracy, bool json, UnitSystem? units, List<string> drawingNotes)
+        ProfileSourceOptions srcOptions, double accuracy, bool json, UnitSystem? units, List<string> drawingNotes, string? plot, double? torque)
     {
         var section = Composite.CompositeSources.Load(source, materials, srcOptions);
         var reference = CompositeCli.Reference(referenceText, section);
@@ -143,6 +144,9 @@ internal sealed class SectionCommand : ICommand
             result = Composite.CompositeAnalyzer.Analyze(section, reference, ctx.Analysis(accuracy), ctx.Cancellation);
         if (drawingNotes.Count > 0)
             result = result with { Warnings = drawingNotes.Select(n => new AnalysisWarning("drawing", n)).Concat(result.Warnings).ToList().AsReadOnly() };
+        if (plot is not null)
+            Rendering.Section.CompositePicture.Save(result, plot, $"{SectionPlotHook.Title(source, srcOptions.Part)}: materials and shear stress",
+                new Rendering.Section.SectionPlotOptions { Torque = torque, Units = units });
         if (json) ctx.Out.WriteLine(CompositeCli.WriteJson(result, source));
         else CompositeCli.WriteText(ctx.Out, result, source, units);
         return 0;

@@ -77,7 +77,7 @@ public static class CompositeAnalyzer
             TorsionalRigidity = gjRef * fine.J, EquivalentTorsionConstant = fine.J,
             Materials = perMaterial.AsReadOnly(), EstimatedRelativeError = jErr,
             Mesh = new MeshSummary(fine.Mesh.NodeCount, fine.Mesh.ElementCount, MeshQuality.MinAngleDegrees(fine.Mesh)),
-            Warnings = warnings.AsReadOnly(),
+            Warnings = warnings.AsReadOnly(), Solution = fine,
         };
     }
 
@@ -92,7 +92,7 @@ public static class CompositeAnalyzer
     internal static CompositeSolution SolveAt(CompositeSection section, Material reference, double h, CancellationToken ct, int maxTriangles = 4_000_000)
     {
         var env = section.Envelope;
-        var mesh = Mesher.Generate(env, section.Interfaces, new MeshOptions { MaxEdgeLength = h, MaxTriangles = maxTriangles }, out _, ct);
+        var mesh = Mesher.Generate(env, section.Interfaces.Select(i => (i.Curve, i.Region)).ToList(), new MeshOptions { MaxEdgeLength = h, MaxTriangles = maxTriangles }, out _, ct);
         int zones = mesh.ZoneSample.Length;
         var weight = new double[zones];
         var material = new int[zones];

@@ -34,6 +34,9 @@ public sealed record CompositeResult
     /// <summary>Cautions about the result (unconverged peaks, the bonding idealisation).</summary>
     public required IReadOnlyList<AnalysisWarning> Warnings { get; init; }
 
+    /// <summary>The solution on the finer mesh (for pictures).</summary>
+    internal CompositeSolution? Solution { get; init; }
+
 
     /// <summary>The caution every output of a composite section prints beside its results.</summary>
     public const string Caution =

@@ -4,10 +4,13 @@ using SectionTwist.Shaft;
 namespace SectionTwist.Composite;
 
 /// <summary>
-/// A cross-section made of parts of different materials, perfectly bonded where they meet. Parts may meet only along
-/// whole closed loops that lie inside the section (a core in a sleeve, a liner in a tube, an insert in a bar): such a
-/// loop, drawn once by each part, becomes an interface of the mesh. Loops drawn by one part only form the outline
-/// (<see cref="Envelope"/>), which is validated like any profile.
+/// A cross-section made of parts of different materials, perfectly bonded where they meet. Parts meet along shared
+/// edges: whole closed loops inside the section (a core in a sleeve, an insert in a bar) or pieces of their outlines
+/// that end on the outer boundary or where three parts meet (the two layers of a bimetal strip, two half-discs, an
+/// insert touching the outer edge). A shared piece may be only part of a segment of either part, and need not be split
+/// the same way by both. Each shared piece becomes an interface of the mesh; the pieces drawn by one part only form the
+/// outline (<see cref="Envelope"/>, the union of the parts, holes included), which is validated like any profile.
+/// Parts that overlap, touch only at a point or stand apart are refused.
 /// </summary>
 public sealed class CompositeSection
 {
@@ -24,54 +27,23 @@ public sealed class CompositeSection
             if (g.Count() > 1) throw new SectionTwistException("duplicate-part", $"{Name}: two parts are named '{g.Key}'; give each part its own name");
         foreach (var p in Parts) p.Material.Validate();
         var unit = Parts[0].Shape.Unit;
-        var loops = new List<(Loop Loop, int Part)>();
-        for (int i = 0; i < Parts.Count; i++)
-            foreach (var l in Parts[i].Shape.Loops) loops.Add((l.Oriented(counterClockwise: true), i));
-        double diag = Parts.Select(p => p.Shape.Bounds).Aggregate((a, b) => a.Union(b)).Diagonal;
-        var partner = new int[loops.Count];
-        Array.Fill(partner, -1);
-        for (int i = 0; i < loops.Count; i++)
-            for (int j = i + 1; j < loops.Count; j++)
-            {
-                if (loops[i].Part == loops[j].Part || !SameLoop(loops[i].Loop, loops[j].Loop, diag)) continue;
-                if (partner[i] >= 0 || partner[j] >= 0)
-                    throw new SectionTwistException("stacked-loops",
-                        $"{Name}: the loop near {loops[i].Loop.Segments[0].Start} is drawn by more than two parts; each interface belongs to exactly two parts");
-                partner[i] = j; partner[j] = i;
-            }
-        var outline = new List<Loop>();
-        var shared = new List<Loop>();
-        for (int i = 0; i < loops.Count; i++)
-        {
-            if (partner[i] < 0) outline.Add(loops[i].Loop);
-            else if (partner[i] > i) shared.Add(loops[i].Loop);
-        }
-        if (outline.Count == 0)
-            throw new SectionTwistException("empty-profile", $"{Name}: every loop is shared by two parts, so the parts overlap; draw each part once");
+        var arrangement = new CompositeArrangement(Parts, Name);
         try
         {
-            Envelope = Profile.FromLoops(outline, unit, Name);
-            // all loops together must neither cross nor touch: interfaces may meet the outline only as whole loops
-            if (shared.Count > 0) _ = Profile.FromLoops(outline.Concat(shared), unit, Name);
+            Envelope = Profile.FromLoops(arrangement.Loops, unit, Name);
         }
-        catch (SectionTwistException ex) when (ex.Code is "self-intersection" or "overlapping-regions" or "hole-outside" or "hole-in-hole")
+        catch (SectionTwistException ex) when (ex.Code is "self-intersection" or "overlapping-regions" or "hole-outside" or "hole-in-hole" or "zero-area")
         {
             throw new SectionTwistException("composite-parts",
-                $"{Name}: the parts meet along part of a loop or overlap ({ex.Message}); parts of different materials may meet only along whole closed loops inside the section (a core in a sleeve), each drawn by both parts");
+                $"{Name}: the parts overlap or their union is not a valid outline ({ex.Message}); draw the parts so that they do not overlap and neighbours share their edges exactly");
         }
         double sum = Parts.Sum(p => p.Shape.Properties.Area), env = Envelope.Properties.Area;
         if (Math.Abs(sum - env) > 1e-6 * env)
             throw new SectionTwistException("composite-overlap",
-                $"{Name}: the parts' areas add to {sum / env:0.######} times the area the outline encloses, so parts overlap or leave gaps; draw a sleeve as a ring whose inner loop is the core's outline");
-        var interfaces = new List<(Loop, int)>();
-        foreach (var l in shared)
-        {
-            int region = -1;
-            for (int r = 0; r < Envelope.Regions.Count && region < 0; r++)
-                if (Envelope.Regions[r].Outer.Contains(l.Segments[0].Start)) region = r;
-            interfaces.Add((l, Math.Max(region, 0)));
-        }
-        Interfaces = interfaces;
+                $"{Name}: the parts' areas add to {sum / env:0.######} times the area of their union, so parts overlap (one lies inside another or they cross); draw a sleeve as a ring whose inner loop is the core's outline, and neighbouring parts sharing an edge");
+        arrangement.CheckConnected();
+        arrangement.WithRegions(Envelope);
+        Interfaces = arrangement.Interfaces;
         Materials = Parts.Select(p => p.Material).DistinctBy(m => m.Name, StringComparer.OrdinalIgnoreCase).ToList().AsReadOnly();
     }
 
@@ -87,7 +59,8 @@ public sealed class CompositeSection
     /// <summary>The section's outline without the interfaces (the homogeneous profile of the same shape).</summary>
     public Profile Envelope { get; }
 
-    internal IReadOnlyList<(Loop Loop, int Region)> Interfaces { get; }
+    /// <summary>The pieces of boundary shared by two parts (bonded interfaces), each ending on the outline, at a junction of three parts or closing on itself.</summary>
+    internal IReadOnlyList<CompositeInterface> Interfaces { get; }
 
     /// <summary>The part that contains <paramref name="p"/> (inside one of its regions, outside their holes), or -1.</summary>
     internal int PartAt(Point2 p)
@@ -96,21 +69,5 @@ public sealed class CompositeSection
             foreach (var r in Parts[i].Shape.Regions)
                 if (r.Outer.Contains(p) && !r.Holes.Any(h => h.Contains(p))) return i;
         return -1;
-    }
-
-    /// <summary>
-    /// Two loops are the same when their areas and boxes agree and every segment's end and middle lie on the other loop
-    /// (within 1e-7 of the section size); how each part split the loop into segments does not matter.
-    /// </summary>
-    private static bool SameLoop(Loop a, Loop b, double diag)
-    {
-        double tol = 1e-7 * diag;
-        if (Math.Abs(a.SignedArea - b.SignedArea) > 1e-6 * Math.Abs(a.SignedArea)) return false;
-        var ba = a.Bounds; var bb = b.Bounds;
-        if (Math.Abs(ba.MinX - bb.MinX) > tol || Math.Abs(ba.MaxX - bb.MaxX) > tol || Math.Abs(ba.MinY - bb.MinY) > tol || Math.Abs(ba.MaxY - bb.MaxY) > tol) return false;
-        var db = new Plastic.LoopDistance(b);
-        var da = new Plastic.LoopDistance(a);
-        return a.Segments.All(s => db.To(s.Start) <= tol && db.To(s.PointAt(0.5)) <= tol)
-            && b.Segments.All(s => da.To(s.Start) <= tol && da.To(s.PointAt(0.5)) <= tol);
     }
 }

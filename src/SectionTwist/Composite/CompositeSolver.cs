@@ -101,9 +101,13 @@ internal static class CompositeSolver
                 double g = Math.Sqrt(gx[slot] * gx[slot] + gy[slot] * gy[slot]) / cnt[slot];
                 if (g > peak[m]) { peak[m] = g; where[m] = mesh.Node(i); }
             }
-        return new CompositeSolution(mesh, psi, j, torque, area, peak, where, residual);
+        return new CompositeSolution(mesh, psi, j, torque, area, peak, where, residual) { ZoneMaterial = zoneMaterial };
     }
 }
 
 /// <summary>One composite solve: psi for G_ref theta = 1 (m^2), J_ref (m^4), and per material the torque integral of psi (m^4), area, peak |grad psi| (m) and where.</summary>
-internal sealed record CompositeSolution(Mesh Mesh, double[] Psi, double J, double[] Torque, double[] Area, double[] PeakGradient, Point2[] PeakLocation, double Residual);
+internal sealed record CompositeSolution(Mesh Mesh, double[] Psi, double J, double[] Torque, double[] Area, double[] PeakGradient, Point2[] PeakLocation, double Residual)
+{
+    /// <summary>Material index of each zone of the mesh (<see cref="Mesh.ElementZone"/>).</summary>
+    public int[] ZoneMaterial { get; init; } = [];
+}

@@ -1,5 +1,5 @@
-using System.Text.Json;
-using System.Text.Json.Serialization;
+using System.Text.Json.Nodes;
+using static SectionTwist.JsonTree;
 
 namespace SectionTwist.Dynamics;
 
@@ -14,15 +14,8 @@ internal static class ModalResultJson
         "stress concentrations are not modelled; the separation bands are common practice, not a code value; defer to the drive " +
         "supplier's torsional analysis, the applicable code and licensed engineering practice.";
 
-    private static readonly JsonSerializerOptions Options = new()
-    {
-        PropertyNamingPolicy = JsonNamingPolicy.CamelCase,
-        WriteIndented = true,
-        DefaultIgnoreCondition = JsonIgnoreCondition.Never,
-    };
-
     public static string Write(ModalResult r, ResonanceResult? resonance, ForcedResponseResult? forced, string? file = null) =>
-        JsonSerializer.Serialize(ToDto(r, resonance, forced, file), Options);
+        JsonTree.Write(ToDto(r, resonance, forced, file));
 
     internal static string Kind(TrainPartKind k) => k switch { TrainPartKind.Segment => "segment", TrainPartKind.Spring => "spring", _ => "mesh" };
 
@@ -34,63 +27,63 @@ internal static class ModalResultJson
         _ => "clear",
     };
 
-    private static object ToDto(ModalResult r, ResonanceResult? res, ForcedResponseResult? forced, string? file) => new
+    private static JsonObject ToDto(ModalResult r, ResonanceResult? res, ForcedResponseResult? forced, string? file) => new JsonObject
     {
-        units = new { frequency = "Hz", angularFrequency = "rad/s", speed = "rad/s", inertia = "kg*m^2", torque = "N*m", stress = "Pa", angle = "rad" },
-        title = r.Title,
-        file,
-        referenceShaft = r.ReferenceShaft,
-        tolerance = r.Tolerance,
-        estimatedError = r.EstimatedError,
-        rigidBodyModes = r.RigidBodyModes,
-        unknowns = r.Unknowns,
-        referredInertia = r.ReferredInertia,
-        stations = r.Stations.Select(s => new { name = s.Name, shaft = s.Shaft, speedRatio = s.SpeedRatio, inertia = s.Inertia, isFixed = s.IsFixed }),
-        meshes = r.Meshes.Select(m => new { segment = m.Segment, shaft = m.Shaft, elements = m.Elements, waveSpeed = m.WaveSpeed }),
-        modes = r.Modes.Select(m => new
+        ["units"] = new JsonObject { ["frequency"] = "Hz", ["angularFrequency"] = "rad/s", ["speed"] = "rad/s", ["inertia"] = "kg*m^2", ["torque"] = "N*m", ["stress"] = "Pa", ["angle"] = "rad" },
+        ["title"] = r.Title,
+        ["file"] = file,
+        ["referenceShaft"] = r.ReferenceShaft,
+        ["tolerance"] = r.Tolerance,
+        ["estimatedError"] = r.EstimatedError,
+        ["rigidBodyModes"] = r.RigidBodyModes,
+        ["unknowns"] = r.Unknowns,
+        ["referredInertia"] = r.ReferredInertia,
+        ["stations"] = Arr(r.Stations, s => new JsonObject { ["name"] = s.Name, ["shaft"] = s.Shaft, ["speedRatio"] = s.SpeedRatio, ["inertia"] = s.Inertia, ["isFixed"] = s.IsFixed }),
+        ["meshes"] = Arr(r.Meshes, m => new JsonObject { ["segment"] = m.Segment, ["shaft"] = m.Shaft, ["elements"] = m.Elements, ["waveSpeed"] = m.WaveSpeed }),
+        ["modes"] = Arr(r.Modes, m => new JsonObject
         {
-            number = m.Number,
-            isRigidBody = m.IsRigidBody,
-            eigenvalue = m.Eigenvalue,
-            angularFrequency = m.AngularFrequency,
-            frequency = m.Frequency,
-            cyclesPerMinute = m.CyclesPerMinute,
-            estimatedError = m.EstimatedError,
-            stations = m.Stations.Select(s => new { station = s.Station, rotation = s.Rotation, referredRotation = s.ReferredRotation }),
-            parts = m.Parts.Select(p => new { kind = Kind(p.Kind), name = p.Name, shaft = p.Shaft, twist = p.Twist, energyShare = p.EnergyShare }),
+            ["number"] = m.Number,
+            ["isRigidBody"] = m.IsRigidBody,
+            ["eigenvalue"] = m.Eigenvalue,
+            ["angularFrequency"] = m.AngularFrequency,
+            ["frequency"] = m.Frequency,
+            ["cyclesPerMinute"] = m.CyclesPerMinute,
+            ["estimatedError"] = m.EstimatedError,
+            ["stations"] = Arr(m.Stations, s => new JsonObject { ["station"] = s.Station, ["rotation"] = s.Rotation, ["referredRotation"] = s.ReferredRotation }),
+            ["parts"] = Arr(m.Parts, p => new JsonObject { ["kind"] = Kind(p.Kind), ["name"] = p.Name, ["shaft"] = p.Shaft, ["twist"] = p.Twist, ["energyShare"] = p.EnergyShare }),
         }),
-        resonance = res is null ? null : new
+        ["resonance"] = res is null ? null : new JsonObject
         {
-            shaft = res.Spec.Range.Shaft,
-            minimumSpeed = res.Spec.Range.Minimum,
-            maximumSpeed = res.Spec.Range.Maximum,
-            innerBand = res.Spec.InnerBand,
-            outerBand = res.Spec.OuterBand,
-            bandsBasis = "common practice, not a code value",
-            anyConcern = res.AnyConcern,
-            crossings = res.Crossings.Select(c => new
+            ["shaft"] = res.Spec.Range.Shaft,
+            ["minimumSpeed"] = res.Spec.Range.Minimum,
+            ["maximumSpeed"] = res.Spec.Range.Maximum,
+            ["innerBand"] = res.Spec.InnerBand,
+            ["outerBand"] = res.Spec.OuterBand,
+            ["bandsBasis"] = "common practice, not a code value",
+            ["anyConcern"] = res.AnyConcern,
+            ["crossings"] = Arr(res.Crossings, c => new JsonObject
             {
-                mode = c.Mode,
-                frequency = c.Frequency,
-                excitation = c.Excitation,
-                order = c.Order,
-                orderShaft = c.OrderShaft,
-                crossingSpeed = c.CrossingSpeed,
-                margin = c.Margin,
-                status = Status(c.Status),
+                ["mode"] = c.Mode,
+                ["frequency"] = c.Frequency,
+                ["excitation"] = c.Excitation,
+                ["order"] = c.Order,
+                ["orderShaft"] = c.OrderShaft,
+                ["crossingSpeed"] = c.CrossingSpeed,
+                ["margin"] = c.Margin,
+                ["status"] = Status(c.Status),
             }),
         },
-        forcedResponse = forced is null ? null : new
+        ["forcedResponse"] = forced is null ? null : new JsonObject
         {
-            station = forced.Load.Station,
-            amplitude = forced.Load.Amplitude,
-            angularFrequency = forced.Load.AngularFrequency,
-            dampingRatio = forced.DampingRatio,
-            modesUsed = forced.ModesUsed,
-            parts = forced.Parts.Select(p => new { kind = Kind(p.Kind), name = p.Name, shaft = p.Shaft, torqueAmplitude = p.TorqueAmplitude, shearAmplitude = p.ShearAmplitude }),
-            stationAmplitudes = forced.StationAmplitudes.Select((a, i) => new { station = r.Stations[i].Name, rotation = a }),
+            ["station"] = forced.Load.Station,
+            ["amplitude"] = forced.Load.Amplitude,
+            ["angularFrequency"] = forced.Load.AngularFrequency,
+            ["dampingRatio"] = forced.DampingRatio,
+            ["modesUsed"] = forced.ModesUsed,
+            ["parts"] = Arr(forced.Parts, p => new JsonObject { ["kind"] = Kind(p.Kind), ["name"] = p.Name, ["shaft"] = p.Shaft, ["torqueAmplitude"] = p.TorqueAmplitude, ["shearAmplitude"] = p.ShearAmplitude }),
+            ["stationAmplitudes"] = Arr(Enumerable.Range(0, forced.StationAmplitudes.Count), i => new JsonObject { ["station"] = r.Stations[i].Name, ["rotation"] = forced.StationAmplitudes[i] }),
         },
-        warnings = r.Warnings,
-        caution = Caution,
+        ["warnings"] = Arr(r.Warnings),
+        ["caution"] = Caution,
     };
 }

@@ -77,6 +77,9 @@ public static class ProfileSources
     public static IReadOnlyList<IProfileSource> LoadPlugins(string folder)
     {
         ArgumentNullException.ThrowIfNull(folder);
+        if (!System.Runtime.CompilerServices.RuntimeFeature.IsDynamicCodeSupported)
+            throw new SectionTwistException("plugins-unsupported",
+                $"plugins folder '{folder}': this program is compiled ahead of time and cannot load plugin assemblies; use a framework-dependent build (the portable tool package SectionTwist.Cli.any, or the library from a normal .NET application)");
         if (!Directory.Exists(folder))
             throw new SectionTwistException("no-plugin-folder", $"plugins folder '{folder}' does not exist; give a folder that holds the plugin .dll files");
         var found = new List<IProfileSource>();
@@ -96,6 +99,11 @@ public static class ProfileSources
         return found;
     }
 
+    [System.Diagnostics.CodeAnalysis.UnconditionalSuppressMessage("Trimming", "IL2026", Justification = "Plugins load only with a JIT: LoadPlugins refuses in an ahead-of-time build before this runs.")]
+    [System.Diagnostics.CodeAnalysis.UnconditionalSuppressMessage("Trimming", "IL2062", Justification = "As IL2026: plugin types come whole from their own assembly.")]
+    [System.Diagnostics.CodeAnalysis.UnconditionalSuppressMessage("Trimming", "IL2065", Justification = "As IL2026: plugin types come whole from their own assembly.")]
+    [System.Diagnostics.CodeAnalysis.UnconditionalSuppressMessage("Trimming", "IL2072", Justification = "As IL2026: plugin types come whole from their own assembly.")]
+    [System.Diagnostics.CodeAnalysis.UnconditionalSuppressMessage("Trimming", "IL2075", Justification = "As IL2026: plugin types come whole from their own assembly.")]
     private static IProfileSource[] LoadPluginAssembly(string path)
     {
         Assembly asm;

@@ -192,7 +192,7 @@ internal sealed partial class DelaunayRefiner
     private bool TouchesSharpCorner(int c)
     {
         int curve = ChCurve[c];
-        return _cornerAngle[curve] < SharpCorner || _cornerAngle[_curveNext[curve]] < SharpCorner;
+        return _cornerAngle[curve] < SharpCorner || (_curveNext[curve] >= 0 && _cornerAngle[_curveNext[curve]] < SharpCorner);
     }
 
     /// <summary>Inserts the circumcentre of bad triangle t, or splits the chords it would encroach instead.</summary>

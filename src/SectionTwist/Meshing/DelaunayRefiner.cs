@@ -36,10 +36,11 @@ internal sealed partial class DelaunayRefiner
     private int[] _vCurve = new int[64], _vCorner = new int[64];
     private double[] _vT = new double[64];
 
-    // interface loops inside the domain (composite sections): constrained in the mesh, material on both sides
-    private readonly IReadOnlyList<(Loop Loop, int Region)> _interfaces;
+    // interface curves inside the domain (composite sections): constrained in the mesh, material on both sides
+    private readonly IReadOnlyList<(Segment Curve, int Region)> _interfaces;
+    private int[] _curveEndVertex = [];
 
-    public DelaunayRefiner(Profile profile, MeshOptions options, CancellationToken ct, IReadOnlyList<(Loop Loop, int Region)>? interfaces = null)
+    public DelaunayRefiner(Profile profile, MeshOptions options, CancellationToken ct, IReadOnlyList<(Segment Curve, int Region)>? interfaces = null)
     {
         _profile = profile; _opt = options; _ct = ct;
         _interfaces = interfaces ?? [];
@@ -113,27 +114,35 @@ internal sealed partial class DelaunayRefiner
     {
         var curves = new List<Segment>();
         var loops = new List<MeshLoop>();
+        var loopSegs = new List<IReadOnlyList<Segment>>();
         var curveLoop = new List<int>();
         for (int r = 0; r < _profile.Regions.Count; r++)
         {
             var reg = _profile.Regions[r];
             loops.Add(new MeshLoop(r, -1, reg.Outer));
-            for (int h = 0; h < reg.Holes.Count; h++) loops.Add(new MeshLoop(r, h, reg.Holes[h]));
+            loopSegs.Add(reg.Outer.Segments);
+            for (int h = 0; h < reg.Holes.Count; h++) { loops.Add(new MeshLoop(r, h, reg.Holes[h])); loopSegs.Add(reg.Holes[h].Segments); }
         }
-        // interface loops last, counter-clockwise: the flood of ClassifyRegions fills their inside with their region
-        foreach (var (loop, region) in _interfaces) loops.Add(new MeshLoop(region, -1, loop.Oriented(counterClockwise: true)) { IsInterface = true });
+        // interface chains last: the flood of ClassifyRegions fills both of their sides with their region
+        foreach (var (segs, region, open) in InterfaceChains.Build(_profile, _interfaces, _floor))
+        {
+            var geometry = new Loop(open ? segs.Concat(Enumerable.Reverse(segs).Select(x => x.Reversed())) : segs);
+            loops.Add(new MeshLoop(region, -1, geometry) { IsInterface = true, IsOpen = open });
+            loopSegs.Add(segs);
+        }
         Loops = loops.ToArray();
         var next = new List<int>(); var prev = new List<int>();
         _loopLen = new double[Loops.Length];
         for (int l = 0; l < Loops.Length; l++)
         {
-            var segs = Loops[l].Geometry.Segments;
+            var segs = loopSegs[l];
+            bool open = Loops[l].IsOpen;
             int first = curves.Count;
             for (int i = 0; i < segs.Count; i++)
             {
                 curves.Add(segs[i]); curveLoop.Add(l);
-                next.Add(first + (i + 1) % segs.Count);
-                prev.Add(first + (i + segs.Count - 1) % segs.Count);
+                next.Add(open && i + 1 == segs.Count ? -1 : first + (i + 1) % segs.Count);
+                prev.Add(open && i == 0 ? -1 : first + (i + segs.Count - 1) % segs.Count);
             }
         }
         Curve = curves.ToArray();
@@ -141,6 +150,7 @@ internal sealed partial class DelaunayRefiner
         int n = Curve.Length;
         _curveLen = new double[n]; _curveS0 = new double[n]; _cornerAngle = new double[n]; _curveStraight = new bool[n];
         _curveStartVertex = new int[n];
+        _curveEndVertex = new int[n];
         for (int c = 0; c < n; c++)
         {
             _curveLen[c] = Curve[c].Length;
@@ -148,6 +158,7 @@ internal sealed partial class DelaunayRefiner
             int l = _curveLoop[c];
             _curveS0[c] = _loopLen[l];
             _loopLen[l] += _curveLen[c];
+            if (_curvePrev[c] < 0) { _cornerAngle[c] = Math.PI; continue; } // the end of an open interface chain
             Point2 din = Curve[_curvePrev[c]].DerivativeAt(1), dout = Curve[c].DerivativeAt(0);
             double turn = Math.Atan2(Point2.Cross(din, dout), Point2.Dot(din, dout));
             _cornerAngle[c] = Math.PI - turn;
@@ -159,7 +170,13 @@ internal sealed partial class DelaunayRefiner
         for (int c = 0; c < Curve.Length; c++)
         {
             // a corner of an interface loop is re-entrant for the material on one side or the other
-            bool iface = Loops[_curveLoop[c]].IsInterface && Math.Abs(_cornerAngle[c] - Math.PI) > 0.05;
+            // so is the end of an open interface chain: where it meets the outline or two other interfaces
+            bool iface = Loops[_curveLoop[c]].IsInterface && (Math.Abs(_cornerAngle[c] - Math.PI) > 0.05 || _curvePrev[c] < 0);
+            if (Loops[_curveLoop[c]].IsInterface && _curveNext[c] < 0)
+            {
+                Point2 e = Curve[c].End;
+                Size.AddSource(e.X, e.Y, 0.125 * Size.At(e.X, e.Y));
+            }
             if (_cornerAngle[c] <= Math.PI + 0.05 && !iface) continue;
             Point2 p = Curve[c].Start;
             Size.AddSource(p.X, p.Y, 0.125 * Size.At(p.X, p.Y));
@@ -232,14 +249,36 @@ internal sealed partial class DelaunayRefiner
 
     private void CreateBoundaryVertices(List<double>[] param)
     {
-        for (int c = 0; c < Curve.Length; c++) _curveStartVertex[c] = NewVertex(Curve[c].Start, -1, 0, c);
+        // outline corners first; interface curves then start and end on them where they meet the outline, and on each
+        // other's ends at junctions inside (snapped within the floor length)
+        var snap = new Dictionary<(long, long), List<int>>();
+        double cell = 4 * _floor;
+        int Corner(Point2 p, int curve, bool find = true)
+        {
+            long cx = (long)Math.Floor(p.X / cell), cy = (long)Math.Floor(p.Y / cell);
+            for (long i = cx - 1; i <= cx + 1 && find; i++)
+                for (long k = cy - 1; k <= cy + 1; k++)
+                    if (snap.TryGetValue((i, k), out var list))
+                        foreach (int u in list)
+                            if (Point2.Distance(T.Node(u), p) <= _floor) return u;
+            int v = NewVertex(p, -1, 0, curve);
+            if (!snap.TryGetValue((cx, cy), out var l)) snap[(cx, cy)] = l = [];
+            l.Add(v);
+            return v;
+        }
+        for (int c = 0; c < Curve.Length; c++)
+            _curveStartVertex[c] = Loops[_curveLoop[c]].IsInterface ? -1 : Corner(Curve[c].Start, c, find: false);
+        for (int c = 0; c < Curve.Length; c++)
+            if (Loops[_curveLoop[c]].IsInterface) _curveStartVertex[c] = Corner(Curve[c].Start, c);
+        for (int c = 0; c < Curve.Length; c++)
+            _curveEndVertex[c] = _curveNext[c] >= 0 ? _curveStartVertex[_curveNext[c]] : Corner(Curve[c].End, c);
         for (int c = 0; c < Curve.Length; c++)
         {
             var ts = param[c];
             int prevV = _curveStartVertex[c];
             for (int i = 1; i < ts.Count; i++)
             {
-                int v = i == ts.Count - 1 ? _curveStartVertex[_curveNext[c]] : NewVertex(Curve[c].PointAt(ts[i]), c, ts[i], -1);
+                int v = i == ts.Count - 1 ? _curveEndVertex[c] : NewVertex(Curve[c].PointAt(ts[i]), c, ts[i], -1);
                 NewChord(prevV, v, c, ts[i - 1], ts[i]);
                 prevV = v;
             }
@@ -312,8 +351,8 @@ internal sealed partial class DelaunayRefiner
 
     /// <summary>
     /// Region of every triangle: flood from the left side of each chord (the material side of outer loops run
-    /// counter-clockwise and of holes run clockwise) without crossing chords; triangles never reached are outside
-    /// or in holes (region -1).
+    /// counter-clockwise and of holes run clockwise; both sides of an interface) without crossing chords; triangles
+    /// never reached are outside or in holes (region -1).
     /// </summary>
     private void ClassifyRegions()
     {
@@ -321,27 +360,35 @@ internal sealed partial class DelaunayRefiner
         var stack = new Stack<int>();
         for (int c = 0; c < ChordCount; c++)
         {
+            // an interface has material on both sides: flood from its right side too
             int e = T.FindEdge(ChA[c], ChB[c]);
-            int t = e / 3, r = Loops[LoopOfChord(c)].Region;
-            if (T.Reg[t] == -2) { T.Reg[t] = r; stack.Push(t); }
-            else if (T.Reg[t] != r) throw Degenerate(ChA[c], "outlines cross each other");
-            while (stack.Count > 0)
-            {
-                int x = stack.Pop();
-                for (int i = 0; i < 3; i++)
-                {
-                    int code = 3 * x + i;
-                    if (T.Seg[code] >= 0 || T.N[code] < 0) continue;
-                    int y = T.N[code] / 3;
-                    if (T.Reg[y] == -2) { T.Reg[y] = r; stack.Push(y); }
-                    else if (T.Reg[y] != r) throw Degenerate(T.V[3 * y], "outlines cross each other or a loop is open");
-                }
-            }
+            FloodFrom(e, c, stack);
+            if (Loops[LoopOfChord(c)].IsInterface) FloodFrom(T.N[e], c, stack);
         }
         for (int t = 0; t < T.TriangleCount; t++)
         {
             if (T.Reg[t] == -2) T.Reg[t] = -1;
             else if (T.Reg[t] >= 0 && T.HasSuperVertex(t)) throw Degenerate(T.V[3 * t + 1], "the outline is not closed");
+        }
+    }
+
+    private void FloodFrom(int e, int c, Stack<int> stack)
+    {
+        if (e < 0) throw Degenerate(ChA[c], "an interface lies on the outline");
+        int t = e / 3, r = Loops[LoopOfChord(c)].Region;
+        if (T.Reg[t] == -2) { T.Reg[t] = r; stack.Push(t); }
+        else if (T.Reg[t] != r) throw Degenerate(ChA[c], "outlines cross each other");
+        while (stack.Count > 0)
+        {
+            int x = stack.Pop();
+            for (int i = 0; i < 3; i++)
+            {
+                int code = 3 * x + i;
+                if (T.Seg[code] >= 0 || T.N[code] < 0) continue;
+                int y = T.N[code] / 3;
+                if (T.Reg[y] == -2) { T.Reg[y] = r; stack.Push(y); }
+                else if (T.Reg[y] != r) throw Degenerate(T.V[3 * y], "outlines cross each other or a loop is open");
+            }
         }
     }
 
@@ -384,11 +431,17 @@ internal sealed partial class DelaunayRefiner
     {
         double su = LoopPosition(u, out int lu);
         if (lu < 0) return false;
-        if (lu != lv) return true;
+        double d = Point2.Distance(T.Node(v), T.Node(u));
+        // near the end of an open interface chain (a junction) the outline and the interface meet: not a thin wall
+        if (lu != lv) return d < 0.5 * JunctionDistance(sv, lv) && d < 0.5 * JunctionDistance(su, lu);
         double ds = Math.Abs(su - sv);
-        ds = Math.Min(ds, _loopLen[lv] - ds);
-        return Point2.Distance(T.Node(v), T.Node(u)) < 0.5 * ds;
+        if (!Loops[lv].IsOpen) ds = Math.Min(ds, _loopLen[lv] - ds);
+        return d < 0.5 * ds;
     }
+
+    /// <summary>Distance along an open interface chain to its nearer end; infinite on a closed loop.</summary>
+    private double JunctionDistance(double s, int loop) =>
+        Loops[loop].IsOpen ? Math.Min(s, _loopLen[loop] - s) : double.PositiveInfinity;
 
     private static double SegmentDistance(Point2 p, Point2 a, Point2 b)
     {

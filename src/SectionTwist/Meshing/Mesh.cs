@@ -65,4 +65,7 @@ internal sealed record MeshLoop(int Region, int Hole, Loop Geometry)
 
     /// <summary>An interface between two materials inside the region (composite sections), not a boundary.</summary>
     public bool IsInterface { get; init; }
+
+    /// <summary>An interface chain with two ends (on the outline or at junctions of three parts), not a closed loop; its <see cref="Geometry"/> runs there and back.</summary>
+    public bool IsOpen { get; init; }
 }

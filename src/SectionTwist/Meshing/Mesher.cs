@@ -19,12 +19,13 @@ internal static class Mesher
         Generate(profile, [], options, out stats, ct);
 
     /// <summary>
-    /// As <see cref="Generate(Profile, MeshOptions, CancellationToken)"/> with interface loops inside the regions
+    /// As <see cref="Generate(Profile, MeshOptions, CancellationToken)"/> with interface curves inside the regions
     /// (composite sections): each is kept as a chain of element edges with curved mid-side nodes on the true curve, and
-    /// <see cref="Mesh.ElementZone"/> tells the pieces between them apart. The loops must neither touch nor cross the
-    /// boundary or each other (checked by the caller).
+    /// <see cref="Mesh.ElementZone"/> tells the pieces between them apart. The curves may close on themselves or end on
+    /// the outline's vertices or on each other's ends (junctions); they must not cross the boundary or each other, nor
+    /// end anywhere else (checked by the caller, <c>CompositeArrangement</c>).
     /// </summary>
-    internal static Mesh Generate(Profile profile, IReadOnlyList<(Loop Loop, int Region)> interfaces, MeshOptions options, out MesherStats stats, CancellationToken ct = default)
+    internal static Mesh Generate(Profile profile, IReadOnlyList<(Segment Curve, int Region)> interfaces, MeshOptions options, out MesherStats stats, CancellationToken ct = default)
     {
         ArgumentNullException.ThrowIfNull(profile);
         ArgumentNullException.ThrowIfNull(options);

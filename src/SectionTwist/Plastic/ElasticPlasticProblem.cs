@@ -14,7 +14,7 @@ namespace SectionTwist.Plastic;
 /// a square bar", Trans. AMS 123 (1966) 369-401). With holes the slope bound along straight paths from every loop gives
 /// the two-sided obstacle max(-d_0, c_k - d_k) &lt;= psi &lt;= min(d_0, c_k + d_k) for fixed hole constants c_k; the
 /// reduced energy is convex in c (the constraints are linear in psi and c together), so the constants are found by
-/// golden section hole by hole. The constraint is imposed at the nodes (the usual discrete obstacle problem).
+/// Brent's line search (parabolic steps, golden-section fallback) hole by hole. The constraint is imposed at the nodes (the usual discrete obstacle problem).
 /// The torque is T = tau_y (f . psi + 2 sum c_k A_k), f the element loads 2 int N.
 /// </summary>
 internal sealed class ElasticPlasticProblem
@@ -103,7 +103,7 @@ internal sealed class ElasticPlasticProblem
             for (int k = 0; k < nh; k++)
             {
                 var (lo, hi) = SectionDistances.HoleRange(k, c, _outerGap, _holeGap);
-                c[k] = GoldenSection.Minimize(v => { var t = (double[])c.Clone(); t[k] = v; return Evaluate(lambda, t, ct).Energy; },
+                c[k] = LineMinimum.Minimize(v => { var t = (double[])c.Clone(); t[k] = v; return Evaluate(lambda, t, ct).Energy; },
                     lo, hi, 1e-5 * Math.Max(hi, 1e-300));
             }
         }

@@ -10,8 +10,8 @@ namespace SectionTwist.Plastic;
 /// |grad phi| = tau_y everywhere and T_p = 2 (integral of phi over the section + sum of c_k A_k over the holes).
 /// In a region without holes phi = tau_y d with d the distance to the boundary. With holes, phi is the largest
 /// function with slope at most tau_y that is 0 on the outer loop and constant (c_k) on hole k:
-/// phi = tau_y min(d_0, min_k(c_k + d_k)), and the c_k maximise T_p (a concave problem, solved hole by hole by golden
-/// section within the limits that the slope bound puts on the constants). Distances are straight-line: inside a
+/// phi = tau_y min(d_0, min_k(c_k + d_k)), and the c_k maximise T_p (a concave problem, solved hole by hole by Brent's
+/// line search within the limits that the slope bound puts on the constants). Distances are straight-line: inside a
 /// non-convex outer outline with holes this can only under-estimate T_p.
 /// The integral uses the 7-point rule of every element of the mesh; d has ridges (the medial axis),
 /// so the error falls as h^2 and the estimate compares the mesh with its uniform refinement.
@@ -72,7 +72,7 @@ internal static class FullyPlasticTorque
                 {
                     var (lo, hi) = SectionDistances.HoleRange(k, c, outerGap, holeGap);
                     double old = c[k];
-                    c[k] = GoldenSection.Minimize(v => { double keep = c[k]; c[k] = v; double t = -Torque(c); c[k] = keep; return t; },
+                    c[k] = LineMinimum.Minimize(v => { double keep = c[k]; c[k] = v; double t = -Torque(c); c[k] = keep; return t; },
                         lo, hi, 1e-10 * Math.Max(hi, 1e-300));
                     moved = Math.Max(moved, Math.Abs(c[k] - old));
                     scale = Math.Max(scale, Math.Abs(c[k]));

@@ -28,6 +28,12 @@ public sealed record VerificationCase(string Name, VerifiedQuantity Quantity, do
     /// <summary>For member cases: computes the value directly (no section analysis), SI.</summary>
     public Func<double>? Evaluate { get; init; }
 
+    /// <summary>For composite cases: creates the composite section, analysed with its first part's material as the reference (<see cref="Build"/> gives its outline).</summary>
+    public Func<Composite.CompositeSection>? BuildComposite { get; init; }
+
+    /// <summary>For the peak shear of a composite case: the index of the material (in <see cref="Composite.CompositeSection.Materials"/>).</summary>
+    public int? MaterialIndex { get; init; }
+
     /// <summary>The quantity's JSON name: <c>torsionConstant</c>, <c>maxShearPerTorque</c>, <c>warpingConstant</c> or <c>memberRotation</c>.</summary>
     public string QuantityKey => Quantity switch
     {

@@ -83,13 +83,56 @@ public sealed class CompositeCliTests : IDisposable
     }
 
     [Fact]
-    public void Layers_that_share_part_of_an_edge_are_refused_with_the_remedy()
+    public void Drawing_layers_that_share_an_edge_are_analysed_as_bonded_parts()
     {
         string path = Path.Combine(_dir, "halves.dxf");
-        // two rectangles side by side: they share one edge, not a whole loop
-        File.WriteAllText(path, new DxfText().Header(4).Entities().Rect(0, 0, 20, 10, "A").Rect(20, 0, 20, 10, "B").End().ToString());
+        // two rectangles side by side on layers CORE and SKIN: they share one edge from the outline to the outline
+        File.WriteAllText(path, new DxfText().Header(4).Entities().Rect(0, 0, 20, 10, "CORE").Rect(20, 0, 20, 10, "SKIN").End().ToString());
+        var (code, outText, err) = CliRunner.Run("section", path, "--material", "CORE=steel-1045-cd,SKIN=brass", "--json");
+        Assert.True(code == 0, err);
+        var n = System.Text.Json.Nodes.JsonNode.Parse(outText)!;
+        Assert.Equal("CORE", (string?)n["materials"]![0]!["parts"]![0]);
+        Assert.Equal("SKIN", (string?)n["materials"]![1]!["parts"]![0]);
+        Tol.Rel(1.0, (double)n["materials"]![0]!["torqueShare"]! + (double)n["materials"]![1]!["torqueShare"]!, 1e-5, "the shares add to the whole torque (equilibrium)");
+    }
+
+    [Fact]
+    public void Drawing_layers_that_touch_at_a_corner_are_refused_with_the_remedy()
+    {
+        string path = Path.Combine(_dir, "corner.dxf");
+        File.WriteAllText(path, new DxfText().Header(4).Entities().Rect(0, 0, 20, 10, "A").Rect(20, 10, 20, 10, "B").End().ToString());
         var (code, _, err) = CliRunner.Run("section", path, "--material", "A=steel-1045-cd,B=brass");
         Assert.Equal(2, code);
-        Assert.Contains("whole closed loops", err);
+        Assert.Contains("touch only at the point", err);
+        Assert.DoesNotContain("   at ", err);
+    }
+
+    [Fact]
+    public void Clad_strip_sample_is_near_the_thin_strip_limit()
+    {
+        string path = Path.Combine(RepoPaths.SampleProfiles, "composite", "winch-clad-strip.dxf");
+        var (code, outText, err) = CliRunner.Run("section", path, "--material", "CORE=steel-1045-cd,SKIN=brass", "--json");
+        Assert.True(code == 0, err);
+        var n = System.Text.Json.Nodes.JsonNode.Parse(outText)!;
+        double g1 = (double)n["materials"]![0]!["shearModulus"]!, g2 = (double)n["materials"]![1]!["shearModulus"]!;
+        // thin-strip limit, derived in CompositeBimetalTests from the membrane analogy: GJ = 4 b integral(G (y - y0)^2 dy)
+        double b = 0.060, t1 = 0.0025, t2 = 0.0015, t = t1 + t2;
+        double y0 = (g1 * t1 * t1 / 2 + g2 * (t1 * t2 + t2 * t2 / 2)) / (g1 * t1 + g2 * t2);
+        double I(double lo, double hi) => (Math.Pow(hi - y0, 3) - Math.Pow(lo - y0, 3)) / 3;
+        double thin = 4 * b * (g1 * I(0, t1) + g2 * I(t1, t));
+        double shortfall = 1 - (double)n["torsionalRigidity"]! / thin;
+        // the short edges lower it by about 0.63 t / b (Timoshenko and Goodier sec. 109 for one material)
+        Assert.InRange(shortfall, 0.3 * t / b, 0.8 * t / b);
+    }
+
+    [Fact]
+    public void Composite_plot_writes_a_picture()
+    {
+        string png = Path.Combine(_dir, "clad.png");
+        string path = Path.Combine(RepoPaths.SampleProfiles, "composite", "winch-clad-strip.dxf");
+        var (code, _, err) = CliRunner.Run("section", path, "--material", "CORE=steel-1045-cd,SKIN=brass", "--accuracy", "1e-3", "--plot", png);
+        Assert.True(code == 0, err);
+        var bytes = File.ReadAllBytes(png);
+        Assert.Equal(new byte[] { 0x89, (byte)'P', (byte)'N', (byte)'G' }, bytes.Take(4).ToArray());
     }
 }

@@ -41,17 +41,20 @@ public class CompositeRectangleTests(ITestOutputHelper output)
     }
 
     /// <summary>J_ref of the bar by linear triangles on a uniform grid (reference material: the bar; the insert's coefficient is G_bar / G_insert).</summary>
-    private static double GridJ(double W, double H, double w, double h, double step, double insertWeight)
+    private static double GridJ(double W, double H, double w, double h, double step, double insertWeight) =>
+        GridJ(W, H, step, (cx, cy) => Math.Abs(cx) < w / 2 && Math.Abs(cy) < h / 2 ? insertWeight : 1.0);
+
+    /// <summary>
+    /// J_ref of a W x H rectangle centred on the origin by linear triangles on a uniform grid of the given step, the
+    /// coefficient G_ref / G of each grid cell given by <paramref name="weight"/> at the cell's centre (x, y).
+    /// </summary>
+    internal static double GridJ(double W, double H, double step, Func<double, double, double> weight)
     {
         int nx = (int)Math.Round(W / step), ny = (int)Math.Round(H / step);
         int N(int i, int k) => (i - 1) * (ny - 1) + (k - 1); // interior nodes only; the boundary has psi = 0
         int n = (nx - 1) * (ny - 1);
         // cell weights
-        double Weight(int i, int k)
-        {
-            double cx = -W / 2 + (i + 0.5) * step, cy = -H / 2 + (k + 0.5) * step;
-            return Math.Abs(cx) < w / 2 && Math.Abs(cy) < h / 2 ? insertWeight : 1.0;
-        }
+        double Weight(int i, int k) => weight(-W / 2 + (i + 0.5) * step, -H / 2 + (k + 0.5) * step);
         // y = A x with the assembled P1 stiffness (each cell: two right triangles along the diagonal (i,k)-(i+1,k+1))
         void Apply(double[] x, double[] y)
         {

@@ -80,4 +80,24 @@ public sealed class CompositeShaftTests : IDisposable
         Assert.Contains("sleeved.yaml:5", ex.Message);
         Assert.Contains("composite template", ex.Message);
     }
+
+    [Fact]
+    public void Drawing_layers_that_share_an_edge_make_a_composite_segment()
+    {
+        // the clad strip sample: steel 60 x 2.5 mm (CORE) and brass 60 x 1.5 mm (SKIN) bonded along the long edge
+        string sample = Path.Combine(RepoPaths.SampleProfiles, "composite", "winch-clad-strip.dxf");
+        File.Copy(sample, Path.Combine(_dir, "clad.dxf"));
+        string yaml = Yaml.Replace("""sleeved: {template: "sleeved:d=40,t=5", materials: {core: steel-1045-cd, sleeve: bush}}""",
+            "sleeved: {dxf: clad.dxf, materials: {CORE: steel-1045-cd, SKIN: bush}}", StringComparison.Ordinal);
+        var doc = ShaftFile.Parse(yaml, "clad.yaml", _dir, ShaftSections.CreateResolver(new SectionTwist.Torsion.AnalysisOptions { Accuracy = 1e-3 }));
+        var r = ShaftSolver.Solve(doc.Model);
+        var s = Assert.Single(r.Segments);
+        var section = SectionTwist.Composite.CompositeSources.Load(Path.Combine(_dir, "clad.dxf"),
+            [new("CORE", ShaftMaterials.All["steel-1045-cd"]), new("SKIN", new Material("bush", 37e9, 20e6, null, "test"))]);
+        var direct = SectionTwist.Composite.CompositeAnalyzer.Analyze(section, null, new SectionTwist.Torsion.AnalysisOptions { Accuracy = 1e-3 });
+        // the segment's stiffness is (G J)_eff / L of the same section analysed directly (derived in the test)
+        Tol.Rel(direct.TorsionalRigidity / 0.5, s.Stiffness, 1e-4, "the composite analysis of the same section (within the accuracy 1e-3 and its estimate)");
+        Assert.Equal(2, s.MaterialChecks.Count);
+        Assert.Contains(r.Warnings, w => w.Code == "composite-bonding");
+    }
 }

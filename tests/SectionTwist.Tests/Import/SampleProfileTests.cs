@@ -24,7 +24,7 @@ public class SampleProfileTests
         {
             string path = Path.Combine(dir, file);
             string text = make();
-            if (write) { Directory.CreateDirectory(dir); File.WriteAllText(path, text); }
+            if (write) { Directory.CreateDirectory(Path.GetDirectoryName(path)!); File.WriteAllText(path, text); }
             Assert.True(File.Exists(path), $"{file} missing: run the tests with SECTIONTWIST_WRITE_SAMPLES=1");
             Assert.Equal(text, File.ReadAllText(path));
         }

@@ -17,7 +17,15 @@ internal static class SampleProfiles
         ("winch-frame-shs-inch.dxf", FrameShsInch),
         ("winch-brake-lever-mirrored.dxf", BrakeLever),
         ("winch-crank-grip-spline.dxf", CrankGrip),
+        ("composite/winch-clad-strip.dxf", CladStrip),
     ];
+
+    // brass-clad steel strip (a composite section): steel 60 x 2.5 mm on layer CORE, brass 60 x 1.5 mm on layer SKIN,
+    // bonded along the long edge; the layers share that edge from the outline to the outline
+    public const double CladB = 60, CladCore = 2.5, CladSkin = 1.5;
+
+    public static string CladStrip() =>
+        new DxfText().Header(4).Entities().Rect(0, 0, CladB, CladCore, "CORE").Rect(0, CladCore, CladB, CladSkin, "SKIN").End().ToString();
 
     // keyed input shaft: d = 40 mm, keyseat 12 wide, 5 deep (for a 12 x 8 key); R12 LINE/ARC, plus a title TEXT
     public const double KeyR = 20, KeyHalfW = 6, KeyFloor = 15;

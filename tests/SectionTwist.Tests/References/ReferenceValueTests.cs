@@ -39,6 +39,12 @@ public class ReferenceValueTests
         double aw = Math.Sqrt(210e9 * 1.3e-8 / (81e9 * 7e-8));
         foreach (double n in new[] { 0.5, 2.0, 8.0 })
             list.Add(($"cantilever I restrained L={n.ToString("0.#", CultureInfo.InvariantCulture)}a twist", RestrainedCantileverTwist(1000, n * aw, 81e9, 7e-8, 210e9, 1.3e-8), 1e-9, "Vlasov"));
+        // compound circular bar, core d = 30 mm G = 80 GPa in a tube D = 40 mm G = 40 GPa: (G J)_eff = G1 J1 + G2 J2,
+        // J_ref = (G J)_eff / G1, tau_i / T = G_i r_i / (G J)_eff (exact; Lekhnitskii, compound bars)
+        double j1 = Circle(0.030).J, j2 = Tube(0.040, 0.030).J, gj = 80e9 * j1 + 40e9 * j2;
+        list.Add(("bonded bar/tube 30/40mm J", gj / 80e9, 1e-4, "Lekhnitskii"));
+        list.Add(("bonded bar/tube 30/40mm core peak shear", 80e9 * 0.015 / gj, 5e-3, "Lekhnitskii"));
+        list.Add(("bonded bar/tube 30/40mm tube peak shear", 40e9 * 0.020 / gj, 5e-3, "Lekhnitskii"));
         return list;
     }
 
@@ -50,7 +56,7 @@ public class ReferenceValueTests
         foreach (var c in VerificationSuite.Cases)
         {
             var e = expected.Single(x => x.Name == c.Name);
-            Tol.Rel(e.Value, c.Reference, 1e-12, $"{c.Name}: {(e.Source == "Roark" ? RectangleSource : e.Source == "Vlasov" ? "Vlasov, Thin-Walled Elastic Beams, ch. 5" : TimoshenkoGoodier)}");
+            Tol.Rel(e.Value, c.Reference, 1e-12, $"{c.Name}: {(e.Source == "Roark" ? RectangleSource : e.Source == "Vlasov" ? "Vlasov, Thin-Walled Elastic Beams, ch. 5" : e.Source == "Lekhnitskii" ? "exact compound circular bar (Lekhnitskii)" : TimoshenkoGoodier)}");
             Assert.Equal(e.Tolerance, c.Tolerance);
             Assert.Contains(e.Source, c.Source, StringComparison.Ordinal);
         }

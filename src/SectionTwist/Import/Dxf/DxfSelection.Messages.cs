@@ -76,7 +76,11 @@ internal sealed partial class DxfSelection
     private SectionTwistException JunctionError(Junction j, bool allMode) =>
         new("dxf-branch",
             $"{file}: {j.Ends} outline ends meet at {Pt(j.Where)} ({string.Join(", ", j.Sources)}), so no single outline runs through there; " +
-            $"remove the stray or construction lines there{LayerHint}{Choice(allMode)}");
+            $"remove the stray or construction lines there{LayerHint}{Choice(allMode)}{MaterialHint}");
+
+    /// <summary>Layers that meet along edges may be the bonded parts of a composite section.</summary>
+    private string MaterialHint => layers.Count > 1
+        ? $"; or, if the layers are bonded parts of different materials, give each layer its material with {_fix.Materials(layers.Order(StringComparer.Ordinal).Take(3))}" : "";
 
     /// <summary>Open entities: the nearest pair of free ends is a gap (with a snap value that closes it) or nothing is near.</summary>
     private SectionTwistException OpenError(List<LooseGroup> open, bool allMode, bool surrounds = false)
