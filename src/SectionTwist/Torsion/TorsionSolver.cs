@@ -47,7 +47,12 @@ internal static class TorsionSolver
         Span<double> xe = stackalloc double[6];
         Span<double> ye = stackalloc double[6];
         MeshLaplacian? laplacian = null;
-        bool twoGrid = !shareLaplacian && parent?.Factor is not null && n >= TwoGridThreshold;
+        // With the matrix shared for the warping solve, its order of all nodes is computed anyway while that is an
+        // approximate minimum degree order, and factorizing with it is cheaper than iterating; above
+        // SymbolicCholesky.NestedDissectionThreshold nodes the nested-dissection order alone costs more than the
+        // iteration, and the warping solve iterates too (WarpingSolver), so the order is never computed.
+        bool twoGrid = parent?.Factor is not null && n >= TwoGridThreshold
+            && (!shareLaplacian || nNodes > SymbolicCholesky.NestedDissectionThreshold);
         CscMatrix k;
         ISpdSolver? solver = null;
         if (shareLaplacian)
@@ -59,7 +64,8 @@ internal static class TorsionSolver
                 int d = dof[mesh.Elements[q]];
                 if (d >= 0) f[d] += load[q];
             }
-            if (n > 0) (k, solver) = laplacian.System(dof, n, tolerance, ct);
+            if (n > 0 && twoGrid) k = CscRestriction.Restrict(laplacian.Matrix, dof, n, ct);
+            else if (n > 0) (k, solver) = laplacian.System(dof, n, tolerance, ct);
             else k = new CscMatrix(0, [0], [], []);
         }
         else
