@@ -30,7 +30,9 @@ public static class CombinedStress
         foreach (var p in section.PointSpan)
         {
             var q = At(section, p, axialForce, mx, my, torque, rotating);
-            if (best is null || q.VonMises > best.VonMises) best = q;
+            // a point must win clearly (1e-9 relative): on a round shaft every point ties, and round-off alone should not
+            // move the reported point between builds (the stress differs by less than the 1e-9)
+            if (best is null || q.VonMises > best.VonMises * (1 + 1e-9)) best = q;
         }
         return best!;
     }
