@@ -55,7 +55,7 @@ internal static class SectionText
         w.WriteLine($"  warping length a (steel)  {u.Length.Format(wr.SteelWarpingLength, 6),14} {u.Length.Symbol}   a = sqrt(E Iw / (G J)), E/G = 2.6");
         string verdict = wr.Classification == Warping.WarpingClass.WarpingSensitive
             ? "open thin-walled: restrained warping at supports and loads changes twist and adds normal stress; T L / (G J) alone can be far off"
-            : "solid or closed: warping torsion negligible, Saint-Venant torsion applies";
+            : "warping torsion negligible (solid or closed, or open with all walls meeting at one point: angle, tee, cruciform), Saint-Venant torsion applies";
         w.WriteLine($"  warping ratio Iw/(J rp^2) {NumberText.Format(wr.WarpingRatio, 6),14}   {verdict}");
         if (wr.Classification == Warping.WarpingClass.WarpingSensitive)
             w.WriteLine("  caution: lateral-torsional buckling, local buckling and connection design are not checked; follow the local steel design code");

@@ -60,6 +60,8 @@ public class CompositeContactRefusalTests
         var ex = Refused("composite-point-contact", ("A", Rect(0, 0, 0.01, 0.01)), ("B", Rect(0.01, 0.01, 0.02, 0.02)));
         Assert.Contains("parts 'A' and 'B' touch only at the point", ex.Message, StringComparison.Ordinal);
         Assert.Contains("share an edge", ex.Message, StringComparison.Ordinal);
+        // the place in the parts' own unit (mm here), not in metres without a unit
+        Assert.Contains("the point (10, 10) mm", ex.Message, StringComparison.Ordinal);
     }
 
     [Fact]
