@@ -223,7 +223,33 @@ internal sealed class CompositeArrangement
         foreach (var s in shared) root[Find(s.Left)] = Find(s.Right);
         for (int i = 1; i < n; i++)
             if (Find(i) != Find(0))
+            {
+                var group = Enumerable.Range(0, n).Where(k => Find(k) == Find(0)).ToList();
+                double gap = Gap(i, group);
+                string width = double.IsFinite(gap)
+                    ? $"; their nearest boundaries are {LengthUnit.Inv(_parts[0].Shape.Unit.FromMetres(gap), "G3")} {_parts[0].Shape.Unit.Symbol} apart, and edges are shared only within {LengthUnit.Inv(_parts[0].Shape.Unit.FromMetres(_tol), "G2")} {_parts[0].Shape.Unit.Symbol}"
+                    : "";
                 throw new SectionTwistException("composite-gap",
-                    $"{_name}: part '{_parts[i].Name}' shares no edge with part '{_parts[0].Name}' or the parts bonded to it (a gap, or contact at a point only); draw neighbouring parts so that they share an edge (snap the drawing), or analyse the parts separately");
+                    $"{_name}: part '{_parts[i].Name}' shares no edge with part '{_parts[0].Name}' or the parts bonded to it (a gap, or contact at a point only){width}; draw neighbouring parts so that they share an edge (snap the drawing), or analyse the parts separately");
+            }
+    }
+
+    /// <summary>
+    /// The smallest distance from the corners of part <paramref name="part"/> to the boundary of the parts in
+    /// <paramref name="group"/> and back, m; infinity when the parts have too many pieces to compare on an error path.
+    /// </summary>
+    private double Gap(int part, List<int> group)
+    {
+        static IEnumerable<Segment> Pieces(CompositePart p) => p.Shape.Regions.SelectMany(r => r.Holes.Prepend(r.Outer)).SelectMany(l => l.Segments);
+        var a = Pieces(_parts[part]).ToList();
+        var b = group.SelectMany(k => Pieces(_parts[k])).ToList();
+        if ((double)a.Count * b.Count > 4e6) return double.PositiveInfinity;
+        double best = double.PositiveInfinity;
+        foreach (var (from, to) in new[] { (a, b), (b, a) })
+            foreach (var s in from)
+                foreach (var p in new[] { s.Start, s.PointAt(0.5) })
+                    foreach (var t in to)
+                        best = Math.Min(best, Point2.Distance(p, t.Closest(p).Point));
+        return best;
     }
 }

@@ -71,6 +71,40 @@ public sealed class CompositeCliTests : IDisposable
     }
 
     [Fact]
+    public void A_plain_template_with_materials_is_refused_instead_of_read_as_one_part_per_material()
+    {
+        // a circle has no parts: each --material entry used to read the whole circle again (one part 'core' for
+        // circle:d=40 --material core=..., two overlapping circles for two entries). Common practice, no source.
+        var (code, _, err) = CliRunner.Run("section", "circle:d=40", "--material", "core=steel-1045-cd");
+        Assert.Equal(2, code);
+        Assert.Contains("'circle' is not a composite template", err);
+        Assert.Contains("sleeved", err);
+        Assert.DoesNotContain("   at ", err);
+    }
+
+    [Fact]
+    public void A_material_without_strengths_says_so_instead_of_leaving_out_its_limit()
+    {
+        var (code, output, err) = CliRunner.Run("section", "sleeved:d=40,t=5", "--material", "core=steel-1045-cd,sleeve=brass", "--accuracy", "1e-3");
+        Assert.True(code == 0, err);
+        Assert.Contains("torque to reach its allowable shear", output);   // the steel core
+        Assert.Contains("no allowable or shear yield known for this material", output);   // library brass gives no strengths
+    }
+
+    [Fact]
+    public void Overlapping_layers_are_refused_at_a_place_in_the_drawing_unit()
+    {
+        string path = Path.Combine(_dir, "overlap.dxf");
+        // two 40 x 3.5 and 40 x 3 mm layers overlapping by 0.5 mm: the place was printed in metres without a unit
+        File.WriteAllText(path, new DxfText().Header(4).Entities().Rect(0, 0, 40, 3.5, "A").Rect(0, 3, 40, 3, "B").End().ToString());
+        var (code, _, err) = CliRunner.Run("section", path, "--material", "A=steel-1045-cd,B=brass");
+        Assert.Equal(2, code);
+        Assert.Contains("overlap", err);
+        Assert.Matches(@"near \(\d+(\.\d+)?, \d+(\.\d+)?\) mm", err);
+        Assert.DoesNotContain("0.00", err);
+    }
+
+    [Fact]
     public void A_mistyped_part_or_material_is_named_with_the_nearest()
     {
         var (code, _, err) = CliRunner.Run("section", "sleeved:d=40,t=5", "--material", "core=steel-1045-cd,sleve=brass");

@@ -1,0 +1,44 @@
+namespace SectionTwist.Tests.Cli;
+
+/// <summary>
+/// Mistakes of a first session found by trying the tool from its documentation alone: each gets one line naming the
+/// input and a remedy that can be followed, exit code 2. Common practice, no source.
+/// </summary>
+public sealed class NewUserMistakesTests : IDisposable
+{
+    private readonly string _dir = CliRunner.TempDir();
+
+    public void Dispose() => Directory.Delete(_dir, recursive: true);
+
+    [Fact]
+    public void A_shaft_file_given_to_section_points_to_the_shaft_command()
+    {
+        string path = Path.Combine(_dir, "design.yaml");
+        File.WriteAllText(path, "title: x\n");
+        var (code, _, err) = CliRunner.Run("section", path);
+        Assert.Equal(2, code);
+        Assert.Contains("no profile source reads '.yaml' files", err);
+        Assert.Contains("sectiontwist shaft", err);
+        Assert.DoesNotContain("   at ", err);
+    }
+
+    [Fact]
+    public void A_mistyped_plastic_material_gets_the_nearest_name()
+    {
+        var (code, _, err) = CliRunner.Run("section", "circle:d=20", "--plastic", "steel-s335");
+        Assert.Equal(2, code);
+        Assert.Contains("did you mean 'steel-s355'", err);
+    }
+
+    [Fact]
+    public void An_angle_is_warping_negligible_without_being_called_solid_or_closed()
+    {
+        // thin-wall theory: the walls of an angle meet at the shear centre, so its sectorial coordinate and Iw are
+        // almost zero (Iw = t^3 (b'^3 + h'^3) / 36; Timoshenko and Gere, Theory of Elastic Stability, ch. 5, from memory)
+        var (code, output, err) = CliRunner.Run("section", "angle:h=60,b=60,t=6,r=6", "--warping", "--accuracy", "1e-3");
+        Assert.True(code == 0, err);
+        Assert.Contains("warping torsion negligible", output);
+        Assert.Contains("angle, tee", output);
+        Assert.DoesNotContain("solid or closed:", output);
+    }
+}
