@@ -53,7 +53,18 @@ public static class CompositeSources
             throw new SectionTwistException("bad-option", $"{source}: the materials name the layers to read; leave out the layer filter (--layer) and map each layer to its material");
         foreach (var (layer, material) in materials)
         {
-            var shape = ProfileSources.Load(source, options with { Layer = layer });
+            Profile shape;
+            try
+            {
+                shape = ProfileSources.Load(source, options with { Layer = layer });
+            }
+            catch (SectionTwistException ex) when (options.At is not null || options.Window is not null || options.Part is not null)
+            {
+                // the choice options apply to each layer on its own: say which layer refused, since a remedy such as
+                // another --at point names a part of that layer only
+                throw new SectionTwistException(ex.Code,
+                    $"{ex.Message} (while reading layer '{layer}' of the composite: a part choice applies to each part's layer on its own; {(options.ShaftFileKeys ? "a 'window:'" : "a --window")} around the whole section, or none, suits every layer)");
+            }
             parts.Add(new CompositePart(layer, shape.With(name: $"{Path.GetFileName(source)} layer {layer}"), material));
         }
         return new CompositeSection(parts, Path.GetFileName(source));

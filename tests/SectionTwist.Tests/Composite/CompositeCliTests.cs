@@ -105,6 +105,21 @@ public sealed class CompositeCliTests : IDisposable
     }
 
     [Fact]
+    public void A_point_choice_that_fails_on_one_layer_names_that_layer()
+    {
+        // --at applies to each layer on its own: a point in layer A lies in no part of layer B, and B's own remedy
+        // (another --at) would then fail for A. Common practice, no source: say which layer refused.
+        string path = Path.Combine(_dir, "at.dxf");
+        File.WriteAllText(path, new DxfText().Header(4).Entities().Rect(0, 0, 40, 3, "A").Rect(0, 3, 40, 3, "B").End().ToString());
+        var (code, _, err) = CliRunner.Run("section", path, "--material", "A=steel-1045-cd,B=brass", "--at", "20,1");
+        Assert.Equal(2, code);
+        Assert.Contains("while reading layer 'B' of the composite", err);
+        Assert.Contains("--window", err);
+        (code, _, err) = CliRunner.Run("section", path, "--material", "A=steel-1045-cd,B=brass", "--window", "-1,-1,41,7", "--accuracy", "1e-3");
+        Assert.True(code == 0, err);
+    }
+
+    [Fact]
     public void A_mistyped_part_or_material_is_named_with_the_nearest()
     {
         var (code, _, err) = CliRunner.Run("section", "sleeved:d=40,t=5", "--material", "core=steel-1045-cd,sleve=brass");
