@@ -41,4 +41,14 @@ public sealed class NewUserMistakesTests : IDisposable
         Assert.Contains("angle, tee", output);
         Assert.DoesNotContain("solid or closed:", output);
     }
+
+    [Fact]
+    public void The_shear_centre_of_a_doubly_symmetric_section_prints_as_the_centroid_not_as_round_off()
+    {
+        // an I-section's shear centre is its centroid by symmetry (Timoshenko and Gere, Theory of Elastic Stability,
+        // ch. 5); the guide promises zeros to the accuracy of the computation print as 0
+        var (code, output, err) = CliRunner.Run("section", "ibeam:h=200,b=100,tw=5.6,tf=8.5,r=12", "--warping", "--accuracy", "1e-3");
+        Assert.True(code == 0, err);
+        Assert.Contains("shear centre (x, y)       (0, 0) mm", output);
+    }
 }
