@@ -51,4 +51,18 @@ public sealed class NewUserMistakesTests : IDisposable
         Assert.True(code == 0, err);
         Assert.Contains("shear centre (x, y)       (0, 0) mm", output);
     }
+
+    [Fact]
+    public void Inspect_of_a_drawing_with_bonded_layers_offers_a_remedy_inspect_can_follow()
+    {
+        // the junction where two layers meet suggested '--material', an option of 'section' only; common practice, no source
+        string path = Path.Combine(_dir, "layers.dxf");
+        File.WriteAllText(path, new SectionTwist.Tests.Import.DxfText().Header(4).Entities().Rect(0, 0, 40, 3, "A").Rect(0, 3, 40, 3, "B").End().ToString());
+        var (code, output, err) = CliRunner.Run("inspect", path);
+        Assert.Equal(2, code);
+        Assert.Contains("--material A=MATERIAL,B=MATERIAL on 'section'", output + err);
+        Assert.Contains("--layer NAME", output + err);
+        (code, _, err) = CliRunner.Run("inspect", path, "--layer", "A");
+        Assert.True(code == 0, err);
+    }
 }
