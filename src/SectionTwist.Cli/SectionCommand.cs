@@ -10,7 +10,7 @@ internal sealed class SectionCommand : ICommand
     public string Name => "section";
     public string Summary => "torsion constant J, peak shear per torque and area properties of a cross-section";
     public string Usage => $$"""
-        sectiontwist section SOURCE [SOURCE ...] [--accuracy REL] [--unit U] [--units SYSTEM] [drawing options] [--json] [--warping] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR] [--plastic MATERIAL|STRESS [--plastic-plot FILE.png|svg]] [--material PART=MATERIAL,... [--reference PART|MATERIAL]]
+        sectiontwist section SOURCE [SOURCE ...] [--accuracy REL] [--unit U] [--units SYSTEM] [drawing options] [--json] [--warping [--warping-plot FILE.png|svg]] [--plot FILE.png|svg] [--torque T] [--dxf FILE.dxf [--dxf-mesh]] [--plugins DIR] [--plastic MATERIAL|STRESS [--plastic-plot FILE.png|svg]] [--material PART=MATERIAL,... [--reference PART|MATERIAL]]
           SOURCE      a template spec such as circle:d=40, keyed:d=40, rect:b=60,h=20, a drawing file (.dxf),
                       a point list (.csv, .pts) or anything a plugin reads; several SOURCEs (or a wildcard
                       such as drawings/*.dxf) are analysed on all cores and printed as one table (batch)
@@ -26,6 +26,8 @@ internal sealed class SectionCommand : ICommand
           --jobs      analyses at once in a batch (default: one per core)
           --warping   also solve the warping function: shear centre, warping constant Iw, largest sectorial
                       coordinate, warping length for steel and whether restrained warping matters
+          --warping-plot  write a picture of the normalized warping function omega (PNG or SVG): filled bands
+                      from negative (blue) through zero (white) to positive (red), shear centre and centroid marked
           --plot      write a shear-stress contour picture (PNG or SVG)
           --torque    torque for the plot colour bar, in N*m, or with a unit: 250Nm, 2kN*m, 1800lbf*in (default: stress per unit torque)
           --dxf       write the outline (layer PROFILE) and stress-function contours (layer PHI) to a DXF file for CAD
@@ -49,6 +51,8 @@ internal sealed class SectionCommand : ICommand
     {
         bool json = args.Flag("json");
         bool warping = args.Flag("warping");
+        string? warpingPlot = args.Option("warping-plot");
+        if (warpingPlot is not null && !warping) throw new UsageException("--warping-plot needs --warping (the picture shows the warping function it solves); add --warping");
         double accuracy = AccuracyOption.Read(args) ?? 1e-4;
         var unitText = args.Option("unit");
         var drawingNotes = new List<string>();
@@ -76,7 +80,7 @@ internal sealed class SectionCommand : ICommand
         args.EnsureAllUsed();
         if (SectionBatchCli.IsBatch(args.Positional, csv))
         {
-            string? single = plot is not null ? "--plot" : dxf is not null ? "--dxf" : plasticYield is not null ? "--plastic" : warping ? "--warping" : torque is not null ? "--torque" : materialText.Count > 0 ? "--material" : referenceText is not null ? "--reference" : null;
+            string? single = warpingPlot is not null ? "--warping-plot" : plot is not null ? "--plot" : dxf is not null ? "--dxf" : plasticYield is not null ? "--plastic" : warping ? "--warping" : torque is not null ? "--torque" : materialText.Count > 0 ? "--material" : referenceText is not null ? "--reference" : null;
             if (single is not null) throw new UsageException($"{single} works on one SOURCE; run it for each source on its own");
             if (json && csv) throw new UsageException("choose one of --json and --csv");
             if (jobs is < 1 or > 1024) throw new UsageException($"--jobs {jobs}: give the number of analyses at once, from 1 to 1024");
@@ -97,6 +101,12 @@ internal sealed class SectionCommand : ICommand
         LoadPlugins(plugins);
         if (plot is not null) OutputPaths.CheckFile(plot, "--plot");
         if (dxf is not null) OutputPaths.CheckFile(dxf, "--dxf");
+        if (warpingPlot is not null)
+        {
+            if (Path.GetExtension(warpingPlot).ToLowerInvariant() is not (".png" or ".svg"))
+                throw new UsageException($"--warping-plot {warpingPlot}: unknown picture type '{Path.GetExtension(warpingPlot)}'; name the file *.png or *.svg");
+            OutputPaths.CheckFile(warpingPlot, "--warping-plot");
+        }
         string source = args.Positional[0];
         var profile = ProfileSources.Load(source, srcOptions);
         SectionResult result;
@@ -107,6 +117,8 @@ internal sealed class SectionCommand : ICommand
             result = result with { Warnings = drawingNotes.Select(n => new AnalysisWarning("drawing", n)).Concat(result.Warnings).ToList().AsReadOnly() };
         if (plot is not null) SectionPlotHook.Write(result, plot, torque, SectionPlotHook.Title(source, srcOptions.Part), units);
         if (dxf is not null) SectionDxfExport.Write(result, dxf, dxfMesh);
+        if (warpingPlot is not null)
+            Rendering.Warping.WarpingPicture.Save(result, warpingPlot, $"{SectionPlotHook.Title(source, srcOptions.Part)}: warping function ω (about the shear centre)", units);
         Plastic.PlasticResult? plastic;
         using (var progress = new ProgressLine(ctx, $"section {source}"))
         using (progress.Pulse("plastic torsion"))

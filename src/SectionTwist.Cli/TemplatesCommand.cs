@@ -66,6 +66,12 @@ internal sealed class TemplatesCommand : ICommand
         w.WriteLine("Angles are degrees (30 or 30deg) unless written with rad (0.5rad). Kind 'deg/deg/...' is a list of angles, one per");
         w.WriteLine("feature, separated by '/': keyed:d=40,n=2,at=90/270 puts two keyseats at 90 and 270 deg from +x.");
         w.WriteLine("A kind 'a|b' takes one of the words listed (series=light). Counts are whole numbers (n=2).");
+        if (list.Any(t => SteelSectionTemplates.IsDesignation(t.Name)))
+        {
+            w.WriteLine("Designations (ipe, hea, heb, upn, upe, leq, lun, hfshs, hfrhs, hfchs): the table rows are from memory, not from a");
+            w.WriteLine("supplier's table; check every row used against the supplier's current table. Lateral-torsional and local buckling");
+            w.WriteLine("and connection design are outside this tool; defer to the local steel design code.");
+        }
     }
 
     private static void WriteJson(IReadOnlyList<TemplateInfo> list, TextWriter w, CancellationToken ct)

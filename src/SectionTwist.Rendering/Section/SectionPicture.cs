@@ -233,7 +233,7 @@ public static class SectionPicture
     }
 
     /// <summary>Centroid as a ringed cross, shear centre as a filled square, each with a short label.</summary>
-    private static void DrawCentres(SKCanvas c, SectionPlotData data, SectionLayout L)
+    internal static void DrawCentres(SKCanvas c, SectionPlotData data, SectionLayout L)
     {
         if (data.Centroid is { } g)
         {

@@ -3,9 +3,11 @@ namespace SectionTwist.Profiles;
 /// <summary>
 /// Rows of hot-rolled steel section tables by designation, dimensions in mm with the table's own area (cm^2) and
 /// torsion constant It (cm^4) for checking. Every row is from memory of the European tables (IPE, HEA and HEB to
-/// EN 10365 / Euronorm 53-62 and 19-57; UPN to EN 10365 / DIN 1026-1; equal angles to EN 10056-1) and must be checked
-/// against the mill's current table before use in design. The tables' It comes from a thin-wall formula with a
-/// fillet term, not from an exact solution.
+/// EN 10365 / Euronorm 53-62 and 19-57; UPN to EN 10365 / DIN 1026-1; equal angles to EN 10056-1; UPE and unequal
+/// angles in <see cref="OpenSectionTable"/>; hot-finished hollow sections to EN 10210-2 in
+/// <see cref="HollowSectionTable"/>) and must be checked against the mill's current table before use in design. The
+/// tables' It comes from a thin-wall formula with a fillet term (hollow sections: Bredt's formula with corner radii),
+/// not from an exact solution.
 /// </summary>
 internal static class SteelSectionTable
 {
@@ -14,7 +16,7 @@ internal static class SteelSectionTable
 
     private static Row I(string f, string s, double h, double b, double tw, double tf, double r, double a, double it) => new(f, s, h, b, tw, tf, r, 0, 0, a, it);
 
-    public static IReadOnlyList<Row> Rows { get; } =
+    private static readonly Row[] RolledRows =
     [
         I("ipe", "100", 100, 55, 4.1, 5.7, 7, 10.3, 1.20),
         I("ipe", "120", 120, 64, 4.4, 6.3, 7, 13.2, 1.74),
@@ -48,16 +50,42 @@ internal static class SteelSectionTable
         new("leq", "100x10", 100, 100, 10, 10, 12, 6, 0, 19.2, double.NaN),
     ];
 
-    /// <summary>The row of <paramref name="family"/> and <paramref name="size"/>, or null.</summary>
+    /// <summary>Every row: the rolled I, H, UPN and equal-angle rows, then the open and hollow tables (declared after their parts, which initialise first).</summary>
+    public static IReadOnlyList<Row> Rows { get; } = [.. RolledRows, .. OpenSectionTable.Rows, .. HollowSectionTable.Rows];
+
+    /// <summary>
+    /// The row of <paramref name="family"/> and <paramref name="size"/>, or null. Sizes match by their numbers, so
+    /// <c>100x100x5.0</c> and <c>100 x 100 x 5</c> find the row <c>100x100x5</c>.
+    /// </summary>
     public static Row? Find(string family, string size) =>
-        Rows.Where(r => r.Family == family && string.Equals(r.Size, size.Trim(), StringComparison.OrdinalIgnoreCase)).Select(r => (Row?)r).FirstOrDefault();
+        Rows.Where(r => r.Family == family && SameSize(r.Size, size)).Select(r => (Row?)r).FirstOrDefault();
+
+    private static bool SameSize(string a, string b)
+    {
+        if (string.Equals(a, b.Trim(), StringComparison.OrdinalIgnoreCase)) return true;
+        var x = Numbers(a);
+        var y = Numbers(b);
+        return x is not null && y is not null && x.SequenceEqual(y);
+    }
+
+    private static double[]? Numbers(string size)
+    {
+        var parts = size.ToLowerInvariant().Replace('*', 'x').Split('x', StringSplitOptions.TrimEntries);
+        var values = new double[parts.Length];
+        for (int i = 0; i < parts.Length; i++)
+            if (!double.TryParse(parts[i], System.Globalization.NumberStyles.Float, System.Globalization.CultureInfo.InvariantCulture, out values[i])) return null;
+        return values;
+    }
 
     /// <summary>The equivalent parametric spec, e.g. <c>ibeam:h=200,b=100,tw=5.6,tf=8.5,r=12</c>.</summary>
     public static string Spec(Row r) => FormattableString.Invariant(r.Family switch
     {
         // the table gives tf at b/2 from the back of the web; the channel template wants it at mid-outstand, tw/2 further out
         "upn" => $"channel:h={r.H},b={r.B},tw={r.Tw},tf={Math.Round(r.Tf - r.Taper / 100 * r.Tw / 2, 6)},r={r.R},r2={r.R2},taper={r.Taper}",
-        "leq" => $"angle:h={r.H},b={r.B},t={r.Tw},r={r.R},r2={r.R2}",
+        "leq" or "lun" => $"angle:h={r.H},b={r.B},t={r.Tw},r={r.R},r2={r.R2}",
+        "upe" => $"channel:h={r.H},b={r.B},tw={r.Tw},tf={r.Tf},r={r.R}",
+        "hfshs" or "hfrhs" => $"rhs:H={r.H},B={r.B},t={r.Tw},ro={r.R},ri={r.R2}",
+        "hfchs" => $"tube:D={r.H},t={r.Tw}",
         _ => $"ibeam:h={r.H},b={r.B},tw={r.Tw},tf={r.Tf},r={r.R}",
     });
 }

@@ -32,6 +32,35 @@ internal static class EliminationTree
         return parent;
     }
 
+    /// <summary>
+    /// parent[k] of the elimination tree of P A P' (perm[k] = original index of the k-th pivot, pinv its inverse)
+    /// read straight from A, without forming P A P' (Liu's algorithm as in <see cref="Parents"/>; rows need no order).
+    /// </summary>
+    public static int[] ParentsPermuted(CscMatrix a, int[] perm, int[] pinv)
+    {
+        int n = a.N;
+        int[] cp = a.ColPtr, ci = a.RowIdx;
+        var parent = new int[n];
+        var ancestor = new int[n];
+        for (int k = 0; k < n; k++)
+        {
+            parent[k] = -1; ancestor[k] = -1;
+            int c = perm[k];
+            for (int p = cp[c]; p < cp[c + 1]; p++)
+            {
+                int i = pinv[ci[p]];
+                while (i != -1 && i < k)
+                {
+                    int inext = ancestor[i];
+                    ancestor[i] = k;
+                    if (inext == -1) { parent[i] = k; break; }
+                    i = inext;
+                }
+            }
+        }
+        return parent;
+    }
+
     /// <summary>Depth-first postorder of a forest given by parent pointers (Davis sec. 4.3).</summary>
     public static int[] Postorder(int[] parent)
     {

@@ -40,26 +40,18 @@ internal static class ReferenceProblems
                 [offX[t][0] * hl, offX[t][1] * hl, offX[t][2] * hl],
                 [offY[t][0] * hl, offY[t][1] * hl, offY[t][2] * hl], ke[t]);
         }
-        var trip = new TripletMatrix(n, 2 * m * m * 36 + 16);
-        Span<int> dof = stackalloc int[6];
-        for (int sr = 0; sr < m; sr++)
+        var dofs = new int[2 * m * m * 6];
+        for (int sr = 0, e = 0; sr < m; sr++)
             for (int sc = 0; sc < m; sc++)
-                for (int t = 0; t < 2; t++)
-                {
+                for (int t = 0; t < 2; t++, e++)
                     for (int a = 0; a < 6; a++)
                     {
                         int lx = 2 * sc + offX[t][a], ly = 2 * sr + offY[t][a];
-                        dof[a] = lx == 0 || ly == 0 || lx == side - 1 || ly == side - 1 ? -1 : (ly - 1) * inner + (lx - 1);
+                        dofs[6 * e + a] = lx == 0 || ly == 0 || lx == side - 1 || ly == side - 1 ? -1 : (ly - 1) * inner + (lx - 1);
                     }
-                    var k = ke[t];
-                    for (int a = 0; a < 6; a++)
-                    {
-                        if (dof[a] < 0) continue;
-                        for (int b = 0; b < 6; b++)
-                            if (dof[b] >= 0) trip.Add(dof[a], dof[b], k[6 * a + b]);
-                    }
-                }
-        return trip.ToCsc();
+        var asm = new ElementAssembler(n, dofs, 6);
+        for (int e = 0; e < 2 * m * m; e++) asm.Add(e, ke[e & 1]);
+        return asm.ToCsc();
     }
 
     /// <summary>

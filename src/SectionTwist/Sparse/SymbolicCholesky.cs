@@ -91,18 +91,23 @@ internal sealed class SymbolicCholesky
         int n = a.N;
         if (perm.Length != n) throw new ArgumentException("order length differs from the matrix order", nameof(perm));
         ct.ThrowIfCancellationRequested();
-        var (fp, fi, map) = Permute(a, perm);
-        var parent = EliminationTree.Parents(n, fp, fi);
+        // tree of the given order read from A, its postorder composed into the order and the tree relabelled (a
+        // postorder is an equivalent order: same tree and fill, Davis sec. 4.3), then P A P' formed once
+        var pinv = new int[n];
+        for (int k = 0; k < n; k++) pinv[perm[k]] = k;
+        var parent = EliminationTree.ParentsPermuted(a, perm, pinv);
         var post = EliminationTree.Postorder(parent);
         if (!IsIdentity(post))
         {
             var p2 = new int[n];
-            for (int k = 0; k < n; k++) p2[k] = perm[post[k]];
-            perm = p2;
-            (fp, fi, map) = Permute(a, perm);
-            parent = EliminationTree.Parents(n, fp, fi);
+            var postInv = pinv; // reused: the inverse order is not needed again
+            for (int k = 0; k < n; k++) { p2[k] = perm[post[k]]; postInv[post[k]] = k; }
+            var parent2 = new int[n];
+            for (int k = 0; k < n; k++) { int q = parent[post[k]]; parent2[k] = q < 0 ? -1 : postInv[q]; }
+            perm = p2; parent = parent2;
             post = Identity(n);
         }
+        var (fp, fi, map) = Permute(a, perm);
         ct.ThrowIfCancellationRequested();
         var counts = EliminationTree.ColumnCounts(n, fp, fi, parent, post);
         var lp = new long[n + 1];

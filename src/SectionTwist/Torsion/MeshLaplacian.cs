@@ -32,7 +32,7 @@ internal sealed class MeshLaplacian
     public static MeshLaplacian Assemble(Mesh mesh, double[] elementLoad, CancellationToken ct)
     {
         int nEl = mesh.ElementCount;
-        var trip = new TripletMatrix(mesh.NodeCount, nEl * 36);
+        var asm = new ElementAssembler(mesh.NodeCount, mesh.Elements, 6);
         Span<double> ke = stackalloc double[36];
         Span<double> fe = stackalloc double[6];
         Span<double> xe = stackalloc double[6];
@@ -43,13 +43,9 @@ internal sealed class MeshLaplacian
             TorsionSolver.Gather(mesh, e, xe, ye);
             TorsionSolver.ElementMatrices(xe, ye, ke, fe);
             fe.CopyTo(elementLoad.AsSpan(6 * e, 6));
-            for (int a = 0; a < 6; a++)
-            {
-                int na = mesh.Elements[6 * e + a];
-                for (int b = 0; b < 6; b++) trip.Add(na, mesh.Elements[6 * e + b], ke[6 * a + b]);
-            }
+            asm.Add(e, ke);
         }
-        return new MeshLaplacian(mesh, trip.ToCsc());
+        return new MeshLaplacian(mesh, asm.ToCsc());
     }
 
     /// <summary>

@@ -143,7 +143,7 @@ internal sealed class SectionAnalysis(Profile profile, AnalysisOptions options, 
                 throw budget.Refusal(mesh.ElementCount);
             coarseMesh = mesh;
             Report("solve", f0 + 0.2 * span);
-            coarse = TorsionSolver.Solve(coarseMesh, holeArea, ct, SolverTolerance(acc), share, keepFactor: options.EstimateError && !share);
+            coarse = TorsionSolver.Solve(coarseMesh, holeArea, ct, SolverTolerance(acc), share, keepFactor: options.EstimateError);
             share |= options.WarpingIfOpen && coarse.J < 0.5 * props.PolarMoment;
             if (!options.EstimateError) { fine = coarse; break; }
             Report("refine", f0 + 0.4 * span);

@@ -47,7 +47,12 @@ internal static class TorsionSolver
         Span<double> xe = stackalloc double[6];
         Span<double> ye = stackalloc double[6];
         MeshLaplacian? laplacian = null;
-        bool twoGrid = !shareLaplacian && parent?.Factor is not null && n >= TwoGridThreshold;
+        // With the matrix shared for the warping solve, its order of all nodes is computed anyway while that is an
+        // approximate minimum degree order, and factorizing with it is cheaper than iterating; above
+        // SymbolicCholesky.NestedDissectionThreshold nodes the nested-dissection order alone costs more than the
+        // iteration, and the warping solve iterates too (WarpingSolver), so the order is never computed.
+        bool twoGrid = parent?.Factor is not null && n >= TwoGridThreshold
+            && (!shareLaplacian || nNodes > SymbolicCholesky.NestedDissectionThreshold);
         CscMatrix k;
         ISpdSolver? solver = null;
         if (shareLaplacian)
@@ -59,7 +64,8 @@ internal static class TorsionSolver
                 int d = dof[mesh.Elements[q]];
                 if (d >= 0) f[d] += load[q];
             }
-            if (n > 0) (k, solver) = laplacian.System(dof, n, tolerance, ct);
+            if (n > 0 && twoGrid) k = CscRestriction.Restrict(laplacian.Matrix, dof, n, ct);
+            else if (n > 0) (k, solver) = laplacian.System(dof, n, tolerance, ct);
             else k = new CscMatrix(0, [0], [], []);
         }
         else
@@ -127,7 +133,9 @@ internal static class TorsionSolver
     internal static CscMatrix AssembleReduced(Mesh mesh, int[] dof, int n, double[] f, CancellationToken ct, Func<int, double>? elementWeight = null)
     {
         int nEl = mesh.ElementCount;
-        var trip = new TripletMatrix(n, nEl * 36);
+        var elementDofs = new int[6 * nEl];
+        for (int i = 0; i < elementDofs.Length; i++) elementDofs[i] = dof[mesh.Elements[i]];
+        var asm = new ElementAssembler(n, elementDofs, 6);
         Span<double> ke = stackalloc double[36];
         Span<double> fe = stackalloc double[6];
         Span<double> xe = stackalloc double[6];
@@ -137,20 +145,14 @@ internal static class TorsionSolver
             if ((e & 4095) == 0) ct.ThrowIfCancellationRequested();
             Gather(mesh, e, xe, ye);
             ElementMatrices(xe, ye, ke, fe);
-            double w = elementWeight?.Invoke(e) ?? 1;
             for (int a = 0; a < 6; a++)
             {
-                int da = dof[mesh.Elements[6 * e + a]];
-                if (da < 0) continue;
-                f[da] += fe[a];
-                for (int b = 0; b < 6; b++)
-                {
-                    int db = dof[mesh.Elements[6 * e + b]];
-                    if (db >= 0) trip.Add(da, db, w * ke[6 * a + b]);
-                }
+                int da = elementDofs[6 * e + a];
+                if (da >= 0) f[da] += fe[a];
             }
+            asm.Add(e, ke, elementWeight?.Invoke(e) ?? 1);
         }
-        return trip.ToCsc();
+        return asm.ToCsc();
     }
 
     internal static void Gather(Mesh mesh, int e, Span<double> xe, Span<double> ye)

@@ -21,4 +21,15 @@ internal sealed class WarpingSolution
     public required Point2 MaxShearFactorLocation { get; init; }
     /// <summary>Torsion constant from the warping function, Ip - integral |grad psi|^2 (an upper bound), m^4.</summary>
     public required double TorsionConstantUpper { get; init; }
+
+    /// <summary>The node fixed at psi = 0 (for a solve on the uniform refinement, which keeps the node numbers).</summary>
+    public int FixedNode { get; init; }
+    /// <summary>Node to unknown map of the solve (-1 for the fixed node).</summary>
+    public int[] Map { get; init; } = [];
+    /// <summary>The unknowns' solution psi (in <see cref="Map"/> numbering).</summary>
+    public double[] Unknowns { get; init; } = [];
+    /// <summary>The solver of this mesh's system, kept for the two-grid solve on its refinement (null when not kept).</summary>
+    public Sparse.ISpdSolver? Solver { get; set; }
+    /// <summary>The mesh solved on.</summary>
+    public Meshing.Mesh? Mesh { get; init; }
 }

@@ -28,14 +28,29 @@ internal static class WarpingSolver
     /// that solve) it is neither assembled nor ordered again; the node fixed is the one the shared order eliminates last,
     /// and only the numeric factorization is new.
     /// </remarks>
-    public static WarpingSolution? Solve(Mesh mesh, Point2 centroid, CancellationToken ct = default, MeshLaplacian? shared = null)
+    /// <param name="mesh">The mesh.</param>
+    /// <param name="centroid">The section's centroid, m.</param>
+    /// <param name="ct">Cancellation.</param>
+    /// <param name="shared">The stress-function solve's matrix and order on this mesh, or null.</param>
+    /// <param name="parent">
+    /// The solve on the mesh <paramref name="mesh"/> uniformly refines, with its solver kept: above
+    /// <paramref name="twoGridThreshold"/> nodes the system is solved by conjugate gradients with the two-grid
+    /// preconditioner on that coarse factorization (<see cref="TwoGridSolver"/>, as the stress-function solve does), the
+    /// fine matrix neither ordered nor factorized unless the iteration stalls.
+    /// </param>
+    /// <param name="keepSolver">Keep the solver on the result (<see cref="WarpingSolution.Solver"/>) for such a solve.</param>
+    /// <param name="twoGridThreshold">Nodes above which a <paramref name="parent"/> is used.</param>
+    public static WarpingSolution? Solve(Mesh mesh, Point2 centroid, CancellationToken ct = default, MeshLaplacian? shared = null,
+        WarpingSolution? parent = null, bool keepSolver = false, int twoGridThreshold = int.MaxValue)
     {
         int nNodes = mesh.NodeCount, nEl = mesh.ElementCount;
         for (int e = 1; e < nEl; e++) if (mesh.ElementRegion[e] != mesh.ElementRegion[0]) return null;
         double cx = centroid.X, cy = centroid.Y;
         var laplacian = shared ?? MeshLaplacian.Assemble(mesh, new double[6 * nEl], ct);
-        // DOF: the last node of the shared order fixed (psi = 0 there), the rest numbered in node order.
-        int fixedNode = laplacian.LastNode(ct);
+        // DOF: the last node of the shared order fixed (psi = 0 there), the rest numbered in node order. A two-grid solve
+        // fixes the coarse solve's node instead (the refinement keeps coarse node numbers), so the coarse space is nested.
+        bool twoGrid = parent?.Solver is not null && parent.Mesh is not null && nNodes > twoGridThreshold;
+        int fixedNode = twoGrid ? parent!.FixedNode : laplacian.LastNode(ct);
         int n = nNodes - 1;
         var map = new int[nNodes];
         for (int i = 0; i < nNodes; i++) map[i] = i < fixedNode ? i : i - 1;
@@ -68,7 +83,18 @@ internal static class WarpingSolver
             }
         }
         var u = new double[n];
-        var solver = n > 0 ? laplacian.System(map, n, SpdSolver.DefaultTolerance, ct).Solver : null;
+        ISpdSolver? solver = null;
+        if (n > 0 && twoGrid)
+        {
+            var k = CscRestriction.Restrict(laplacian.Matrix, map, n, ct);
+            var p = NestedProlongation.Build(parent!.Mesh!, parent.Map, parent.Map.Length - 1, mesh, map, n, ct);
+            var tg = new TwoGridSolver(k, p, parent.Solver!, TwoGridTolerance, ct);
+            var x0 = new double[n];
+            tg.Prolong(parent.Unknowns, x0);
+            tg.Initial = x0;
+            solver = new TwoGridWithFallback(tg, () => laplacian.System(map, n, SpdSolver.DefaultTolerance, ct).Solver);
+        }
+        else if (n > 0) solver = laplacian.System(map, n, SpdSolver.DefaultTolerance, ct).Solver;
         solver?.Solve(f, u);
         var psi = new double[nNodes];
         for (int i = 0; i < nNodes; i++) psi[i] = map[i] < 0 ? 0 : u[map[i]];
@@ -115,8 +141,19 @@ internal static class WarpingSolver
             MaxOmegaLocation = mesh.Node(at),
             // J = Ip - integral |grad psi|^2 with Ip about the origin psi was solved about (cx, cy)
             TorsionConstantUpper = m.Ixx + m.Iyy - energy,
+            FixedNode = fixedNode,
+            Map = map,
+            Unknowns = u,
+            Mesh = mesh,
+            Solver = keepSolver ? solver : null,
         };
     }
+
+    /// <summary>
+    /// Relative residual asked of the two-grid iteration: the finest of the stress-function solves' tolerances, since J
+    /// from the warping energy cancels Ip against it.
+    /// </summary>
+    internal const double TwoGridTolerance = 1e-12;
 
     private static void Gather(Mesh mesh, int e, double cx, double cy, Span<double> xe, Span<double> ye)
     {

@@ -54,7 +54,7 @@ public class SpecParserTests
         Assert.True(ProfileTemplates.IsSpec("keyed:d=40"));
         Assert.False(ProfileTemplates.IsSpec("shaft.dxf"));
         Assert.False(ProfileTemplates.IsSpec("C:/drawings/shaft.dxf"));
-        Assert.Equal(26, ProfileTemplates.All.Count); // 19 parametric + 5 designated rolled-section families + 2 composite
+        Assert.Equal(31, ProfileTemplates.All.Count); // 19 parametric + 10 designated section families + 2 composite
     }
 
     // Every template's example: the exact area and centroid (segment-wise integrals) agree with the shoelace formula over

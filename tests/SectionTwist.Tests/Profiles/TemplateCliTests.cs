@@ -22,6 +22,9 @@ public class TemplateCliTests
         }
         Assert.Contains("default DIN 6885-1 by d", output, StringComparison.Ordinal);
         Assert.Contains("length", output, StringComparison.Ordinal);
+        foreach (var family in new[] { "upe", "lun", "hfshs", "hfrhs", "hfchs" }) Assert.Contains(family + ": ", output, StringComparison.Ordinal);
+        Assert.Contains("the table rows are from memory", output, StringComparison.Ordinal);
+        Assert.Contains("check every row used against the supplier's current table", output, StringComparison.Ordinal);
         var (c2, json, _) = Run("templates", "shs", "--json");
         Assert.Equal(0, c2);
         using var doc = JsonDocument.Parse(json);
