@@ -65,4 +65,17 @@ public sealed class NewUserMistakesTests : IDisposable
         (code, _, err) = CliRunner.Run("inspect", path, "--layer", "A");
         Assert.True(code == 0, err);
     }
+
+    [Fact]
+    public void A_drawing_given_to_shaft_points_to_the_section_command()
+    {
+        // the YAML reader answered with "expected a mapping of keys ..., found '0 SECTION 2 HEADER ...'"
+        string path = Path.Combine(_dir, "strip.dxf");
+        File.WriteAllText(path, new SectionTwist.Tests.Import.DxfText().Header(4).Entities().Rect(0, 0, 40, 3, "A").End().ToString());
+        var (code, _, err) = CliRunner.Run("shaft", path);
+        Assert.Equal(2, code);
+        Assert.Contains("not a shaft file", err);
+        Assert.Contains("sectiontwist section", err);
+        Assert.DoesNotContain("   at ", err);
+    }
 }
