@@ -58,12 +58,14 @@ public static class CompositeSources
             {
                 shape = ProfileSources.Load(source, options with { Layer = layer });
             }
-            catch (SectionTwistException ex) when (options.At is not null || options.Window is not null || options.Part is not null)
+            catch (SectionTwistException ex)
             {
-                // the choice options apply to each layer on its own: say which layer refused, since a remedy such as
-                // another --at point names a part of that layer only
-                throw new SectionTwistException(ex.Code,
-                    $"{ex.Message} (while reading layer '{layer}' of the composite: a part choice applies to each part's layer on its own; {(options.ShaftFileKeys ? "a 'window:'" : "a --window")} around the whole section, or none, suits every layer)");
+                // say which layer refused: each part is read from its own layer, so a remedy naming a layer choice does
+                // not apply, and one such as another --at point names a part of that layer only
+                string choice = options.At is not null || options.Window is not null || options.Part is not null
+                    ? $"a part choice applies to each part's layer on its own; {(options.ShaftFileKeys ? "a 'window:'" : "a --window")} around the whole section, or none, suits every layer"
+                    : $"each part is read from its own layer, so a {(options.ShaftFileKeys ? "'layer:'" : "--layer")} choice does not apply";
+                throw new SectionTwistException(ex.Code, $"{ex.Message} (while reading layer '{layer}' of the composite: {choice})");
             }
             parts.Add(new CompositePart(layer, shape.With(name: $"{Path.GetFileName(source)} layer {layer}"), material));
         }

@@ -120,6 +120,23 @@ public sealed class CompositeCliTests : IDisposable
     }
 
     [Fact]
+    public void An_open_layer_is_named_and_its_snap_remedy_works()
+    {
+        // layer B's outline stops 0.01 mm short of closing; the remedy offered a --layer choice, which --material refuses
+        string path = Path.Combine(_dir, "open.dxf");
+        var d = new DxfText().Header(4).Entities().Rect(0, 0, 40, 3, "A")
+            .Line(0, 3, 40, 3, "B").Line(40, 3, 40, 6, "B").Line(40, 6, 0, 6, "B").Line(0, 6, 0, 3.01, "B").End();
+        File.WriteAllText(path, d.ToString());
+        var (code, _, err) = CliRunner.Run("section", path, "--material", "A=steel-1045-cd,B=brass");
+        Assert.Equal(2, code);
+        Assert.Contains("while reading layer 'B' of the composite", err);
+        Assert.Contains("--layer choice does not apply", err);
+        var snap = System.Text.RegularExpressions.Regex.Match(err, @"--snap ([0-9.eE+-]+)").Groups[1].Value;
+        (code, _, err) = CliRunner.Run("section", path, "--material", "A=steel-1045-cd,B=brass", "--snap", snap, "--accuracy", "1e-3");
+        Assert.True(code == 0, err);
+    }
+
+    [Fact]
     public void A_mistyped_part_or_material_is_named_with_the_nearest()
     {
         var (code, _, err) = CliRunner.Run("section", "sleeved:d=40,t=5", "--material", "core=steel-1045-cd,sleve=brass");
