@@ -291,27 +291,7 @@ public static class SectionPicture
     }
 
     /// <summary>The colour bar: one box per band, ticks at every band boundary (round numbers), title and caption above, clear of the top tick.</summary>
-    private static void DrawColourBar(SKCanvas c, SectionLayout L, int bands, double width, string unit, string caption)
-    {
-        var r = L.ColourBar;
-        Ink.Label(c, $"|τ|, {unit}", r.Left - 6, r.Top - 30, 13, Ink.Text);
-        Ink.Label(c, caption, r.Left - 6, r.Top - 15, 11, Ink.Text);
-        float h = r.Height / bands;
-        for (int k = 0; k < bands; k++)
-        {
-            var band = new SKRect(r.Left, r.Bottom - (k + 1) * h, r.Right, r.Bottom - k * h);
-            using var paint = new SKPaint { Color = BandColour(k, bands), Style = SKPaintStyle.StrokeAndFill, StrokeWidth = 0.5f };
-            c.DrawRect(band, paint);
-        }
-        using (var frame = Ink.Stroke(Ink.Text, 1f)) c.DrawRect(r, frame);
-        int every = bands > 12 ? 2 : 1;
-        using var tick = Ink.Stroke(Ink.Text, 1f);
-        for (int k = 0; k <= bands; k++)
-        {
-            if (k % every != 0 && k != bands) continue; // the top tick is always labelled
-            float y = r.Bottom - k * h;
-            c.DrawLine(r.Right, y, r.Right + 4, y, tick);
-            Ink.Label(c, NiceScale.Format(k * width, width), r.Right + 7, y + 4, 11, Ink.Text);
-        }
-    }
+    private static void DrawColourBar(SKCanvas c, SectionLayout L, int bands, double width, string unit, string caption) =>
+        ColourBar.Draw(c, L.ColourBar, bands, k => BandColour(k, bands), (k, every) => k % every == 0 || k == bands, // the top tick is always labelled
+            k => NiceScale.Format(k * width, width), $"|τ|, {unit}", caption);
 }

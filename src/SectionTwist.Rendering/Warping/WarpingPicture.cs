@@ -169,28 +169,7 @@ public static class WarpingPicture
     }
 
     /// <summary>The colour bar: one box per band, zero in the middle, ticks at the band boundaries; title omega in length^2.</summary>
-    private static void DrawColourBar(SKCanvas c, SectionLayout L, int perSide, double width, string unit)
-    {
-        var r = L.ColourBar;
-        Ink.Label(c, $"ω, {unit}²", r.Left - 6, r.Top - 30, 13, Ink.Text);
-        Ink.Label(c, "warping function", r.Left - 6, r.Top - 15, 11, Ink.Text);
-        int bands = 2 * perSide;
-        float h = r.Height / bands;
-        for (int k = 0; k < bands; k++)
-        {
-            var band = new SKRect(r.Left, r.Bottom - (k + 1) * h, r.Right, r.Bottom - k * h);
-            using var paint = new SKPaint { Color = BandColour(k, perSide), Style = SKPaintStyle.StrokeAndFill, StrokeWidth = 0.5f };
-            c.DrawRect(band, paint);
-        }
-        using (var frame = Ink.Stroke(Ink.Text, 1f)) c.DrawRect(r, frame);
-        int every = bands > 12 ? 2 : 1;
-        using var tick = Ink.Stroke(Ink.Text, 1f);
-        for (int k = 0; k <= bands; k++)
-        {
-            if ((k - perSide) % every != 0) continue; // zero is always labelled
-            float y = r.Bottom - k * h;
-            c.DrawLine(r.Right, y, r.Right + 4, y, tick);
-            Ink.Label(c, NiceScale.Format((k - perSide) * width, width), r.Right + 7, y + 4, 11, Ink.Text);
-        }
-    }
+    private static void DrawColourBar(SKCanvas c, SectionLayout L, int perSide, double width, string unit) =>
+        ColourBar.Draw(c, L.ColourBar, 2 * perSide, k => BandColour(k, perSide), (k, every) => (k - perSide) % every == 0, // zero is always labelled
+            k => NiceScale.Format((k - perSide) * width, width), $"ω, {unit}²", "warping function");
 }

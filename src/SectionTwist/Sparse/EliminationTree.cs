@@ -20,16 +20,27 @@ internal static class EliminationTree
             {
                 int i = ci[p];
                 if (i >= k) break; // rows sorted: upper part only
-                while (i != -1 && i < k)
-                {
-                    int inext = ancestor[i];
-                    ancestor[i] = k;
-                    if (inext == -1) { parent[i] = k; break; }
-                    i = inext;
-                }
+                Climb(parent, ancestor, i, k);
             }
         }
         return parent;
+    }
+
+    /// <summary>
+    /// Liu's climb from row i toward column k with path compression: every node passed gets k as its virtual ancestor,
+    /// and the root reached (one without an ancestor) gets k as its parent (Davis, Direct Methods for Sparse Linear
+    /// Systems, 2006, sec. 4.1).
+    /// </summary>
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveInlining)]
+    private static void Climb(int[] parent, int[] ancestor, int i, int k)
+    {
+        while (i != -1 && i < k)
+        {
+            int inext = ancestor[i];
+            ancestor[i] = k;
+            if (inext == -1) { parent[i] = k; break; }
+            i = inext;
+        }
     }
 
     /// <summary>
@@ -48,14 +59,7 @@ internal static class EliminationTree
             int c = perm[k];
             for (int p = cp[c]; p < cp[c + 1]; p++)
             {
-                int i = pinv[ci[p]];
-                while (i != -1 && i < k)
-                {
-                    int inext = ancestor[i];
-                    ancestor[i] = k;
-                    if (inext == -1) { parent[i] = k; break; }
-                    i = inext;
-                }
+                Climb(parent, ancestor, pinv[ci[p]], k);
             }
         }
         return parent;
