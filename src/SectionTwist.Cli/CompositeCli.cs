@@ -56,6 +56,8 @@ internal static class CompositeCli
             w.WriteLine($"    peak shear at           ({L(m.MaxShearLocation.X)}, {L(m.MaxShearLocation.Y)}) {u.Length.Symbol}");
             if (m.Material.LimitShear is { } lim)
                 w.WriteLine($"    torque to reach its {m.Material.LimitBasis} shear ({u.Stress.Text(lim, 4)}): {u.Torque.Text(lim / m.MaxShearPerTorque, 4)}");
+            else
+                w.WriteLine("    no allowable or shear yield known for this material: check its peak shear against the supplier's strength (a shaft file material may give 'yield' or 'allowableShear')");
         }
         w.WriteLine($"  mesh                      {r.Mesh.Nodes} nodes, {r.Mesh.Elements} quadratic triangles, min angle {NumberText.Fixed(r.Mesh.MinAngleDeg, 1)} deg");
         foreach (var warn in r.Warnings) w.WriteLine($"  warning [{warn.Code}]: {warn.Message}");

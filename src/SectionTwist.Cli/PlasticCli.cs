@@ -19,7 +19,7 @@ internal static class PlasticCli
         }
         if (QuantityText.TrySplit(text, out double v, out string unit) && QuantityText.UnitFactor(unit, QuantityKind.Stress) is { } f && v > 0)
             return (v * f, "given shear yield stress");
-        throw new UsageException($"--plastic: '{text}' is neither a material ({string.Join(", ", ShaftMaterials.All.Keys)}) nor a positive shear yield stress with a unit, e.g. 140MPa");
+        throw new UsageException($"--plastic: '{text}' is neither a material{Suggest.DidYouMean(text, ShaftMaterials.All.Keys)} ({string.Join(", ", ShaftMaterials.All.Keys)}) nor a positive shear yield stress with a unit, e.g. 140MPa");
     }
 
     /// <summary>The plastic tables in <paramref name="units"/> (the section's own system when null).</summary>

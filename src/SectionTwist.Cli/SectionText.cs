@@ -44,7 +44,9 @@ internal static class SectionText
         string L(double m) => u.Length.Format(m, 6);
         string E(double v, DisplayUnit unit) => double.IsNaN(v) ? "n/a" : $"{NumberText.Exponent(unit.FromSi(v), 2)} {unit.Symbol}";
         var e = wr.EstimatedError;
-        w.WriteLine($"  shear centre (x, y)       ({L(wr.ShearCentre.X)}, {L(wr.ShearCentre.Y)}) {u.Length.Symbol}   est. error {E(e.ShearCentre, u.Length)}");
+        // a coordinate within its estimated error of zero (the shear centre on an axis of symmetry) prints as 0
+        string Lz(double v) => L(double.IsFinite(e.ShearCentre) && Math.Abs(v) <= e.ShearCentre ? 0 : v);
+        w.WriteLine($"  shear centre (x, y)       ({Lz(wr.ShearCentre.X)}, {Lz(wr.ShearCentre.Y)}) {u.Length.Symbol}   est. error {E(e.ShearCentre, u.Length)}");
         w.WriteLine($"  warping constant Iw       {u.WarpingConstant.Format(wr.WarpingConstant, 6),14} {u.WarpingConstant.Symbol}   est. error {E(e.WarpingConstant, u.WarpingConstant)} (about the shear centre)");
         w.WriteLine($"  max |sectorial coord.|    {u.Area.Format(wr.MaxSectorialCoordinate, 6),14} {u.Area.Symbol} at ({L(wr.MaxSectorialCoordinateLocation.X)}, {L(wr.MaxSectorialCoordinateLocation.Y)}) {u.Length.Symbol}   est. error {E(e.MaxSectorialCoordinate, u.Area)}");
         string shear = double.IsPositiveInfinity(e.WarpingShearFactor)
@@ -55,7 +57,7 @@ internal static class SectionText
         w.WriteLine($"  warping length a (steel)  {u.Length.Format(wr.SteelWarpingLength, 6),14} {u.Length.Symbol}   a = sqrt(E Iw / (G J)), E/G = 2.6");
         string verdict = wr.Classification == Warping.WarpingClass.WarpingSensitive
             ? "open thin-walled: restrained warping at supports and loads changes twist and adds normal stress; T L / (G J) alone can be far off"
-            : "solid or closed: warping torsion negligible, Saint-Venant torsion applies";
+            : "warping torsion negligible (solid or closed, or open with all walls meeting at one point: angle, tee, cruciform), Saint-Venant torsion applies";
         w.WriteLine($"  warping ratio Iw/(J rp^2) {NumberText.Format(wr.WarpingRatio, 6),14}   {verdict}");
         if (wr.Classification == Warping.WarpingClass.WarpingSensitive)
             w.WriteLine("  caution: lateral-torsional buckling, local buckling and connection design are not checked; follow the local steel design code");

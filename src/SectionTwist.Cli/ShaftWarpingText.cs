@@ -16,7 +16,7 @@ internal static class ShaftWarpingText
             w.WriteLine("restrained warping (non-uniform torsion, Vlasov): these rotations replace the free-warping ones above");
             w.WriteLine($"  station        rotation [{u.Angle.Symbol}]   rate of twist [{u.TwistRate.Symbol}]   reaction torque [{u.Torque.Symbol}]   bimoment reaction [{u.Bimoment.Symbol}]");
             foreach (var s in m.Stations)
-                w.WriteLine($"  {s.Name,-14} {u.Angle.Format(s.Rotation, 5),14}   {u.TwistRate.Format(s.RateOfTwist, 4),21}   {u.Torque.Format(s.ReactionTorque, 4),20}   {u.Bimoment.Format(NumberText.Clean(s.ReactionBimoment, Scale(m)), 4),25}");
+                w.WriteLine($"  {s.Name,-14} {u.Angle.Format(s.Rotation, 5),14}   {u.TwistRate.Format(NumberText.Clean(s.RateOfTwist, RateScale(m)), 4),21}   {u.Torque.Format(s.ReactionTorque, 4),20}   {u.Bimoment.Format(NumberText.Clean(s.ReactionBimoment, Scale(m)), 4),25}");
             w.WriteLine($"  segment        a [{u.Length.Symbol}]   max bimoment [{u.Bimoment.Symbol}]   max warping normal stress [{u.Stress.Symbol}]   warping stress / yield");
             foreach (var s in m.Segments)
             {
@@ -38,6 +38,10 @@ internal static class ShaftWarpingText
     }
 
     private static string Shear(UnitSystem u, WarpingSegmentResult s, double value) => s.ShearUnbounded && value > 0 ? "unbounded" : u.Stress.Format(value, 4);
+
+    /// <summary>The scale of the rates of twist: the largest rotation over the member's length (zero in exact arithmetic below 1e-12 of it).</summary>
+    private static double RateScale(WarpingMemberResult m) =>
+        m.Stations.Count < 2 ? 0 : m.Stations.Max(x => Math.Abs(x.Rotation)) / Math.Max(m.Stations[^1].Position - m.Stations[0].Position, double.Epsilon);
 
     private static double Scale(WarpingMemberResult m) => m.Segments.Count == 0 ? 0 : m.Segments.Max(s => s.MaxBimoment);
 }

@@ -103,6 +103,9 @@ internal sealed partial class BendingAnalysis(ShaftModel model, ShaftResult tors
         {
             var e = s.Model.Material.YoungsModulus
                 ?? throw new SectionTwistException("bending-modulus", $"segment '{s.Result.Label}': material '{s.Model.Material.Name}' has no Young's modulus; give 'E' (e.g. 207 GPa) for the bending solution");
+            if (s.Model.Section is { Bending: null, MaterialShears: { Count: > 0 } } comp)
+                throw new SectionTwistException("bending-section",
+                    $"segment '{s.Result.Label}': section '{comp.Description}' is composite (parts of several materials), which the bending check does not treat yet; leave 'bending' out for this shaft, or check bending by hand with the transformed section of the materials");
             if (s.Model.Section is { Bending: null } sec)
                 throw new SectionTwistException("bending-section",
                     $"segment '{s.Result.Label}': section '{sec.Description}' is known only by J and its shear factor; the bending check needs its shape: use 'round', 'tube', 'template' or 'dxf'");

@@ -1,4 +1,5 @@
 using SectionTwist.Geometry;
+using SectionTwist.Units;
 
 namespace SectionTwist.Composite;
 
@@ -67,6 +68,14 @@ internal sealed class CompositeArrangement
                 if (envelope.Regions[r].Outer.Contains(p)) { region = r; break; }
             return i with { Region = region };
         }).ToList();
+    }
+
+    /// <summary>A point for messages, in the parts' display unit (the drawing's or template's), round-off shown as 0.</summary>
+    private string At(Point2 p)
+    {
+        var unit = _parts[0].Shape.Unit;
+        string C(double v) => LengthUnit.Inv(Math.Abs(v) <= _tol ? 0 : unit.FromMetres(v));
+        return $"({C(p.X)}, {C(p.Y)}) {unit.Symbol}";
     }
 
     private int Canonical(Point2 p)
@@ -151,12 +160,12 @@ internal sealed class CompositeArrangement
                 string names = string.Join(", ", same.Select(x => $"'{_parts[x.p.Part].Name}'").Distinct());
                 if (same.Count > 2)
                     throw new SectionTwistException("composite-overlap",
-                        $"{_name}: the edge near {p.Mid} is drawn by {same.Count} parts ({names}), so parts overlap; each edge inside the section belongs to exactly two parts: remove the doubled outline");
+                        $"{_name}: the edge near {At(p.Mid)} is drawn by {same.Count} parts ({names}), so parts overlap; each edge inside the section belongs to exactly two parts: remove the doubled outline");
                 var q = same[1].p;
                 bool opposite = Point2.Dot(p.Curve.DerivativeAt(0.5), q.Curve.DerivativeAt(0.5)) < 0;
                 if (q.Part == p.Part || !opposite)
                     throw new SectionTwistException("composite-overlap",
-                        $"{_name}: parts {names} lie on the same side of the edge near {p.Mid}, so they overlap; draw each piece of the section in one part only, meeting its neighbours along shared edges");
+                        $"{_name}: parts {names} lie on the same side of the edge near {At(p.Mid)}, so they overlap; draw each piece of the section in one part only, meeting its neighbours along shared edges");
                 result.Add(new CompositeInterface(p.Curve, 0, p.Part, q.Part));
             }
         }
@@ -179,7 +188,7 @@ internal sealed class CompositeArrangement
                 var names = list.Select(i => $"'{_parts[pieces[i].Part].Name}'").Distinct().ToList();
                 string who = names.Count > 1 ? $"parts {string.Join(" and ", names)} touch" : $"part {names[0]} touches itself or another part";
                 throw new SectionTwistException("composite-point-contact",
-                    $"{_name}: {who} only at the point {_vertex[v]}, where nothing can carry shear between them; let them share an edge there or move them apart");
+                    $"{_name}: {who} only at the point {At(_vertex[v])}, where nothing can carry shear between them; let them share an edge there or move them apart");
             }
         var used = new bool[pieces.Count];
         var loops = new List<Loop>();
@@ -196,7 +205,7 @@ internal sealed class CompositeArrangement
                 if (end == pieces[i].A) break;
                 if (!outgoing.TryGetValue(end, out var next) || used[next[0]])
                     throw new SectionTwistException("composite-gap",
-                        $"{_name}: the outline of part '{_parts[pieces[k].Part].Name}' stops at {_vertex[end]}, where the parts leave a gap or overlap; close the gap so that neighbouring parts share their edges exactly");
+                        $"{_name}: the outline of part '{_parts[pieces[k].Part].Name}' stops at {At(_vertex[end])}, where the parts leave a gap or overlap; close the gap so that neighbouring parts share their edges exactly");
                 k = next[0];
             }
             loops.Add(new Loop(segs));
@@ -214,7 +223,33 @@ internal sealed class CompositeArrangement
         foreach (var s in shared) root[Find(s.Left)] = Find(s.Right);
         for (int i = 1; i < n; i++)
             if (Find(i) != Find(0))
+            {
+                var group = Enumerable.Range(0, n).Where(k => Find(k) == Find(0)).ToList();
+                double gap = Gap(i, group);
+                string width = double.IsFinite(gap)
+                    ? $"; their nearest boundaries are {LengthUnit.Inv(_parts[0].Shape.Unit.FromMetres(gap), "G3")} {_parts[0].Shape.Unit.Symbol} apart, and edges are shared only within {LengthUnit.Inv(_parts[0].Shape.Unit.FromMetres(_tol), "G2")} {_parts[0].Shape.Unit.Symbol}"
+                    : "";
                 throw new SectionTwistException("composite-gap",
-                    $"{_name}: part '{_parts[i].Name}' shares no edge with part '{_parts[0].Name}' or the parts bonded to it (a gap, or contact at a point only); draw neighbouring parts so that they share an edge (snap the drawing), or analyse the parts separately");
+                    $"{_name}: part '{_parts[i].Name}' shares no edge with part '{_parts[0].Name}' or the parts bonded to it (a gap, or contact at a point only){width}; draw neighbouring parts so that they share an edge (snap the drawing), or analyse the parts separately");
+            }
+    }
+
+    /// <summary>
+    /// The smallest distance from the corners of part <paramref name="part"/> to the boundary of the parts in
+    /// <paramref name="group"/> and back, m; infinity when the parts have too many pieces to compare on an error path.
+    /// </summary>
+    private double Gap(int part, List<int> group)
+    {
+        static IEnumerable<Segment> Pieces(CompositePart p) => p.Shape.Regions.SelectMany(r => r.Holes.Prepend(r.Outer)).SelectMany(l => l.Segments);
+        var a = Pieces(_parts[part]).ToList();
+        var b = group.SelectMany(k => Pieces(_parts[k])).ToList();
+        if ((double)a.Count * b.Count > 4e6) return double.PositiveInfinity;
+        double best = double.PositiveInfinity;
+        foreach (var (from, to) in new[] { (a, b), (b, a) })
+            foreach (var s in from)
+                foreach (var p in new[] { s.Start, s.PointAt(0.5) })
+                    foreach (var t in to)
+                        best = Math.Min(best, Point2.Distance(p, t.Closest(p).Point));
+        return best;
     }
 }

@@ -14,7 +14,7 @@ public static class CompositeSources
     /// <summary>
     /// The composite section of <paramref name="source"/> with a material for each part. For a composite template every
     /// part needs a material; for a drawing (or any other source) each entry names a layer, read with the other
-    /// <paramref name="options"/> (part choice, window, snap) unchanged.
+    /// <paramref name="options"/> (part choice, window, snap) unchanged. A template that is not composite is refused.
     /// </summary>
     /// <param name="source">A composite template spec or a drawing file.</param>
     /// <param name="materials">Part (layer) name to material, in the order the parts are listed.</param>
@@ -43,13 +43,30 @@ public static class CompositeSources
             }
             return new CompositeSection(parts, source.Trim());
         }
+        if (ProfileTemplates.IsSpec(source))
+            throw new SectionTwistException("not-composite",
+                $"{source.Trim()}: '{source[..source.IndexOf(':', StringComparison.Ordinal)].Trim()}' is not a composite template, so it has no parts to give materials; " +
+                $"use a composite one ({string.Join(", ", ProfileTemplates.All.Where(t => ProfileTemplates.IsComposite(t.Name + ":")).Select(t => t.Name))}) or a drawing whose layers are the parts, or analyse it without materials");
         if (materials.Count == 0)
             throw new SectionTwistException("no-material", $"{source}: a composite section needs a material for each part (drawing layer), e.g. --material SHAFT=steel-1045-cd,SLEEVE=brass");
         if (options.Layer is not null)
             throw new SectionTwistException("bad-option", $"{source}: the materials name the layers to read; leave out the layer filter (--layer) and map each layer to its material");
         foreach (var (layer, material) in materials)
         {
-            var shape = ProfileSources.Load(source, options with { Layer = layer });
+            Profile shape;
+            try
+            {
+                shape = ProfileSources.Load(source, options with { Layer = layer });
+            }
+            catch (SectionTwistException ex)
+            {
+                // say which layer refused: each part is read from its own layer, so a remedy naming a layer choice does
+                // not apply, and one such as another --at point names a part of that layer only
+                string choice = options.At is not null || options.Window is not null || options.Part is not null
+                    ? $"a part choice applies to each part's layer on its own; {(options.ShaftFileKeys ? "a 'window:'" : "a --window")} around the whole section, or none, suits every layer"
+                    : $"each part is read from its own layer, so a {(options.ShaftFileKeys ? "'layer:'" : "--layer")} choice does not apply";
+                throw new SectionTwistException(ex.Code, $"{ex.Message} (while reading layer '{layer}' of the composite: {choice})");
+            }
             parts.Add(new CompositePart(layer, shape.With(name: $"{Path.GetFileName(source)} layer {layer}"), material));
         }
         return new CompositeSection(parts, Path.GetFileName(source));

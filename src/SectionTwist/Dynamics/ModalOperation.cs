@@ -9,7 +9,9 @@ namespace SectionTwist.Dynamics;
 /// consistent-mass solution is a Rayleigh-Ritz one); passes repeat until the subdivision no longer grows. The reported error
 /// of each mode is the element errors weighted by the element's share of the mode's energy,
 /// sum_e (omega h_e / c_e)^2 / 24 (U_e + T_e) / (2 U), which is the uniform-shaft error when the shaft is all there is and
-/// goes to zero for inertia lumped at stations (which the elements represent exactly).
+/// goes to zero for inertia lumped at stations (which the elements represent exactly). When the train has fewer unknowns
+/// than the modes asked for, every segment first gets elements enough for them (the shafts' own inertia has modes beyond
+/// those of the lumped inertias).
 /// </summary>
 internal sealed class ModalOperation
 {
@@ -50,6 +52,18 @@ internal sealed class ModalOperation
             if (_options.ElementsPerSegment is not null || vectors.Length <= mats.RigidBodyModes || ++pass > 8) break;
             double omegaTop = Math.Sqrt(Math.Max(values[vectors.Length - 1], 0)) * 1.02;
             bool grew = false;
+            if (vectors.Length < wanted)
+            {
+                // fewer unknowns than modes asked for: the shafts' own inertia has further modes, so give every segment
+                // the elements they need to appear; the passes below then refine them to the tolerance
+                int more = wanted - vectors.Length;
+                for (int s = 0; s < segs; s++)
+                {
+                    int n = Math.Min(_options.MaxElementsPerSegment, ne[s] + more);
+                    if (n > ne[s]) { ne[s] = n; grew = true; }
+                }
+                if (grew) continue;
+            }
             for (int s = 0; s < segs; s++)
             {
                 var seg = top.Segments[s];

@@ -37,8 +37,13 @@ public static class ProfileSources
         foreach (var s in All)
             if (s.CanLoad(source)) return s.Load(source, options);
         if (File.Exists(source))
+        {
+            string ext = Path.GetExtension(source);
+            string shaft = ext.Equals(".yaml", StringComparison.OrdinalIgnoreCase) || ext.Equals(".yml", StringComparison.OrdinalIgnoreCase)
+                ? $"; a shaft file is read by 'sectiontwist shaft {source}' (or 'modes')" : "";
             throw new SectionTwistException("unknown-source",
-                $"{source}: no profile source reads '{Path.GetExtension(source)}' files; known: {string.Join(", ", All.SelectMany(s => s.Extensions).Distinct())}");
+                $"{source}: no profile source reads '{ext}' files; known: {string.Join(", ", All.SelectMany(s => s.Extensions).Distinct())}{shaft}");
+        }
         throw NotFound(source);
     }
 

@@ -11,7 +11,9 @@ namespace SectionTwist.Plastic;
 /// T_y = tau_y / (peak shear per unit torque) says whether the overload leaves a permanent twist. The shear yield stress
 /// is the material's, else 0.577 times its tensile yield (distortion energy, Budynas and Nisbett, Shigley's Mechanical
 /// Engineering Design, ch. 5). Ideal plasticity: no strain hardening, no residual stresses; limit-state design follows
-/// the applicable code.
+/// the applicable code. A composite section (bonded parts of several materials) gets the lower bound of its T_p from the
+/// static (lower-bound) theorem of limit analysis (Hill, ch. IV): the sand-heap field of its outline at the weakest
+/// material's shear yield is admissible in every part; its T_y is that of the first material to reach its shear yield.
 /// </summary>
 public static class OverloadCheck
 {
@@ -30,10 +32,15 @@ public static class OverloadCheck
         {
             cancellation.ThrowIfCancellationRequested();
             var model = result.Model.Segments.First(m => (m.From == seg.From && m.To == seg.To) || (m.From == seg.To && m.To == seg.From));
-            double? tauY = seg.Material.ShearYield ?? seg.Material.YieldStrength * Material.DistortionEnergyShearRatio;
+            var composite = model.Section?.MaterialShears is { Count: > 0 } ms ? ms : null;
+            double? tauY = composite is null ? YieldShear(seg.Material) : composite.Min(m => YieldShear(m.Material));
+            var noYield = composite?.FirstOrDefault(m => YieldShear(m.Material) is null)?.Material ?? seg.Material;
             if (tauY is null)
                 warnings.Add(new AnalysisWarning("no-yield-strength",
-                    $"segment '{seg.Label}': material '{seg.Material.Name}' has no shear yield or tensile yield, so its overloads are not checked; give 'shearYield' or 'yield' in the material"));
+                    $"segment '{seg.Label}': material '{noYield.Name}' has no shear yield or tensile yield, so its overloads are not checked; give 'shearYield' or 'yield' in the material"));
+            else if (composite is not null)
+                warnings.Add(new AnalysisWarning("composite-plastic-lower-bound",
+                    $"segment '{seg.Label}': section '{seg.Section}' is composite: T_p is a lower bound, the fully plastic torque of its outline with the weakest material's shear yield (tau_y) everywhere; T_y is that of the first material to yield"));
             double? perYield = null, error = null;
             bool unbounded = seg.PeakShearUnbounded;
             if (model.Taper is { } t)
@@ -54,7 +61,9 @@ public static class OverloadCheck
                         $"segment '{seg.Label}': section '{seg.Section}' is given by its torsion values only, so its fully plastic torque is unknown and its overloads are not checked; describe it as a round, tube, template or drawing"));
             }
             double? tp = perYield * tauY;
-            double? ty = tauY is { } ys && !unbounded ? ys / ShearPerTorque(model) : null;
+            double? ty = composite is not null
+                ? (tauY is null || unbounded ? null : composite.Min(m => YieldShear(m.Material)!.Value / m.ShearPerTorque))
+                : tauY is { } ys && !unbounded ? ys / ShearPerTorque(model) : null;
             var checks = new List<OverloadCheckResult>();
             foreach (var c in spec.Cases)
             {
@@ -72,10 +81,14 @@ public static class OverloadCheck
             {
                 Segment = seg.Label, Section = seg.Section, YieldShear = tauY, FirstYieldTorque = ty, FirstYieldUnbounded = unbounded,
                 FullyPlasticTorque = tp, FullyPlasticTorqueError = tp is null ? null : error, Checks = checks,
+                FullyPlasticTorqueIsLowerBound = composite is not null,
             });
         }
         return new OverloadResult { Factor = spec.Factor, Segments = segments, Warnings = warnings };
     }
+
+    /// <summary>The shear yield stress of a material: its own, else 0.577 times its tensile yield; null without either.</summary>
+    private static double? YieldShear(Material m) => m.ShearYield ?? m.YieldStrength * Material.DistortionEnergyShearRatio;
 
     /// <summary>Peak shear per unit torque of a segment: its section's, or that of the smaller end of a taper, 16 / (pi d^3).</summary>
     private static double ShearPerTorque(ShaftSegment model)

@@ -20,8 +20,13 @@ public sealed record SegmentPlasticCapacity
     public required double? FullyPlasticTorque { get; init; }
     /// <summary>Estimated relative error of <see cref="FullyPlasticTorque"/> (0 for the exact round and tube formulas); null when unknown.</summary>
     public required double? FullyPlasticTorqueError { get; init; }
-    /// <summary>Shape factor T_p / T_y; null when either is unknown or T_y is unbounded.</summary>
-    public double? ShapeFactor => FullyPlasticTorque is { } p && FirstYieldTorque is { } y && y > 0 ? p / y : null;
+    /// <summary>
+    /// True when <see cref="FullyPlasticTorque"/> is a lower bound rather than the value: a composite section, taken at its
+    /// weakest material's shear yield everywhere (static theorem of limit analysis).
+    /// </summary>
+    public bool FullyPlasticTorqueIsLowerBound { get; init; }
+    /// <summary>Shape factor T_p / T_y; null when either is unknown, T_y is unbounded or T_p is only a lower bound.</summary>
+    public double? ShapeFactor => !FullyPlasticTorqueIsLowerBound && FullyPlasticTorque is { } p && FirstYieldTorque is { } y && y > 0 ? p / y : null;
     /// <summary>The checks of this segment, one per overload case that applies to it.</summary>
     public required IReadOnlyList<OverloadCheckResult> Checks { get; init; }
 }

@@ -67,7 +67,7 @@ internal static partial class QuantityText
     /// <summary>Example units of each kind, for messages.</summary>
     public static string Examples(QuantityKind kind) => kind switch
     {
-        QuantityKind.Length => "mm, m, in, ft",
+        QuantityKind.Length => "mm, cm, m, in, ft",
         QuantityKind.Torque => "N*m, kN*m, N*mm, lbf*in, lbf*ft (also written Nm, N-m, kNm, lb-in, in-lb, lbf-ft, ft-lb)",
         QuantityKind.Stress or QuantityKind.Modulus => "Pa, MPa, GPa, psi, ksi",
         QuantityKind.Volume => "mm^3, cm^3, in^3",

@@ -72,7 +72,7 @@ public sealed record SectionStiffness(double TorsionConstant, double ShearPerTor
     /// </summary>
     public double? PlasticTorquePerYield { get; init; }
 
-    /// <summary>The analysed outline, when the values come from a section analysis (the overload check finds T_p on it); else null.</summary>
+    /// <summary>The analysed outline, when the values come from a section analysis (the overload check finds T_p on it; for a composite section the outline of all parts); else null.</summary>
     public Geometry.Profile? Profile { get; init; }
 
     /// <summary>

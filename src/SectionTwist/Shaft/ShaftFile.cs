@@ -12,6 +12,10 @@ public static class ShaftFile
     public static ShaftDocument Load(string path, Func<SectionSource, SectionStiffness>? resolver = null)
     {
         ArgumentNullException.ThrowIfNull(path);
+        string ext = Path.GetExtension(path);
+        if (File.Exists(path) && new[] { ".dxf", ".csv", ".pts" }.Contains(ext, StringComparer.OrdinalIgnoreCase))
+            throw new SectionTwistException("not-a-shaft-file",
+                $"{Path.GetFileName(path)}: a drawing or point list ({ext}), not a shaft file; analyse the section with 'sectiontwist section {path}', or name it in a shaft file's 'sections:' (dxf: {Path.GetFileName(path)})");
         string text = Limits.InputFile.ReadAllText(path, Limits.InputLimits.MaxShaftFileBytes, "shaft file");
         string dir = Path.GetDirectoryName(Path.GetFullPath(path)) ?? ".";
         return new ShaftFileReader(Path.GetFileName(path), dir, resolver).Read(path, text);

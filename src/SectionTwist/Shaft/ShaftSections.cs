@@ -63,6 +63,7 @@ public static class ShaftSections
             MaterialShears = r.Materials.Select(m => new MaterialShear(m.Material, m.MaxShearPerTorque)).ToList().AsReadOnly(),
             Warnings = warnings,
             PolarMoment = p0.PolarMoment,
+            Profile = section.Envelope,
         };
     }
 

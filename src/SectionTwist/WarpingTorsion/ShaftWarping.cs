@@ -55,6 +55,17 @@ internal static class ShaftWarping
         };
         var result = WarpingMemberSolver.Solve(member);
         if (r.Bending is { } bending) result = WarpingBending.Combine(result, bending);
+        // an angle, tee or stocky open section: its small Iw comes from warping across the wall thickness, which the
+        // thin-walled (Vlasov) theory leaves out, and its restrained-warping stresses decay within a warping length of
+        // the order of the section's own size, where beam theory does not describe them (Saint-Venant's principle)
+        var negligible = model.Segments.Where(s => s.Section is { WarpingConstant: > 0, WarpingSensitive: false }).Select(s => s.Label).ToArray();
+        if (negligible.Length > 0)
+            result = result with
+            {
+                Warnings = result.Warnings.Prepend(
+                    $"segment{(negligible.Length > 1 ? "s" : "")} {string.Join(", ", negligible)}: the section is warping-negligible (warping ratio below 1: an angle, tee or stocky section, see 'section --warping'); " +
+                    "its restrained-warping stresses are local end effects within about a warping length of the restraint, beyond beam (Vlasov) theory: treat them as indicative, and take its twist as Saint-Venant torsion").ToList().AsReadOnly(),
+            };
         return r with { Warping = result, WarpingWarnings = result.Warnings };
     }
 

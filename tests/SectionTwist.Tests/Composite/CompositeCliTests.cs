@@ -71,6 +71,72 @@ public sealed class CompositeCliTests : IDisposable
     }
 
     [Fact]
+    public void A_plain_template_with_materials_is_refused_instead_of_read_as_one_part_per_material()
+    {
+        // a circle has no parts: each --material entry used to read the whole circle again (one part 'core' for
+        // circle:d=40 --material core=..., two overlapping circles for two entries). Common practice, no source.
+        var (code, _, err) = CliRunner.Run("section", "circle:d=40", "--material", "core=steel-1045-cd");
+        Assert.Equal(2, code);
+        Assert.Contains("'circle' is not a composite template", err);
+        Assert.Contains("sleeved", err);
+        Assert.DoesNotContain("   at ", err);
+    }
+
+    [Fact]
+    public void A_material_without_strengths_says_so_instead_of_leaving_out_its_limit()
+    {
+        var (code, output, err) = CliRunner.Run("section", "sleeved:d=40,t=5", "--material", "core=steel-1045-cd,sleeve=brass", "--accuracy", "1e-3");
+        Assert.True(code == 0, err);
+        Assert.Contains("torque to reach its allowable shear", output);   // the steel core
+        Assert.Contains("no allowable or shear yield known for this material", output);   // library brass gives no strengths
+    }
+
+    [Fact]
+    public void Overlapping_layers_are_refused_at_a_place_in_the_drawing_unit()
+    {
+        string path = Path.Combine(_dir, "overlap.dxf");
+        // two 40 x 3.5 and 40 x 3 mm layers overlapping by 0.5 mm: the place was printed in metres without a unit
+        File.WriteAllText(path, new DxfText().Header(4).Entities().Rect(0, 0, 40, 3.5, "A").Rect(0, 3, 40, 3, "B").End().ToString());
+        var (code, _, err) = CliRunner.Run("section", path, "--material", "A=steel-1045-cd,B=brass");
+        Assert.Equal(2, code);
+        Assert.Contains("overlap", err);
+        Assert.Matches(@"near \(\d+(\.\d+)?, \d+(\.\d+)?\) mm", err);
+        Assert.DoesNotContain("0.00", err);
+    }
+
+    [Fact]
+    public void A_point_choice_that_fails_on_one_layer_names_that_layer()
+    {
+        // --at applies to each layer on its own: a point in layer A lies in no part of layer B, and B's own remedy
+        // (another --at) would then fail for A. Common practice, no source: say which layer refused.
+        string path = Path.Combine(_dir, "at.dxf");
+        File.WriteAllText(path, new DxfText().Header(4).Entities().Rect(0, 0, 40, 3, "A").Rect(0, 3, 40, 3, "B").End().ToString());
+        var (code, _, err) = CliRunner.Run("section", path, "--material", "A=steel-1045-cd,B=brass", "--at", "20,1");
+        Assert.Equal(2, code);
+        Assert.Contains("while reading layer 'B' of the composite", err);
+        Assert.Contains("--window", err);
+        (code, _, err) = CliRunner.Run("section", path, "--material", "A=steel-1045-cd,B=brass", "--window", "-1,-1,41,7", "--accuracy", "1e-3");
+        Assert.True(code == 0, err);
+    }
+
+    [Fact]
+    public void An_open_layer_is_named_and_its_snap_remedy_works()
+    {
+        // layer B's outline stops 0.01 mm short of closing; the remedy offered a --layer choice, which --material refuses
+        string path = Path.Combine(_dir, "open.dxf");
+        var d = new DxfText().Header(4).Entities().Rect(0, 0, 40, 3, "A")
+            .Line(0, 3, 40, 3, "B").Line(40, 3, 40, 6, "B").Line(40, 6, 0, 6, "B").Line(0, 6, 0, 3.01, "B").End();
+        File.WriteAllText(path, d.ToString());
+        var (code, _, err) = CliRunner.Run("section", path, "--material", "A=steel-1045-cd,B=brass");
+        Assert.Equal(2, code);
+        Assert.Contains("while reading layer 'B' of the composite", err);
+        Assert.Contains("--layer choice does not apply", err);
+        var snap = System.Text.RegularExpressions.Regex.Match(err, @"--snap ([0-9.eE+-]+)").Groups[1].Value;
+        (code, _, err) = CliRunner.Run("section", path, "--material", "A=steel-1045-cd,B=brass", "--snap", snap, "--accuracy", "1e-3");
+        Assert.True(code == 0, err);
+    }
+
+    [Fact]
     public void A_mistyped_part_or_material_is_named_with_the_nearest()
     {
         var (code, _, err) = CliRunner.Run("section", "sleeved:d=40,t=5", "--material", "core=steel-1045-cd,sleve=brass");

@@ -52,6 +52,8 @@ public class CompositeContactRefusalTests
         var ex = Refused("composite-gap", ("A", Rect(0, 0, 0.02, 0.01)), ("B", Rect(0, 0.0101, 0.02, 0.02)));
         Assert.Contains("part 'B' shares no edge", ex.Message, StringComparison.Ordinal);
         Assert.Contains("snap the drawing", ex.Message, StringComparison.Ordinal);
+        // the width of the gap, so that a rounding gap of an export (1e-4 mm) is told from a real one
+        Assert.Contains("nearest boundaries are 0.1 mm apart", ex.Message, StringComparison.Ordinal);
     }
 
     [Fact]
@@ -60,6 +62,8 @@ public class CompositeContactRefusalTests
         var ex = Refused("composite-point-contact", ("A", Rect(0, 0, 0.01, 0.01)), ("B", Rect(0.01, 0.01, 0.02, 0.02)));
         Assert.Contains("parts 'A' and 'B' touch only at the point", ex.Message, StringComparison.Ordinal);
         Assert.Contains("share an edge", ex.Message, StringComparison.Ordinal);
+        // the place in the parts' own unit (mm here), not in metres without a unit
+        Assert.Contains("the point (10, 10) mm", ex.Message, StringComparison.Ordinal);
     }
 
     [Fact]

@@ -73,6 +73,20 @@ public sealed class CompositeShaftTests : IDisposable
     }
 
     [Fact]
+    public void A_bending_block_with_a_composite_section_is_refused_as_composite_not_as_a_shapeless_section()
+    {
+        // the message said "known only by J and its shear factor ... use 'template'" for a template section. Common
+        // practice, no source: an advice must be one the user can follow.
+        string path = Path.Combine(_dir, "bent.yaml");
+        File.WriteAllText(path, Yaml + "\nbending:\n  bearings: [{at: A}, {at: B}]\n  loads: [{at: B, force: {y: 0, z: -1 kN}}]\n");
+        var (code, _, err) = CliRunner.Run("shaft", path);
+        Assert.Equal(2, code);
+        Assert.Contains("is composite", err);
+        Assert.DoesNotContain("known only by J", err);
+        Assert.DoesNotContain("   at ", err);
+    }
+
+    [Fact]
     public void A_composite_template_without_materials_is_refused_at_its_line()
     {
         var bad = Yaml.Replace(", materials: {core: steel-1045-cd, sleeve: bush}", "", StringComparison.Ordinal);

@@ -39,6 +39,30 @@ public class ModalClosedFormTests
         Tol.Rel(Math.Sqrt(k * (i1 + i2) / (i1 * i2)), r.ElasticModes.First().AngularFrequency, 1e-9, "Thomson two-rotor system");
     }
 
+    [Fact]
+    public void A_shaft_with_one_end_disc_lists_the_modes_asked_for_and_its_second_mode_meets_the_frequency_equation()
+    {
+        // fixed-free shaft with a disc I_d at the free end: beta tan beta = rho Ip L / I_d, beta = omega L / c (the wave
+        // equation of torsion with an inertia boundary; Rao, Mechanical Vibrations, torsional vibration of shafts, and
+        // Blevins, Formulas for Natural Frequency and Mode Shape; from memory). One station unknown alone gave one mode
+        // although six are asked for by default.
+        var steel = TrainModels.Steel;
+        double l = 0.8, d = 0.03, disc = 0.5, c = Math.Sqrt(steel.ShearModulus / steel.Density!.Value);
+        double ip = Math.PI * Math.Pow(d, 4) / 32, mu = steel.Density.Value * ip * l / disc;
+        var model = new DrivetrainModel { Shafts = [TrainModels.Uniform("s", l, d, steel)], Inertias = TrainModels.Inertias(("B", disc)), FixedStations = ["A"] };
+        var r = ModalAnalysis.Solve(model, new ModalOptions { ModeCount = 3 });
+        var elastic = r.ElasticModes.ToList();
+        Assert.Equal(3, elastic.Count);
+        double Root(double guess)
+        {
+            double b = guess;
+            for (int i = 0; i < 50; i++) b -= (b * Math.Tan(b) - mu) / (Math.Tan(b) + b / (Math.Cos(b) * Math.Cos(b)));
+            return b;
+        }
+        Tol.Rel(Root(Math.Sqrt(mu)) * c / l, elastic[0].AngularFrequency, 1e-3, "beta tan beta = mu, first root");
+        Tol.Rel(Root(Math.PI + mu / Math.PI) * c / l, elastic[1].AngularFrequency, 2e-3, "beta tan beta = mu, second root");
+    }
+
     public static TheoryData<bool> Ends => new() { true, false };
 
     [Theory]

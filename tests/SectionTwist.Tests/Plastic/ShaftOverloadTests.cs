@@ -90,6 +90,41 @@ public class ShaftOverloadTests
         Assert.False(o.AnyOverCapacity);
     }
 
+    [Fact]
+    public void A_composite_section_gets_the_first_yield_of_its_weaker_material_and_a_lower_bound_plastic_torque()
+    {
+        // steel core d = 40 (tau_y 200 MPa) bonded in a bronze sleeve t = 5 (tau_y 100 MPa). Exact, concentric rounds:
+        // first yield where G_i r / (G J)_eff * T reaches tau_y,i; T_p = 2 pi / 3 (200 MPa 20^3 + 100 MPa (25^3 - 20^3))
+        // (each part at its own tau_y); the lower bound used is the whole outline at 100 MPa, 2 pi 25^3 100 MPa / 3
+        // (Hill ch. IV, static theorem; Nadai ch. 35, sand heap of the circle).
+        const string text = """
+            units: {length: mm, torque: N*m}
+            materials:
+              core: {G: 80 GPa, shearYield: 200 MPa}
+              bronze: {G: 40 GPa, shearYield: 100 MPa}
+            stations: [{name: A, at: 0}, {name: B, after: 100}]
+            segments:
+              - {name: bushed, from: A, to: B, section: {template: "sleeved:d=40,t=5", materials: {core: core, sleeve: bronze}}, material: core}
+            loads: [{at: B, torque: 1000}]
+            supports: {fixed: [A]}
+            overload: {cases: [{name: stall, scale: 2}]}
+            """;
+        var o = Solve(text);
+        var s = o.Segments.Single();
+        double gj = 80e9 * Math.PI * Math.Pow(0.040, 4) / 32 + 40e9 * Math.PI * (Math.Pow(0.050, 4) - Math.Pow(0.040, 4)) / 32;
+        double tyCore = 200e6 * gj / (80e9 * 0.020), tySleeve = 100e6 * gj / (40e9 * 0.025);
+        Tol.Rel(Math.Min(tyCore, tySleeve), s.FirstYieldTorque!.Value, 2e-3, "first yield in the material that reaches its own tau_y first");
+        Tol.Rel(100e6, s.YieldShear!.Value, 1e-12, "the weaker material's tau_y");
+        double lower = 2 * Math.PI * Math.Pow(0.025, 3) * 100e6 / 3;
+        double exact = 2 * Math.PI / 3 * (200e6 * Math.Pow(0.020, 3) + 100e6 * (Math.Pow(0.025, 3) - Math.Pow(0.020, 3)));
+        Tol.Rel(lower, s.FullyPlasticTorque!.Value, 5e-3, "lower bound: the outline at the weakest tau_y");
+        Assert.True(s.FullyPlasticTorque < exact, "a lower bound of the exact composite T_p");
+        Assert.True(s.FullyPlasticTorqueIsLowerBound);
+        Assert.Null(s.ShapeFactor);
+        Assert.Contains(o.Warnings, w => w.Code == "composite-plastic-lower-bound" && w.Message.Contains("'bushed'", StringComparison.Ordinal));
+        Assert.DoesNotContain(o.Warnings, w => w.Code == "no-plastic-torque");
+    }
+
     [Theory]
     [InlineData("overload: {cases: [{name: x, scale: 2, torque: 5}]}", "exactly one of 'scale'")]
     [InlineData("overload: {cases: [{name: x, torque: 5, segments: [sold]}]}", "did you mean 'solid'")]

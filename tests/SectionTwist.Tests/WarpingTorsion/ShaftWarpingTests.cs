@@ -62,6 +62,19 @@ public class ShaftWarpingTests
         Assert.Contains(r.WarpingWarnings, w => w.Contains("lateral-torsional buckling", StringComparison.Ordinal));
     }
 
+    // An angle's walls meet at its shear centre: thin-walled theory gives Iw = 0 (Vlasov, Thin-Walled Elastic Beams,
+    // ch. 1, from memory), so its small Iw and the restrained-warping stresses come from warping across the thickness,
+    // decaying within a warping length of the order of the section (Saint-Venant's principle): the numbers are indicative.
+    [Fact]
+    public void A_restrained_angle_is_warned_as_warping_negligible_and_an_i_beam_is_not()
+    {
+        var angle = Solve(Beam.Replace("ibeam:h=200,b=100,tw=5.6,tf=8.5,r=12", "angle:h=60,b=60,t=6,r=6", StringComparison.Ordinal) + "warping: {A: restrained}\n");
+        Assert.NotNull(angle.Warping);
+        Assert.Contains(angle.WarpingWarnings, w => w.Contains("segment A-B: the section is warping-negligible", StringComparison.Ordinal));
+        var beam = Solve(Beam + "warping: {A: restrained}\n");
+        Assert.DoesNotContain(beam.WarpingWarnings, w => w.Contains("warping-negligible", StringComparison.Ordinal));
+    }
+
     // Bending and warping normal stresses add (superposition in linear elasticity; the thin-walled normal stress
     // N/A + M y / I + B omega / Iw, Vlasov ch. 1): the reported sum is at least each part and at most the sum of their
     // maxima.

@@ -14,7 +14,7 @@ internal sealed class DxfRemedy(bool shaftFileKeys)
     public string Snap(double v) => shaftFileKeys ? $"'snap: {Num(v)}'" : $"--snap {Num(v)}";
     public string Layer(string v) => shaftFileKeys ? $"'layer: {v}'" : $"--layer {Quote(v)}";
     public string Materials(IEnumerable<string> layers) => shaftFileKeys
-        ? $"'materials: {{{string.Join(", ", layers.Select(l => l + ": MATERIAL"))}}}'" : $"--material {Quote(string.Join(",", layers.Select(l => l + "=MATERIAL")))}";
+        ? $"'materials: {{{string.Join(", ", layers.Select(l => l + ": MATERIAL"))}}}'" : $"--material {Quote(string.Join(",", layers.Select(l => l + "=MATERIAL")))} on 'section' ('inspect' lists one layer's parts with --layer NAME)";
     public string Part(int n) => shaftFileKeys ? $"'part: {n}'" : $"--part {n}";
     public string At(Point2 p) => shaftFileKeys ? $"'at: [{Num(p.X)}, {Num(p.Y)}]'" : $"--at {Num(p.X)},{Num(p.Y)}";
     public string Window(Box2 b) => shaftFileKeys
