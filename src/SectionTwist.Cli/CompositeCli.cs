@@ -54,7 +54,9 @@ internal static class CompositeCli
             w.WriteLine($"    torque share            {NumberText.Fixed(100 * m.TorqueShare, 2),14} %");
             w.WriteLine($"    peak shear per torque   {u.ShearPerTorque.Format(m.MaxShearPerTorque, 6),14} {u.ShearPerTorque.Symbol}   est. rel. error {NumberText.Exponent(m.EstimatedRelativeError, 2)}");
             w.WriteLine($"    peak shear at           ({L(m.MaxShearLocation.X)}, {L(m.MaxShearLocation.Y)}) {u.Length.Symbol}");
-            if (m.Material.LimitShear is { } lim)
+            if (m.MaxShearUnbounded)
+                w.WriteLine("    the peak does not converge (a sharp corner of the outline or of an interface): the value above is the mesh's, no bound, and no torque to reach the allowable is given; round the corner");
+            else if (m.Material.LimitShear is { } lim)
                 w.WriteLine($"    torque to reach its {m.Material.LimitBasis} shear ({u.Stress.Text(lim, 4)}): {u.Torque.Text(lim / m.MaxShearPerTorque, 4)}");
             else
                 w.WriteLine("    no allowable or shear yield known for this material: check its peak shear against the supplier's strength (a shaft file material may give 'yield' or 'allowableShear')");
@@ -96,6 +98,7 @@ internal static class CompositeCli
                 SectionJson.Num(w, "maxShearPerTorque", m.MaxShearPerTorque);
                 Pt(w, "maxShearLocation", m.MaxShearLocation);
                 SectionJson.Num(w, "estimatedRelativeError", m.EstimatedRelativeError);
+                w.WriteBoolean("maxShearUnbounded", m.MaxShearUnbounded);
                 w.WriteEndObject();
             }
             w.WriteEndArray();

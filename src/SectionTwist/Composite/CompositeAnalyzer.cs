@@ -56,7 +56,7 @@ public static class CompositeAnalyzer
             double err = pf > 0 ? Math.Abs(pf - pc) / pf : 0;
             if (err > PeakTolerance)
                 warnings.Add(new AnalysisWarning("composite-peak-unconverged",
-                    $"{materials[m].Name}: the peak shear changes by {(100 * err).ToString("0.#", CultureInfo.InvariantCulture)} % between the two meshes (a sharp corner of the outline or of an interface may make it singular); treat it as an estimate from below and round the corner"));
+                    $"{materials[m].Name}: the peak shear changes by {(100 * err).ToString("0.#", CultureInfo.InvariantCulture)} % between the two meshes (a sharp corner of the outline or of an interface makes it singular), so it is no bound and no allowable torque is given; round the corner in the drawing"));
             perMaterial.Add(new CompositeMaterialResult
             {
                 Material = materials[m],
@@ -66,6 +66,7 @@ public static class CompositeAnalyzer
                 MaxShearLocation = fine.PeakLocation[m],
                 TorqueShare = fine.Torque[m] / fine.J,
                 EstimatedRelativeError = err,
+                MaxShearUnbounded = err > PeakTolerance,
             });
         }
         if (jErr > Math.Max(10 * acc, 1e-3))

@@ -29,4 +29,12 @@ public sealed record CompositeMaterialResult
 
     /// <summary>Estimated relative error of <see cref="MaxShearPerTorque"/> (difference between the two meshes).</summary>
     public required double EstimatedRelativeError { get; init; }
+
+    /// <summary>
+    /// True when the peak shear does not settle between the two meshes (it changes by more than
+    /// <see cref="CompositeAnalyzer.PeakTolerance"/>): a sharp corner of the outline or of an interface makes the stress
+    /// singular there, and <see cref="MaxShearPerTorque"/> is only the mesh value, no bound. No allowable torque or factor
+    /// of safety is given for such a material.
+    /// </summary>
+    public bool MaxShearUnbounded { get; init; }
 }

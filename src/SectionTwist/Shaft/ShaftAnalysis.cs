@@ -106,10 +106,15 @@ internal sealed class ShaftAnalysis(ShaftModel model)
     }
 
     // No number with a unit in the message: warnings reach the text, report and CSV of every unit system and JSON alike.
-    private static AnalysisWarning Unbounded(SegmentResult s, SectionStiffness section) => new("unbounded-peak-shear",
-        $"segment '{s.Label}' ({s.From}-{s.To}): the peak shear is unbounded at a sharp re-entrant corner of its section " +
-        $"'{section.Description}' (its value on the analysis mesh grows with refinement), so no factor of safety is given; " +
-        "model the real fillet radius (r= on the keyseat and spline templates)");
+    private static AnalysisWarning Unbounded(SegmentResult s, SectionStiffness section) => section.MaterialShears is { Count: > 0 }
+        ? new("unbounded-peak-shear",
+            $"segment '{s.Label}' ({s.From}-{s.To}): the peak shear of composite section '{section.Description}' does not converge at a " +
+            "sharp corner of its outline or of an interface (its value on the analysis mesh changes with refinement), so no factor of " +
+            "safety is given; round the corner in the drawing")
+        : new("unbounded-peak-shear",
+            $"segment '{s.Label}' ({s.From}-{s.To}): the peak shear is unbounded at a sharp re-entrant corner of its section " +
+            $"'{section.Description}' (its value on the analysis mesh grows with refinement), so no factor of safety is given; " +
+            "model the real fillet radius (r= on the keyseat and spline templates)");
 
     /// <summary>A shaft with no support must carry torques that sum to zero, else it would spin up (a loose shaft).</summary>
     private static void CheckBalance(ShaftLayout layout, double[] f)

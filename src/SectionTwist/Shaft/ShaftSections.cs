@@ -61,6 +61,9 @@ public static class ShaftSections
         {
             TorsionalRigidity = r.TorsionalRigidity,
             MaterialShears = r.Materials.Select(m => new MaterialShear(m.Material, m.MaxShearPerTorque)).ToList().AsReadOnly(),
+            // a material whose peak does not converge (a sharp corner): no factor of safety for the segment, as for a
+            // sharp re-entrant corner of a one-material section
+            PeakShearUnbounded = r.Materials.Any(m => m.MaxShearUnbounded),
             Warnings = warnings,
             PolarMoment = p0.PolarMoment,
             Profile = section.Envelope,
