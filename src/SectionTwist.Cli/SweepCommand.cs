@@ -81,6 +81,10 @@ internal sealed class SweepCommand : ICommand
         if (from.Unit.Length > 0 && to.Unit.Length > 0 && !string.Equals(from.Unit, to.Unit, StringComparison.OrdinalIgnoreCase))
             throw new UsageException($"--vary '{vary}': FROM and TO use different units ({from.Unit}, {to.Unit}); use one unit");
         string u = from.Unit.Length > 0 ? from.Unit : to.Unit;
+        // 'circle:d=1in --vary d=1:2:3' means inches: bare sweep values take the unit the spec gives the same key
+        if (u.Length == 0 && par.Kind is ParameterKind.Length or ParameterKind.Angle && spec[key] is { } given
+            && SpecValue.TryParse(given, out var base0) && base0.Unit.Length > 0)
+            u = base0.Unit;
         var steps = new List<Step>();
         var seen = new HashSet<string>(StringComparer.Ordinal);
         for (int i = 0; i < count; i++)

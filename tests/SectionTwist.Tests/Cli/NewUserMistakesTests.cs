@@ -78,4 +78,19 @@ public sealed class NewUserMistakesTests : IDisposable
         Assert.Contains("sectiontwist section", err);
         Assert.DoesNotContain("   at ", err);
     }
+
+    [Fact]
+    public void A_sweep_without_units_takes_the_unit_the_spec_gives_the_key()
+    {
+        // circle:d=1in swept over d=1:2:2 must analyse 1 in and 2 in circles: J = pi d^4 / 32 (exact), 0.0982 and 1.571 in^4
+        var (code, output, err) = CliRunner.Run("sweep", "circle:d=1in", "--vary", "d=1:2:2", "--csv");
+        Assert.True(code == 0, err);
+        var rows = output.Split('\n', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries).Skip(1).ToArray();
+        Assert.Equal(2, rows.Length);
+        double j1 = double.Parse(rows[0].Split(',')[2], System.Globalization.CultureInfo.InvariantCulture);
+        double j2 = double.Parse(rows[1].Split(',')[2], System.Globalization.CultureInfo.InvariantCulture);
+        double inch = 0.0254;
+        Assert.Equal(Math.PI * Math.Pow(1 * inch, 4) / 32, j1, 1e-6 * j1);
+        Assert.Equal(Math.PI * Math.Pow(2 * inch, 4) / 32, j2, 1e-6 * j2);
+    }
 }
