@@ -56,7 +56,7 @@ public static class CompositeSources
             Profile shape;
             try
             {
-                shape = ProfileSources.Load(source, options with { Layer = layer });
+                shape = ProfileSources.Load(source, options with { Layer = layer, PartLayers = materials.Select(m => m.Key).ToArray() });
             }
             catch (SectionTwistException ex)
             {

@@ -44,4 +44,10 @@ public sealed record ProfileSourceOptions
 
     /// <summary>Word remedies as shaft-file keys instead of command-line options.</summary>
     internal bool ShaftFileKeys { get; init; }
+
+    /// <summary>
+    /// The layers that are the other parts of a composite section read layer by layer: a loop on one of them is that
+    /// part, not a forgotten hole, so the reader does not advise adding its layer.
+    /// </summary>
+    internal IReadOnlyCollection<string>? PartLayers { get; init; }
 }

@@ -120,6 +120,19 @@ public sealed class CompositeCliTests : IDisposable
     }
 
     [Fact]
+    public void A_part_inside_another_part_is_not_called_a_forgotten_layer()
+    {
+        // an insert drawn inside a bar that has no hole for it: the parts overlap (refused), and the reader must not
+        // advise adding the insert's layer as a hole, which --material refuses (common practice, no source)
+        string path = Path.Combine(_dir, "nohole.dxf");
+        File.WriteAllText(path, new DxfText().Header(4).Entities().Rect(0, 0, 60, 30, "BAR").Rect(20, 10, 20, 10, "INSERT").End().ToString());
+        var (code, _, err) = CliRunner.Run("section", path, "--material", "BAR=aluminium-6061-t6,INSERT=steel-1045-cd", "--accuracy", "1e-3");
+        Assert.Equal(2, code);
+        Assert.Contains("overlap", err);
+        Assert.DoesNotContain("add its layer", err);
+    }
+
+    [Fact]
     public void An_open_layer_is_named_and_its_snap_remedy_works()
     {
         // layer B's outline stops 0.01 mm short of closing; the remedy offered a --layer choice, which --material refuses

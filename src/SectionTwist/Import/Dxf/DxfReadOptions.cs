@@ -51,4 +51,7 @@ public sealed record DxfReadOptions
 
     /// <summary>Word remedies as shaft-file keys (<c>snap: 2e-4</c>) instead of command-line options (<c>--snap 2e-4</c>).</summary>
     internal bool ShaftFileKeys { get; init; }
+
+    /// <summary>The other part layers of a composite section read layer by layer (see <see cref="ProfileSourceOptions.PartLayers"/>).</summary>
+    internal IReadOnlyCollection<string>? PartLayers { get; init; }
 }

@@ -23,6 +23,7 @@ internal sealed partial class DxfSelection
                 var f = faces[k];
                 if (!r.InMaterial(f, probe) || f.Holes.Append(f.Loop).Any(h => SameBox(r.LoopAt(h).Bounds, loop.Bounds))) continue;
                 string layer = asm.LoopLayers[i][0];
+                if (o.PartLayers?.Contains(layer, StringComparer.OrdinalIgnoreCase) == true) break; // another part of a composite
                 Warnings.Add($"the closed loop {asm.LoopSources[i][0]} on layer '{layer}' lies inside the chosen section but its layer is not chosen; " +
                              $"if it is a hole or part of the outline, add its layer: {_fix.Layer(filter.Spec + "," + layer)}");
                 break;

@@ -36,6 +36,7 @@ internal sealed class DxfSource : IProfileSource
         SnapTolerance = o.SnapTolerance ?? 1e-6,
         SplineTolerance = Math.Clamp(o.Accuracy / 1000, 1e-10, 1e-7),
         ShaftFileKeys = o.ShaftFileKeys,
+        PartLayers = o.PartLayers,
     };
 
     /// <summary>True when the largest gap closed is zero or round-off (a millionth of the default snap tolerance, about 1e-12 of the part).</summary>
