@@ -85,7 +85,8 @@ internal static class BenchParts
         var me = Process.GetCurrentProcess();
         double cpu0 = me.TotalProcessorTime.TotalSeconds;
         var sw = Stopwatch.StartNew();
-        var serial = SectionBatch.Analyze(profiles, null, maxParallelism: 1);
+        // the one-core baseline: one worker, and its factorization kept to one thread too
+        var serial = Sparse.KernelThreads.OneThread(() => SectionBatch.Analyze(profiles, null, maxParallelism: 1));
         double ts = sw.Elapsed.TotalSeconds;
         me.Refresh();
         double cpu1 = me.TotalProcessorTime.TotalSeconds;
@@ -98,7 +99,7 @@ internal static class BenchParts
             if (serial[i].Result?.TorsionConstant != parallel[i].Result?.TorsionConstant)
                 throw new SectionTwistException("bench-failed", $"batch item {i} differs between the serial and the parallel run");
         w.WriteLine(string.Create(inv, $"batch: {count} keyed-shaft variants (keyed:d=20..80) at the default accuracy, same process"));
-        w.WriteLine(string.Create(inv, $"  serial (1 worker)       {ts,7:F2} s wall  {cpu1 - cpu0,7:F2} s CPU"));
+        w.WriteLine(string.Create(inv, $"  serial (1 thread)       {ts,7:F2} s wall  {cpu1 - cpu0,7:F2} s CPU"));
         w.WriteLine(string.Create(inv, $"  parallel ({Environment.ProcessorCount} workers)    {tp,7:F2} s wall  {cpu2 - cpu1,7:F2} s CPU"));
         w.WriteLine(string.Create(inv, $"  speed-up                {ts / tp,7:F2}x wall (results identical); CPU parallel/serial {(cpu2 - cpu1) / (cpu1 - cpu0):F2}"));
         w.WriteLine("  (a speed-up near the worker count needs idle cores: on a loaded machine the wall ratio shows the load, the CPU ratio the overhead)");

@@ -37,7 +37,7 @@ internal sealed class SupernodalFactorizer
         var f = new SupernodalFactorizer(s, a);
         var sn = f._sn;
         int ns = sn.Count;
-        var split = Environment.ProcessorCount >= 2 && s.Flops >= ParallelWork ? SubtreeSplit.Choose(sn) : null;
+        var split = KernelThreads.MayUseMore && s.Flops >= ParallelWork ? SubtreeSplit.Choose(sn) : null;
         var done = new bool[ns];
         if (split is not null)
         {

@@ -38,7 +38,7 @@ internal static class SyrkKernel
         bool overwrite, int ncols)
     {
         double work = ((double)m * ncols - 0.5 * ncols * (double)ncols) * k;
-        if (work < ParallelWork || Environment.ProcessorCount < 2 || ncols < 8)
+        if (work < ParallelWork || !KernelThreads.MayUseMore || ncols < 8)
         {
             LowerProduct(a, aOff, lda, m, k, c, cOff, ldc, overwrite, 0, ncols);
             return;

@@ -1,3 +1,4 @@
+using SectionTwist.Sparse;
 using SectionTwist.Geometry;
 using SectionTwist.Import;
 
@@ -75,7 +76,8 @@ public static class SectionBatch
                 try
                 {
                     (source, var profile, var notes) = load(i);
-                    var result = SectionAnalyzer.Analyze(profile, opts, ct);
+                    // one analysis per core already: the factorization keeps to this worker's thread
+                    var result = workers > 1 ? KernelThreads.OneThread(() => SectionAnalyzer.Analyze(profile, opts, ct)) : SectionAnalyzer.Analyze(profile, opts, ct);
                     if (notes is { Count: > 0 })
                         result = result with { Warnings = notes.Select(n => new AnalysisWarning("drawing", n)).Concat(result.Warnings).ToList().AsReadOnly() };
                     item = new SectionBatchItem(i, source, result, null);
