@@ -43,11 +43,10 @@ internal sealed class ModesCommand : ICommand
             {
                 Progress = (name, p) => progress.Report(p.Fraction, $"section '{name}': {p.Stage}"),
             };
-            doc = ShaftFile.Load(path, ShaftCommand.SectionResolver ?? sections.Resolver);
+            doc = ShaftFile.Read(path, ShaftCommand.SectionResolver ?? sections.Resolver, requireDynamics: true);
         }
         if (units is not null) doc = doc with { Units = units };
-        var dyn = doc.Dynamics ?? throw new SectionTwistException("shaft-file",
-            $"{Path.GetFileName(path)}: the file has no 'dynamics' block; add one with the inertias, e.g. 'dynamics: {{inertias: [{{at: A, inertia: 0.05 kg*m^2}}]}}' (docs/shaft-file.md)");
+        var dyn = doc.Dynamics ?? throw ShaftFileReader.NoDynamics(Path.GetFileName(path));
         ModalResult modes;
         ResonanceResult? resonance;
         ForcedResponseResult? forced;

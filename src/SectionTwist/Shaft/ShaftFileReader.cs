@@ -28,6 +28,13 @@ internal sealed partial class ShaftFileReader
         _resolver = resolver;
     }
 
+    /// <summary>Refuse a file without a 'dynamics' block before any section is analysed (the modes command needs one).</summary>
+    public bool RequireDynamics { get; init; }
+
+    /// <summary>The refusal of a shaft file that has no 'dynamics' block.</summary>
+    internal static SectionTwistException NoDynamics(string fileName) => new("shaft-file",
+        $"{fileName}: the file has no 'dynamics' block; add one with the inertias, e.g. 'dynamics: {{inertias: [{{at: A, inertia: 0.05 kg*m^2}}]}}' (docs/shaft-file.md)");
+
     public ShaftDocument Read(string path, string text)
     {
         YamlGuard.Check(text, _file.FileName);
@@ -54,6 +61,7 @@ internal sealed partial class ShaftFileReader
         if (stream.Documents.Count == 0)
             throw new SectionTwistException("shaft-file", $"{_file.FileName}:1: the file is empty; see docs/shaft-file.md for an example");
         var root = new YamlMap(_file, stream.Documents[0].RootNode, "the shaft file", TopKeys);
+        if (RequireDynamics && root.Get("dynamics") is null) throw NoDynamics(_file.FileName);
 
         var units = ReadUnits(root.Get("units"));
         var materials = ReadMaterials(root.Get("materials"));

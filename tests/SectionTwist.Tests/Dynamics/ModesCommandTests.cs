@@ -62,4 +62,24 @@ public class ModesCommandTests
         Assert.Contains("no 'dynamics' block", err, StringComparison.Ordinal);
         Assert.DoesNotContain("   at ", err, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void A_file_without_dynamics_is_refused_before_its_sections_are_analysed()
+    {
+        // a template section would take a finite-element analysis first (its progress line says 'analysed'): the refusal
+        // must come before it (common practice, no source: fail fast on a missing block)
+        string dir = CliRunner.TempDir();
+        string path = Path.Combine(dir, "keyed.yaml");
+        File.WriteAllText(path, """
+            units: {length: mm, torque: N*m}
+            sections: {k: {template: "keyed:d=40,r=0.4"}}
+            stations: [{name: A, at: 0}, {name: B, at: 100}]
+            segments: [{from: A, to: B, section: k, material: steel-s355}]
+            supports: {fixed: A}
+            """);
+        var (code, _, err) = CliRunner.Run("modes", path);
+        Assert.Equal(2, code);
+        Assert.Contains("no 'dynamics' block", err, StringComparison.Ordinal);
+        Assert.DoesNotContain("analysed", err, StringComparison.Ordinal);
+    }
 }
