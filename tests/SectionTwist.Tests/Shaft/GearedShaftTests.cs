@@ -18,6 +18,19 @@ public class GearedShaftTests
 
         """;
 
+    /// <summary>The main shaft free and balanced, driven through a 15:60 gear stage from a motor shaft fixed at its end.</summary>
+    private const string SupportedMotorByTeeth = """
+        loads: [{at: W, torque: 600}, {at: D, torque: -600}]
+        supports: free
+        dynamics:
+          shafts:
+            - name: motor
+              stations: [{name: R, at: 0}, {name: P, after: 200}]
+              segments: [{from: R, to: P, section: {round: 20}, material: s}]
+              supports: {fixed: [R]}
+          stages: [{name: g1, driving: P, driven: W, teeth: [15, 60]}]
+        """;
+
     private static GearedShaftResult Solve(string yaml)
     {
         var doc = ShaftFile.Parse(yaml);
@@ -27,17 +40,7 @@ public class GearedShaftTests
     [Fact]
     public void A_supported_motor_shaft_receives_the_written_stage_torque_through_the_ratio()
     {
-        var g = Solve(Main + """
-            loads: [{at: W, torque: 600}, {at: D, torque: -600}]
-            supports: free
-            dynamics:
-              shafts:
-                - name: motor
-                  stations: [{name: R, at: 0}, {name: P, after: 200}]
-                  segments: [{from: R, to: P, section: {round: 20}, material: s}]
-                  supports: {fixed: [R]}
-              stages: [{name: g1, driving: P, driven: W, teeth: [15, 60]}]
-            """);
+        var g = Solve(Main + SupportedMotorByTeeth);
         var b = Assert.Single(g.Branches);
         double t = 600.0 * 15 / 60;   // power balance, ratio z2 / z1 = 4
         Tol.Rel(t, b.StageTorque, 1e-12, "T_p = T_w z_p / z_w (lossless stage)");
@@ -166,16 +169,8 @@ public class GearedShaftTests
         try
         {
             string path = Path.Combine(dir, "geared.yaml");
-            File.WriteAllText(path, Main + """
-                loads: [{at: W, torque: 600}, {at: D, torque: -600}]
-                supports: free
-                dynamics:
-                  shafts:
-                    - name: motor
-                      stations: [{name: R, at: 0}, {name: P, after: 200}]
-                      segments: [{from: R, to: P, section: {round: 20}, material: s}]
-                      supports: {fixed: [R]}
-                  stages: [{name: g1, driving: P, driven: W, teeth: [15, 60]}]
+            File.WriteAllText(path, Main + SupportedMotorByTeeth + """
+
                   inertias: [{at: R, inertia: 0.01 kg*m^2}, {at: D, inertia: 0.5 kg*m^2}]
                 """);
             var (code, output, err) = SectionTwist.Tests.Cli.CliRunner.Run("shaft", path);
