@@ -10,6 +10,8 @@ their last printed digit: a relative 1e-3. Exit 0 when the outputs agree, 1 with
 import json, re, sys
 
 NUM = re.compile(r'[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?')
+# the time a report was made ("2026-12-03 02:00 UTC+00:00"): the two builds run a moment apart, so it is not compared
+STAMP = re.compile(r'\d{4}-\d{2}-\d{2} \d{2}:\d{2}(?::\d{2})? UTC[-+]\d{2}:\d{2}')
 
 
 def scales(node, out, key=None):
@@ -67,6 +69,7 @@ def main():
     fa, fb = [p for p in sys.argv[1:] if p != "--loose"]
     a = open(fa, encoding="utf-8").read()
     b = open(fb, encoding="utf-8").read()
+    a, b = STAMP.sub("(time made)", a), STAMP.sub("(time made)", b)
     diffs = []
     try:
         ja, jb = json.loads(a), json.loads(b)
