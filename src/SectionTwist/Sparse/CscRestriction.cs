@@ -17,6 +17,7 @@ internal static class CscRestriction
     {
         int na = a.N;
         if (map.Length != na) throw new ArgumentException("map length differs from the matrix order", nameof(map));
+        if (KeepsOrder(map, n)) return Drop(a, map, n, ct);
         // columns of B gather the columns of A that map to them: count A's nodes per unknown first
         var start = new int[n + 1];
         for (int c = 0; c < na; c++) if (map[c] >= 0) start[map[c] + 1]++;
@@ -60,6 +61,77 @@ internal static class CscRestriction
         colPtr[n] = w;
         Array.Resize(ref rows, w);
         Array.Resize(ref vals, w);
+        return new CscMatrix(n, colPtr, rows, vals);
+    }
+
+    /// <summary>
+    /// True when every unknown of <paramref name="map"/> is one node (nothing merged): the restriction is then a
+    /// principal submatrix, which <see cref="SymbolicCholesky.AnalyzeRestricted"/> analyses without forming it.
+    /// </summary>
+    public static bool OneToOne(int[] map, int n)
+    {
+        var seen = new bool[n];
+        int count = 0;
+        foreach (int u in map)
+        {
+            if (u < 0) continue;
+            if (u >= n || seen[u]) return false;
+            seen[u] = true;
+            count++;
+        }
+        return count == n;
+    }
+
+    /// <summary>
+    /// True when <paramref name="map"/> numbers the nodes it keeps 0, 1, ..., n - 1 in node order (no merged nodes): the
+    /// restriction then only drops rows and columns.
+    /// </summary>
+    private static bool KeepsOrder(int[] map, int n)
+    {
+        int next = 0;
+        foreach (int u in map)
+        {
+            if (u < 0) continue;
+            if (u != next) return false;
+            next++;
+        }
+        return next == n;
+    }
+
+    /// <summary>
+    /// P' A P for a map that keeps the order of the nodes it keeps: each kept column of A is copied without its dropped
+    /// rows and with its rows renumbered, which keeps them sorted; no entries are summed.
+    /// </summary>
+    private static CscMatrix Drop(CscMatrix a, int[] map, int n, CancellationToken ct)
+    {
+        int na = a.N;
+        int[] cp = a.ColPtr, ri = a.RowIdx;
+        double[] av = a.Values;
+        var colPtr = new int[n + 1];
+        int nz = 0;
+        for (int c = 0; c < na; c++)
+        {
+            if (map[c] < 0) continue;
+            for (int p = cp[c]; p < cp[c + 1]; p++) if (map[ri[p]] >= 0) nz++;
+        }
+        var rows = new int[nz];
+        var vals = new double[nz];
+        int w = 0;
+        for (int c = 0; c < na; c++)
+        {
+            int j = map[c];
+            if (j < 0) continue;
+            if ((j & 4095) == 0) ct.ThrowIfCancellationRequested();
+            colPtr[j] = w;
+            for (int p = cp[c]; p < cp[c + 1]; p++)
+            {
+                int r = map[ri[p]];
+                if (r < 0) continue;
+                rows[w] = r;
+                vals[w++] = av[p];
+            }
+        }
+        colPtr[n] = w;
         return new CscMatrix(n, colPtr, rows, vals);
     }
 

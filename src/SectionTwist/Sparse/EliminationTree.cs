@@ -46,10 +46,12 @@ internal static class EliminationTree
     /// <summary>
     /// parent[k] of the elimination tree of P A P' (perm[k] = original index of the k-th pivot, pinv its inverse)
     /// read straight from A, without forming P A P' (Liu's algorithm as in <see cref="Parents"/>; rows need no order).
+    /// For a principal submatrix of A, <paramref name="perm"/> holds the columns of A of its pivots (fewer than A's
+    /// order) and <paramref name="pinv"/> -1 for the rows of A outside it.
     /// </summary>
     public static int[] ParentsPermuted(CscMatrix a, int[] perm, int[] pinv)
     {
-        int n = a.N;
+        int n = perm.Length;
         int[] cp = a.ColPtr, ci = a.RowIdx;
         var parent = new int[n];
         var ancestor = new int[n];

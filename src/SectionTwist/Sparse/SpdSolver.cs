@@ -38,10 +38,12 @@ internal static class SpdSolver
             : SupernodalCholesky.Factorize(symbolic, a, cancellationToken);
 
     /// <summary>
-    /// flops / nnz(L) below which the simplicial factorization is used (a common rule of thumb for choosing, about 40;
-    /// see the solver notes).
+    /// flops / nnz(L) below which the simplicial factorization is used. Measured on the 6-node Laplacians of the
+    /// section meshes (docs/performance.md, the warping solve): the supernodal factorization, its partition included, was
+    /// as fast at 12, 1.2 times as fast at 17 and 1.6 to 2 times as fast at 25 to 30, where the former rule of thumb
+    /// (40) still chose the simplicial one.
     /// </summary>
-    public const double SupernodalFlopsPerNonzero = 40;
+    public const double SupernodalFlopsPerNonzero = 15;
 
     /// <summary>Multigrid-CG first; the sparse Cholesky factorization when it stalls.</summary>
     internal sealed class IterativeWithFallback(CscMatrix a, AmgCgSolver iterative, CancellationToken ct) : ISpdSolver

@@ -68,13 +68,39 @@ internal sealed class MeshLaplacian
     /// <summary>
     /// The restricted system P' K P for the unknown map <paramref name="map"/> (node to unknown, -1 dropped) and a solver
     /// for it: a factorization with the restricted shared order, or the solver <see cref="SpdSolver.Create(CscMatrix, double, CancellationToken)"/>
-    /// picks for large systems (multigrid-CG needs no order).
+    /// picks for large systems (multigrid-CG needs no order). When each unknown is one node the factorization reads
+    /// K itself (<see cref="SymbolicCholesky.AnalyzeRestricted"/>) and the restricted matrix is not formed: Matrix is
+    /// then null (<see cref="RelativeResidual"/> serves instead).
     /// </summary>
-    public (CscMatrix Matrix, ISpdSolver Solver) System(int[] map, int n, double tolerance, CancellationToken ct)
+    public (CscMatrix? Matrix, ISpdSolver Solver) System(int[] map, int n, double tolerance, CancellationToken ct)
     {
+        if (n <= SpdSolver.IterativeThreshold && CscRestriction.OneToOne(map, n))
+        {
+            var s = SymbolicCholesky.AnalyzeRestricted(Matrix, map, n, CscRestriction.RestrictOrder(Order(ct), map, n), ct);
+            return (null, SpdSolver.Factorize(s, Matrix, ct));
+        }
         var a = CscRestriction.Restrict(Matrix, map, n, ct);
         if (n > SpdSolver.IterativeThreshold) return (a, SpdSolver.Create(a, tolerance, ct));
         var symbolic = SymbolicCholesky.AnalyzeOrdered(a, CscRestriction.RestrictOrder(Order(ct), map, n), ct);
         return (a, SpdSolver.Factorize(symbolic, a, ct));
+    }
+
+    /// <summary>
+    /// ||f - P' K P u||_2 / ||f||_2 for the unknowns <paramref name="u"/> of <paramref name="map"/>, from K (the same
+    /// sums, in the same order, as the restricted matrix's <see cref="CscMatrix.RelativeResidual"/> when the map keeps
+    /// the node order and merges nothing).
+    /// </summary>
+    public double RelativeResidual(int[] map, int n, ReadOnlySpan<double> u, ReadOnlySpan<double> f)
+    {
+        int nn = Matrix.N;
+        var x = new double[nn];
+        for (int i = 0; i < nn; i++) x[i] = map[i] < 0 ? 0 : u[map[i]];
+        var y = new double[nn];
+        Matrix.Multiply(x, y);
+        var ax = new double[n];
+        for (int i = 0; i < nn; i++) if (map[i] >= 0) ax[map[i]] += y[i];
+        double r = 0, nb = 0;
+        for (int i = 0; i < n; i++) { double d = f[i] - ax[i]; r += d * d; nb += f[i] * f[i]; }
+        return nb == 0 ? Math.Sqrt(r) : Math.Sqrt(r / nb);
     }
 }

@@ -53,7 +53,7 @@ internal static class TorsionSolver
         // iteration, and the warping solve iterates too (WarpingSolver), so the order is never computed.
         bool twoGrid = parent?.Factor is not null && n >= TwoGridThreshold
             && (!shareLaplacian || nNodes > SymbolicCholesky.NestedDissectionThreshold);
-        CscMatrix k;
+        CscMatrix? k;
         ISpdSolver? solver = null;
         if (shareLaplacian)
         {
@@ -79,7 +79,7 @@ internal static class TorsionSolver
         {
             var pf = parent!.Factor!;
             var p = NestedProlongation.Build(parent.Mesh, pf.Dof, pf.N, mesh, dof, n, ct);
-            var tg = new TwoGridSolver(k, p, pf.Solver, tolerance, ct);
+            var tg = new TwoGridSolver(k!, p, pf.Solver, tolerance, ct);
             var uc = new double[pf.N];
             for (int i = 0; i < parent.Mesh.NodeCount; i++) if (pf.Dof[i] >= 0) uc[pf.Dof[i]] = parent.Phi[i];
             var x0 = new double[n];
@@ -87,14 +87,14 @@ internal static class TorsionSolver
             tg.Initial = x0;
             tg.Solve(f, u);
             LastTwoGrid = tg.LastOutcome;
-            if (!tg.LastOutcome.Converged) SpdSolver.CreateDirect(k, ct).Solve(f, u);
+            if (!tg.LastOutcome.Converged) SpdSolver.CreateDirect(k!, ct).Solve(f, u);
         }
         else
         {
             solver?.Solve(f, u);
             if (keepFactor && solver is not null and not SpdSolver.IterativeWithFallback) kept = solver;
         }
-        double residual = n > 0 ? k.RelativeResidual(u, f) : 0;
+        double residual = n == 0 ? 0 : k is not null ? k.RelativeResidual(u, f) : laplacian!.RelativeResidual(dof, n, u, f);
 
         var phi = new double[nNodes];
         for (int i = 0; i < nNodes; i++) phi[i] = dof[i] < 0 ? 0 : u[dof[i]];

@@ -45,16 +45,20 @@ internal static class WarpingShear
         Span<double> ye = stackalloc double[6];
         Span<double> dx = stackalloc double[6];
         Span<double> dy = stackalloc double[6];
+        Span<double> ce = stackalloc double[6];
+        int[] elements = mesh.Elements;
         for (int e = 0; e < mesh.ElementCount; e++)
         {
             if ((e & 4095) == 0) ct.ThrowIfCancellationRequested();
             TorsionSolver.Gather(mesh, e, xe, ye);
+            var nodes = elements.AsSpan(6 * e, 6);
+            for (int a = 0; a < 6; a++) ce[a] = chi[nodes[a]];
             for (int q = 0; q < 6; q++)
             {
                 P2Triangle.Gradients(AtNodes, q, xe, ye, dx, dy);
                 double sx = 0, sy = 0;
-                for (int a = 0; a < 6; a++) { double c = chi[mesh.Elements[6 * e + a]]; sx += dx[a] * c; sy += dy[a] * c; }
-                int nd = mesh.Elements[6 * e + q];
+                for (int a = 0; a < 6; a++) { sx += dx[a] * ce[a]; sy += dy[a] * ce[a]; }
+                int nd = nodes[q];
                 gx[nd] += sx; gy[nd] += sy; count[nd]++;
             }
         }

@@ -161,32 +161,48 @@ internal static class WarpingSolver
         for (int a = 0; a < 6; a++) { xe[a] -= cx; ye[a] -= cy; }
     }
 
-    /// <summary>Area moments of the mesh domain and moments of the nodal field <paramref name="g"/> (P2 interpolation), about (cx, cy).</summary>
+    /// <summary>
+    /// Area moments of the mesh domain and moments of the nodal field <paramref name="g"/> (P2 interpolation), about
+    /// (cx, cy), and the node integrals; one pass, det J only (no shape-function gradients), each element's node
+    /// integrals summed locally and added once.
+    /// </summary>
     private static void Integrate(Mesh mesh, double cx, double cy, double[] g, ref Moments m, NodeLoads loads)
     {
         Span<double> xe = stackalloc double[6];
         Span<double> ye = stackalloc double[6];
-        Span<double> dx = stackalloc double[6];
-        Span<double> dy = stackalloc double[6];
+        Span<double> ge = stackalloc double[6];
+        Span<double> l1 = stackalloc double[6];
+        Span<double> lx = stackalloc double[6];
+        Span<double> ly = stackalloc double[6];
+        Span<double> lg = stackalloc double[6];
         var rule = P2Triangle.Degree5;
+        int[] elements = mesh.Elements;
+        double[] one = loads.One, nx = loads.X, ny = loads.Y, npsi = loads.Psi;
         for (int e = 0; e < mesh.ElementCount; e++)
         {
             Gather(mesh, e, cx, cy, xe, ye);
+            var nodes = elements.AsSpan(6 * e, 6);
+            for (int a = 0; a < 6; a++) ge[a] = g[nodes[a]];
+            l1.Clear(); lx.Clear(); ly.Clear(); lg.Clear();
             for (int q = 0; q < rule.Count; q++)
             {
-                double w = rule.W[q] * P2Triangle.Gradients(rule, q, xe, ye, dx, dy);
+                double w = rule.W[q] * P2Triangle.Determinant(rule, q, xe, ye);
                 var nq = rule.N.AsSpan(q * 6, 6);
                 double x = 0, y = 0, v = 0;
-                for (int a = 0; a < 6; a++) { x += nq[a] * xe[a]; y += nq[a] * ye[a]; v += nq[a] * g[mesh.Elements[6 * e + a]]; }
+                for (int a = 0; a < 6; a++) { x += nq[a] * xe[a]; y += nq[a] * ye[a]; v += nq[a] * ge[a]; }
                 m.A += w; m.X += w * x; m.Y += w * y;
                 m.Ixx += w * y * y; m.Iyy += w * x * x; m.Ixy += w * x * y;
                 m.Psi += w * v; m.PsiX += w * v * x; m.PsiY += w * v * y; m.Psi2 += w * v * v;
                 for (int a = 0; a < 6; a++)
                 {
-                    int nd = mesh.Elements[6 * e + a];
                     double wn = w * nq[a];
-                    loads.One[nd] += wn; loads.X[nd] += wn * x; loads.Y[nd] += wn * y; loads.Psi[nd] += wn * v;
+                    l1[a] += wn; lx[a] += wn * x; ly[a] += wn * y; lg[a] += wn * v;
                 }
+            }
+            for (int a = 0; a < 6; a++)
+            {
+                int nd = nodes[a];
+                one[nd] += l1[a]; nx[nd] += lx[a]; ny[nd] += ly[a]; npsi[nd] += lg[a];
             }
         }
     }
