@@ -43,23 +43,32 @@ internal static class WarpingShear
         var count = new int[nNodes];
         Span<double> xe = stackalloc double[6];
         Span<double> ye = stackalloc double[6];
-        Span<double> dx = stackalloc double[6];
-        Span<double> dy = stackalloc double[6];
         Span<double> ce = stackalloc double[6];
         int[] elements = mesh.Elements;
+        double[] rDr = AtNodes.Dr, rDs = AtNodes.Ds;
         for (int e = 0; e < mesh.ElementCount; e++)
         {
             if ((e & 4095) == 0) ct.ThrowIfCancellationRequested();
             TorsionSolver.Gather(mesh, e, xe, ye);
             var nodes = elements.AsSpan(6 * e, 6);
             for (int a = 0; a < 6; a++) ce[a] = chi[nodes[a]];
+            // grad chi = J^-T (d chi/dr, d chi/ds); the Jacobian of a straight-sided element is the same at every node
+            bool straight = P2Triangle.IsStraight(xe, ye);
+            double xr = 0, xs = 0, yr = 0, ys = 0, inv = 0;
             for (int q = 0; q < 6; q++)
             {
-                P2Triangle.Gradients(AtNodes, q, xe, ye, dx, dy);
-                double sx = 0, sy = 0;
-                for (int a = 0; a < 6; a++) { sx += dx[a] * ce[a]; sy += dy[a] * ce[a]; }
+                var dr = rDr.AsSpan(6 * q, 6);
+                var ds = rDs.AsSpan(6 * q, 6);
+                if (q == 0 || !straight)
+                {
+                    xr = 0; xs = 0; yr = 0; ys = 0;
+                    for (int a = 0; a < 6; a++) { xr += dr[a] * xe[a]; xs += ds[a] * xe[a]; yr += dr[a] * ye[a]; ys += ds[a] * ye[a]; }
+                    inv = 1 / (xr * ys - xs * yr);
+                }
+                double cr = 0, cs = 0;
+                for (int a = 0; a < 6; a++) { cr += dr[a] * ce[a]; cs += ds[a] * ce[a]; }
                 int nd = nodes[q];
-                gx[nd] += sx; gy[nd] += sy; count[nd]++;
+                gx[nd] += (ys * cr - yr * cs) * inv; gy[nd] += (xr * cs - xs * cr) * inv; count[nd]++;
             }
         }
         double best = 0;

@@ -59,8 +59,6 @@ internal static class WarpingSolver
         Span<double> fe = stackalloc double[6];
         Span<double> xe = stackalloc double[6];
         Span<double> ye = stackalloc double[6];
-        Span<double> dx = stackalloc double[6];
-        Span<double> dy = stackalloc double[6];
         var m = new Moments();
         for (int e = 0; e < nEl; e++)
         {
@@ -70,11 +68,19 @@ internal static class WarpingSolver
             fe.Clear();
             for (int q = 0; q < rule.Count; q++)
             {
-                double w = rule.W[q] * P2Triangle.Gradients(rule, q, xe, ye, dx, dy);
+                // w (y dN/dx - x dN/dy) with w = W det J and the inverse Jacobian written out: det J cancels, so
+                // fe += W ((y y_s + x x_s) dN/dr - (y y_r + x x_r) dN/ds), no division
                 var nq = rule.N.AsSpan(q * 6, 6);
-                double x = 0, y = 0;
-                for (int a = 0; a < 6; a++) { x += nq[a] * xe[a]; y += nq[a] * ye[a]; }
-                for (int a = 0; a < 6; a++) fe[a] += w * (y * dx[a] - x * dy[a]);
+                var dr = rule.Dr.AsSpan(q * 6, 6);
+                var ds = rule.Ds.AsSpan(q * 6, 6);
+                double jxr = 0, jxs = 0, jyr = 0, jys = 0, x = 0, y = 0;
+                for (int a = 0; a < 6; a++)
+                {
+                    jxr += dr[a] * xe[a]; jxs += ds[a] * xe[a]; jyr += dr[a] * ye[a]; jys += ds[a] * ye[a];
+                    x += nq[a] * xe[a]; y += nq[a] * ye[a];
+                }
+                double cr = rule.W[q] * (y * jys + x * jxs), cs = rule.W[q] * (y * jyr + x * jxr);
+                for (int a = 0; a < 6; a++) fe[a] += cr * dr[a] - cs * ds[a];
             }
             for (int a = 0; a < 6; a++)
             {
@@ -163,19 +169,17 @@ internal static class WarpingSolver
 
     /// <summary>
     /// Area moments of the mesh domain and moments of the nodal field <paramref name="g"/> (P2 interpolation), about
-    /// (cx, cy), and the node integrals; one pass, det J only (no shape-function gradients), each element's node
-    /// integrals summed locally and added once.
+    /// (cx, cy), and the node integrals, in one pass. On a straight-sided element x, y and g are P2 fields exactly, so
+    /// every integral is a product with the element mass matrix det J <see cref="ReferenceMass"/> (the degree-5 rule is
+    /// exact for it: the same sums up to rounding); a curved element is integrated point by point.
     /// </summary>
     private static void Integrate(Mesh mesh, double cx, double cy, double[] g, ref Moments m, NodeLoads loads)
     {
         Span<double> xe = stackalloc double[6];
         Span<double> ye = stackalloc double[6];
         Span<double> ge = stackalloc double[6];
-        Span<double> l1 = stackalloc double[6];
-        Span<double> lx = stackalloc double[6];
-        Span<double> ly = stackalloc double[6];
-        Span<double> lg = stackalloc double[6];
         var rule = P2Triangle.Degree5;
+        var mass = ReferenceMass;
         int[] elements = mesh.Elements;
         double[] one = loads.One, nx = loads.X, ny = loads.Y, npsi = loads.Psi;
         for (int e = 0; e < mesh.ElementCount; e++)
@@ -183,7 +187,27 @@ internal static class WarpingSolver
             Gather(mesh, e, cx, cy, xe, ye);
             var nodes = elements.AsSpan(6 * e, 6);
             for (int a = 0; a < 6; a++) ge[a] = g[nodes[a]];
-            l1.Clear(); lx.Clear(); ly.Clear(); lg.Clear();
+            if (P2Triangle.IsStraight(xe, ye))
+            {
+                double det = (xe[1] - xe[0]) * (ye[2] - ye[0]) - (xe[2] - xe[0]) * (ye[1] - ye[0]);
+                double ea = 0, ex = 0, ey = 0, exx = 0, eyy = 0, exy = 0, ev = 0, evx = 0, evy = 0, evv = 0;
+                for (int a = 0; a < 6; a++)
+                {
+                    var row = mass.AsSpan(6 * a, 6);
+                    double s1 = 0, sx = 0, sy = 0, sg = 0;
+                    for (int b = 0; b < 6; b++) { s1 += row[b]; sx += row[b] * xe[b]; sy += row[b] * ye[b]; sg += row[b] * ge[b]; }
+                    s1 *= det; sx *= det; sy *= det; sg *= det;
+                    int nd = nodes[a];
+                    one[nd] += s1; nx[nd] += sx; ny[nd] += sy; npsi[nd] += sg;
+                    ea += s1; ex += sx; ey += sy;
+                    eyy += ye[a] * sy; exx += xe[a] * sx; exy += xe[a] * sy;
+                    ev += sg; evx += xe[a] * sg; evy += ye[a] * sg; evv += ge[a] * sg;
+                }
+                m.A += ea; m.X += ex; m.Y += ey;
+                m.Ixx += eyy; m.Iyy += exx; m.Ixy += exy;
+                m.Psi += ev; m.PsiX += evx; m.PsiY += evy; m.Psi2 += evv;
+                continue;
+            }
             for (int q = 0; q < rule.Count; q++)
             {
                 double w = rule.W[q] * P2Triangle.Determinant(rule, q, xe, ye);
@@ -195,16 +219,28 @@ internal static class WarpingSolver
                 m.Psi += w * v; m.PsiX += w * v * x; m.PsiY += w * v * y; m.Psi2 += w * v * v;
                 for (int a = 0; a < 6; a++)
                 {
+                    int nd = nodes[a];
                     double wn = w * nq[a];
-                    l1[a] += wn; lx[a] += wn * x; ly[a] += wn * y; lg[a] += wn * v;
+                    one[nd] += wn; nx[nd] += wn * x; ny[nd] += wn * y; npsi[nd] += wn * v;
                 }
             }
-            for (int a = 0; a < 6; a++)
-            {
-                int nd = nodes[a];
-                one[nd] += l1[a]; nx[nd] += lx[a]; ny[nd] += ly[a]; npsi[nd] += lg[a];
-            }
         }
+    }
+
+    /// <summary>
+    /// Mass matrix of the reference element, integral(N_a N_b) over the reference triangle by the degree-5 rule (exact:
+    /// the integrand is of degree 4), row-major; an affine element's is det J times it.
+    /// </summary>
+    private static readonly double[] ReferenceMass = BuildReferenceMass();
+
+    private static double[] BuildReferenceMass()
+    {
+        var rule = P2Triangle.Degree5;
+        var mass = new double[36];
+        for (int q = 0; q < rule.Count; q++)
+            for (int a = 0; a < 6; a++)
+                for (int b = 0; b < 6; b++) mass[6 * a + b] += rule.W[q] * rule.N[6 * q + a] * rule.N[6 * q + b];
+        return mass;
     }
 
     /// <summary>Node integrals of N_i, x N_i, y N_i and psi N_i (x, y about the centroid).</summary>
