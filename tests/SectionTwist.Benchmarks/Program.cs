@@ -10,7 +10,8 @@ namespace SectionTwist.Benchmarks;
 /// <c>estimates [accuracies] [reference] [name filter]</c> for the error estimates against the true errors
 /// (<see cref="EstimateSweep"/>), <c>answer [runs]</c> for the time to an accurate answer, former against current
 /// settings (<see cref="AnswerRun"/>), <c>warping [accuracy] [repeats]</c> for the cost of the warping solve
-/// (<see cref="WarpingRun"/>), <c>native [m] [runs] [driver]</c> for our sparse Cholesky against CHOLMOD side by side
+/// (<see cref="WarpingRun"/>), <c>warping-stages [accuracy] [repeats] [specs]</c> for its stages
+/// (<see cref="WarpingStages"/>), <c>native [m] [runs] [driver]</c> for our sparse Cholesky against CHOLMOD side by side
 /// (<see cref="NativeRun"/>).
 /// </summary>
 public static class Program
@@ -30,6 +31,12 @@ public static class Program
         if (args.Length > 0 && args[0] == "warping")
         {
             WarpingRun.Run(args.Length > 1 ? double.Parse(args[1], CultureInfo.InvariantCulture) : 1e-4, args.Length > 2 ? int.Parse(args[2], CultureInfo.InvariantCulture) : 3);
+            return;
+        }
+        if (args.Length > 0 && args[0] == "warping-stages")
+        {
+            WarpingStages.Run(args.Length > 1 ? double.Parse(args[1], CultureInfo.InvariantCulture) : 1e-4,
+                args.Length > 2 ? int.Parse(args[2], CultureInfo.InvariantCulture) : 20, args.Length > 3 ? args[3..] : []);
             return;
         }
         if (args.Length > 0 && args[0] == "quick")

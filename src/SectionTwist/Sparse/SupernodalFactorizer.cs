@@ -14,13 +14,16 @@ namespace SectionTwist.Sparse;
 internal sealed class SupernodalFactorizer
 {
     private readonly Supernodes _sn;
-    private readonly int[] _fp, _fi;
-    private readonly double[] _fx, _lx;
+    private readonly int[] _fp, _fi, _valueMap;
+    private readonly double[] _av, _lx;
     private readonly int[] _head, _next, _pos;
 
     private SupernodalFactorizer(SymbolicCholesky s, CscMatrix a)
     {
-        _sn = s.Supernodes; _fp = s.Fp; _fi = s.Fi; _fx = s.PermutedValues(a);
+        // the entries of P A P' are read from A through the analysis's value map (no permuted copy)
+        if (a.N != s.SourceN || a.NonZeros != s.NonZerosA)
+            throw new ArgumentException("matrix pattern differs from the analysed pattern", nameof(a));
+        _sn = s.Supernodes; _fp = s.Fp; _fi = s.Fi; _valueMap = s.ValueMap; _av = a.Values;
         int ns = _sn.Count;
         _lx = new double[_sn.ValuePtr[ns]];
         _head = new int[ns]; _next = new int[ns]; _pos = new int[ns];
@@ -113,7 +116,8 @@ internal sealed class SupernodalFactorizer
         var sn = _sn;
         int[] rows = sn.Rows, start = sn.Start, fp = _fp, fi = _fi, map = ws.Map, rel = ws.Rel, pos = _pos;
         long[] rowPtr = sn.RowPtr, valPtr = sn.ValuePtr;
-        double[] lx = _lx, fx = _fx, c = ws.C;
+        double[] lx = _lx, av = _av, c = ws.C;
+        int[] vmap = _valueMap;
         int f = start[k], l = start[k + 1], nc = l - f;
         int rp0 = (int)rowPtr[k], nr = (int)(rowPtr[k + 1] - rowPtr[k]);
         long off = valPtr[k];
@@ -125,7 +129,7 @@ internal sealed class SupernodalFactorizer
             {
                 int i = fi[p];
                 if (i < j) break;
-                lx[colOff + map[i]] = fx[p];
+                lx[colOff + map[i]] = av[vmap[p]];
             }
         }
         for (int d = _head[k]; d != -1;)
