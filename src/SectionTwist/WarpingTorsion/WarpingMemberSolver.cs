@@ -209,13 +209,20 @@ public static class WarpingMemberSolver
                 WarpingLength = Math.Sqrt(eiw / gj),
             });
         }
-        var st = stations.Select((s, i) => new WarpingStationResult(s.Name, s.Position, d[2 * i], rate[i], reaction[2 * i], reaction[2 * i + 1])).ToArray();
+        // reaction torques that are zero in exact arithmetic (a free shaft's reference station) are written as 0
+        double torqueScale = 0;
+        for (int i = 0; i < n; i += 2) torqueScale += Math.Abs(f[i]);
+        var st = stations.Select((s, i) => new WarpingStationResult(s.Name, s.Position, d[2 * i], rate[i],
+            Units.NumberText.Clean(reaction[2 * i], torqueScale, 1e-10), reaction[2 * i + 1])).ToArray();
         var springs = member.Springs.Select(sp =>
         {
             double windup = d[2 * Array.FindIndex(stations, x => x.Name == sp.StationB)] - d[2 * Array.FindIndex(stations, x => x.Name == sp.StationA)];
             return new SpringResult(sp.Label, sp.StationA, sp.StationB, sp.Stiffness * windup, windup);
         }).ToArray();
         var warnings = new List<string>();
+        var idle = member.Warping.Where(w => w.Value.Kind != WarpingEndKind.Free && !warps[Array.FindIndex(stations, x => x.Name == w.Key)]).Select(w => w.Key).ToArray();
+        if (idle.Length > 0)
+            warnings.Add($"station{(idle.Length > 1 ? "s" : "")} {string.Join(", ", idle)}: the warping condition changes nothing: no segment of open section ends there (round, closed and tapered segments do not warp); give it where an open segment ends, or leave it out");
         if (!member.Warping.Values.Any(w => w.Kind != WarpingEndKind.Free))
             warnings.Add("warping is free at every station: the twist is T L / (G J) with no warping stresses; if any end or support restrains warping (end plates, continuity), state it, since twist and stresses change");
         foreach (var seg in elements.Where(x => x.Vlasov is not null).Select(x => x.Seg).Where(s => !(s.Section.WarpingShearFactor > 0)))

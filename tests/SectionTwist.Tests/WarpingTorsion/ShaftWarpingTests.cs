@@ -188,6 +188,10 @@ public class ShaftWarpingTests
         Assert.Equal(0, taper.MaxBimoment);
         // the free-warping solve gives the same taper twist (its own exact element)
         Tol.Rel(r.Segments.Single(s => s.Label == "B-C").Twist, m.Stations.Single(s => s.Name == "C").Rotation - m.Stations.Single(s => s.Name == "B").Rotation, 1e-12, "same element");
+        // a restraint where only the taper ends has nothing to act on, and says so
+        var idle = Solve(text.Replace("warping: {A: restrained}", "warping: {A: restrained, C: restrained}", StringComparison.Ordinal));
+        Assert.Contains(idle.WarpingWarnings, w => w.StartsWith("station C: the warping condition changes nothing", StringComparison.Ordinal));
+        Assert.Equal(m.Stations.Single(s => s.Name == "C").Rotation, idle.Warping!.Stations.Single(s => s.Name == "C").Rotation);
     }
 
     // Held at both ends with warping restrained at the far end only. The rate of twist is continuous through the loaded
