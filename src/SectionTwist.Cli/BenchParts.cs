@@ -83,6 +83,7 @@ internal static class BenchParts
         var profiles = Variants(count);
         SectionBatch.Analyze(profiles.Take(2 * Environment.ProcessorCount).ToList(), null); // compile before timing
         var me = Process.GetCurrentProcess();
+        var gc0 = GcFigures.Now();
         double cpu0 = me.TotalProcessorTime.TotalSeconds;
         var sw = Stopwatch.StartNew();
         // the one-core baseline: one worker, and its factorization kept to one thread too
@@ -90,11 +91,13 @@ internal static class BenchParts
         double ts = sw.Elapsed.TotalSeconds;
         me.Refresh();
         double cpu1 = me.TotalProcessorTime.TotalSeconds;
+        var gc1 = GcFigures.Now();
         sw.Restart();
         var parallel = SectionBatch.Analyze(profiles, null);
         double tp = sw.Elapsed.TotalSeconds;
         me.Refresh();
         double cpu2 = me.TotalProcessorTime.TotalSeconds;
+        var gc2 = GcFigures.Now();
         for (int i = 0; i < count; i++)
             if (serial[i].Result?.TorsionConstant != parallel[i].Result?.TorsionConstant)
                 throw new SectionTwistException("bench-failed", $"batch item {i} differs between the serial and the parallel run");
@@ -102,6 +105,18 @@ internal static class BenchParts
         w.WriteLine(string.Create(inv, $"  serial (1 thread)       {ts,7:F2} s wall  {cpu1 - cpu0,7:F2} s CPU"));
         w.WriteLine(string.Create(inv, $"  parallel ({Environment.ProcessorCount} workers)    {tp,7:F2} s wall  {cpu2 - cpu1,7:F2} s CPU"));
         w.WriteLine(string.Create(inv, $"  speed-up                {ts / tp,7:F2}x wall (results identical); CPU parallel/serial {(cpu2 - cpu1) / (cpu1 - cpu0):F2}"));
+        w.WriteLine($"  garbage collection      serial {gc1 - gc0}; parallel {gc2 - gc1}");
         w.WriteLine("  (a speed-up near the worker count needs idle cores: on a loaded machine the wall ratio shows the load, the CPU ratio the overhead)");
+    }
+
+    /// <summary>Collections per generation, bytes allocated and time paused by the collector, to compare two runs.</summary>
+    private readonly record struct GcFigures(int Gen0, int Gen1, int Gen2, long Allocated, TimeSpan Paused)
+    {
+        public static GcFigures Now() => new(GC.CollectionCount(0), GC.CollectionCount(1), GC.CollectionCount(2), GC.GetTotalAllocatedBytes(), GC.GetTotalPauseDuration());
+
+        public static GcFigures operator -(GcFigures a, GcFigures b) => new(a.Gen0 - b.Gen0, a.Gen1 - b.Gen1, a.Gen2 - b.Gen2, a.Allocated - b.Allocated, a.Paused - b.Paused);
+
+        public override string ToString() => string.Create(CultureInfo.InvariantCulture,
+            $"{Allocated / 1048576.0:F0} MB allocated, collections {Gen0}/{Gen1}/{Gen2} (gen 0/1/2), paused {Paused.TotalSeconds:F2} s");
     }
 }

@@ -17,12 +17,14 @@ internal static class ShaftWarpingText
             w.WriteLine($"  station        rotation [{u.Angle.Symbol}]   rate of twist [{u.TwistRate.Symbol}]   reaction torque [{u.Torque.Symbol}]   bimoment reaction [{u.Bimoment.Symbol}]");
             foreach (var s in m.Stations)
                 w.WriteLine($"  {s.Name,-14} {u.Angle.Format(s.Rotation, 5),14}   {u.TwistRate.Format(NumberText.Clean(s.RateOfTwist, RateScale(m)), 4),21}   {u.Torque.Format(s.ReactionTorque, 4),20}   {u.Bimoment.Format(NumberText.Clean(s.ReactionBimoment, Scale(m)), 4),25}");
+            foreach (var sp in m.Springs)
+                w.WriteLine($"  spring {sp.Label} ({sp.StationA} to {sp.StationB}): torque {u.Torque.Format(sp.Torque, 4)} {u.Torque.Symbol}, wind-up {u.Angle.Format(sp.Windup, 5)} {u.Angle.Symbol} (replaces the free-warping value above)");
             w.WriteLine($"  segment        a [{u.Length.Symbol}]   max bimoment [{u.Bimoment.Symbol}]   max warping normal stress [{u.Stress.Symbol}]   warping stress / yield");
             foreach (var s in m.Segments)
             {
                 double? sy = doc.Model.Segments.FirstOrDefault(x => x.Label == s.Label)?.Material.YieldStrength;
                 string ratio = sy is { } y && y > 0 ? NumberText.Fixed(s.MaxWarpingNormalStress / y, 2) + (s.MaxWarpingNormalStress > y ? "  !! OVER YIELD" : "") : "- (no yield given)";
-                w.WriteLine($"  {s.Label,-14} {u.Length.Format(s.WarpingLength, 4),7}   {u.Bimoment.Format(s.MaxBimoment, 4),20}   {u.Stress.Format(s.MaxWarpingNormalStress, 4),30}   {ratio}");
+                w.WriteLine($"  {s.Label,-14} {(s.WarpingLength > 0 ? u.Length.Format(s.WarpingLength, 4) : "-"),7}   {u.Bimoment.Format(s.MaxBimoment, 4),20}   {u.Stress.Format(s.MaxWarpingNormalStress, 4),30}   {ratio}");
             }
             w.WriteLine($"  segment        Saint-Venant shear [{u.Stress.Symbol}]   warping shear [{u.Stress.Symbol}]   combined shear [{u.Stress.Symbol}]   bending + warping normal [{u.Stress.Symbol}]");
             foreach (var s in m.Segments)
@@ -31,7 +33,10 @@ internal static class ShaftWarpingText
                 w.WriteLine($"  {s.Label,-14} {Shear(u, s, s.MaxSaintVenantShear),25}   {Shear(u, s, s.MaxWarpingShear),20}   {Shear(u, s, s.MaxCombinedShear),21}   {combinedNormal,28}");
             }
             w.WriteLine("  combined shear: Saint-Venant plus warping peak (a bound); bending + warping normal: the two magnitudes added at the same");
-            w.WriteLine("  position (a bound, exact where both peak at the flange tips); the shear check above uses the whole torque as Saint-Venant torque");
+            w.WriteLine("  position (a bound, exact where both peak at the flange tips); the shear check above takes the larger of its free-warping peak");
+            w.WriteLine("  (the whole torque as Saint-Venant torque) and this combined shear");
+            foreach (var s in r.Segments.Where(x => x.ShearFromRestrainedWarping))
+                w.WriteLine($"  segment {s.Label}: its shear check above uses this combined shear, {u.Stress.Format(s.MaxShear, 4)} {u.Stress.Symbol}, which exceeds the free-warping peak");
         }
         foreach (var text in r.WarpingWarnings) w.WriteLine($"warning: {text}");
         w.WriteLine();

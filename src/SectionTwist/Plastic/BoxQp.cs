@@ -54,8 +54,14 @@ internal static class BoxQp
         return new BoxQpOutcome(it + 1, sweeps, settled, Kkt(mu, x, lo, hi, b));
     }
 
+    /// <summary>
+    /// The node's set. A node whose bounds coincide (to 1e-12 of their size: the two obstacles of a hollow section meet
+    /// where the wall is thinnest once the hole constant reaches its largest value) is held at its upper bound for good;
+    /// classified by the sign of its multiplier it would flip between the two bounds and make the sets cycle.
+    /// </summary>
     private static sbyte Classify(double mu, double x, double lo, double hi, double c) =>
-        mu + c * (x - hi) > 0 ? (sbyte)1 : mu + c * (x - lo) < 0 ? (sbyte)-1 : (sbyte)0;
+        Pinned(lo, hi) ? (sbyte)1
+        : mu + c * (x - hi) > 0 ? (sbyte)1 : mu + c * (x - lo) < 0 ? (sbyte)-1 : (sbyte)0;
 
     private static double[] Diagonal(CscMatrix k)
     {
@@ -149,6 +155,9 @@ internal static class BoxQp
     }
 
     /// <summary>Largest violation of the optimality conditions, relative to the largest load entry.</summary>
+    /// <summary>True when the bounds coincide to 1e-12 of their size: the node is fixed at them.</summary>
+    private static bool Pinned(double lo, double hi) => hi - lo <= 1e-12 * (Math.Abs(hi) + Math.Abs(lo));
+
     private static double Kkt(double[] mu, double[] x, double[] lo, double[] hi, double[] b)
     {
         double worst = 0, scale = 0;
@@ -156,7 +165,8 @@ internal static class BoxQp
         {
             scale = Math.Max(scale, Math.Abs(b[i]));
             double v;
-            if (x[i] >= hi[i]) v = Math.Max(0, -mu[i]) + (x[i] - hi[i]);
+            if (Pinned(lo[i], hi[i])) v = Math.Abs(x[i] - hi[i]); // any multiplier holds a node between coinciding bounds
+            else if (x[i] >= hi[i]) v = Math.Max(0, -mu[i]) + (x[i] - hi[i]);
             else if (x[i] <= lo[i]) v = Math.Max(0, mu[i]) + (lo[i] - x[i]);
             else v = Math.Abs(mu[i]);
             worst = Math.Max(worst, v);

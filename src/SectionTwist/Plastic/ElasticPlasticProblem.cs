@@ -13,8 +13,12 @@ namespace SectionTwist.Plastic;
 /// variationnelles et applications", Arch. Rational Mech. Anal. 41 (1971) 254-265; Ting, "Elastic-plastic torsion of
 /// a square bar", Trans. AMS 123 (1966) 369-401). With holes the slope bound along straight paths from every loop gives
 /// the two-sided obstacle max(-d_0, c_k - d_k) &lt;= psi &lt;= min(d_0, c_k + d_k) for fixed hole constants c_k; the
-/// reduced energy is convex in c (the constraints are linear in psi and c together), so the constants are found by
-/// Brent's line search (parabolic steps, golden-section fallback) hole by hole. The constraint is imposed at the nodes (the usual discrete obstacle problem).
+/// reduced energy is convex in c (the constraints are linear in psi and c together), and its derivative follows from
+/// the solution by the envelope theorem: dE/dc_k = sum of the residuals r = K psi - lambda f over the hole's nodes and
+/// the nodes held at an obstacle of that hole, minus 2 lambda A_k (the discrete form of the hole's circulation
+/// condition). The constants are the sign changes of these derivatives, found hole by hole by a bracketing root search
+/// (<see cref="MonotoneRoot"/>), which needs a few solves and reaches round-off where a search on the energy alone stalls
+/// at the square root of its precision. The constraint is imposed at the nodes (the usual discrete obstacle problem).
 /// The torque is T = tau_y (f . psi + 2 sum c_k A_k), f the element loads 2 int N.
 /// </summary>
 internal sealed class ElasticPlasticProblem
@@ -32,6 +36,7 @@ internal sealed class ElasticPlasticProblem
     private readonly SectionDistances _dist;
     private readonly BoxQpCache _cache = new();
     private double[] _warm;
+    private double _lastLambda;
 
     public ElasticPlasticProblem(Mesh mesh, double[] loopArea, CancellationToken ct = default)
     {
@@ -97,19 +102,37 @@ internal sealed class ElasticPlasticProblem
     public ElasticPlasticState Solve(double lambda, CancellationToken ct = default)
     {
         int nh = HoleConstants.Length;
+        if (nh == 0) return Evaluate(lambda, HoleConstants, ct);
         var c = (double[])HoleConstants.Clone();
+        // the constants grow with the twist (in proportion while elastic): scale the last ones as the first guess
+        double scale = _lastLambda > 0 ? lambda / _lastLambda : 1;
+        ElasticPlasticState? last = null;
         for (int sweep = 0; sweep < (nh > 1 ? 4 : 1); sweep++)
         {
             for (int k = 0; k < nh; k++)
             {
                 var (lo, hi) = SectionDistances.HoleRange(k, c, _outerGap, _holeGap);
-                c[k] = LineMinimum.Minimize(v => { var t = (double[])c.Clone(); t[k] = v; return Evaluate(lambda, t, ct).Energy; },
-                    lo, hi, 1e-5 * Math.Max(hi, 1e-300));
+                var seen = new List<ElasticPlasticState>();
+                double start = sweep == 0 ? c[k] * scale : c[k];
+                c[k] = MonotoneRoot.Find(v =>
+                {
+                    var t = (double[])c.Clone();
+                    t[k] = v;
+                    var state = Evaluate(lambda, t, ct);
+                    seen.Add(state);
+                    return state.HoleSlopes[k];
+                }, lo, hi, start, HoleTolerance * Math.Max(hi, 1e-300));
+                last = seen.FindLast(x => x.HoleConstants[k] == c[k]);
             }
         }
         HoleConstants = c;
-        return Evaluate(lambda, c, ct);
+        _lastLambda = lambda;
+        // the search ends on a value it has solved for; solve again only when it did not (an end of the interval)
+        return last is not null && last.HoleConstants.AsSpan().SequenceEqual(c) ? last : Evaluate(lambda, c, ct);
     }
+
+    /// <summary>Relative tolerance of the hole constants (of their largest possible value).</summary>
+    internal const double HoleTolerance = 1e-9;
 
     /// <summary>The discrete obstacle problem for fixed hole constants.</summary>
     internal ElasticPlasticState Evaluate(double lambda, double[] c, CancellationToken ct)
@@ -126,11 +149,19 @@ internal sealed class ElasticPlasticProblem
         var b = new double[m];
         var lo = new double[m];
         var hi = new double[m];
+        var upHole = c.Length > 0 ? new int[m] : [];
+        var dnHole = c.Length > 0 ? new int[m] : [];
         for (int i = 0; i < m; i++)
         {
             b[i] = lambda * _f[_free[i]] - kpsi[_free[i]];
             double up = _d0[i], dn = -_d0[i];
-            for (int k = 0; k < c.Length; k++) { up = Math.Min(up, c[k] + _dh[k][i]); dn = Math.Max(dn, c[k] - _dh[k][i]); }
+            int ku = -1, kd = -1;
+            for (int k = 0; k < c.Length; k++)
+            {
+                if (c[k] + _dh[k][i] < up) { up = c[k] + _dh[k][i]; ku = k; }
+                if (c[k] - _dh[k][i] > dn) { dn = c[k] - _dh[k][i]; kd = k; }
+            }
+            if (c.Length > 0) { upHole[i] = ku; dnHole[i] = kd; }
             hi[i] = up; lo[i] = Math.Min(dn, up);
         }
         var x = (double[])_warm.Clone();
@@ -150,7 +181,30 @@ internal sealed class ElasticPlasticProblem
             yielded[_free[i]] = gap[_free[i]] <= tol;
         }
         return new ElasticPlasticState(lambda, load, 0.5 * quad - lambda * load, psi, yielded, (double[])c.Clone(), outcome)
-            { PlasticFraction = PlasticArea(psi, gap, tol) };
+            { PlasticFraction = PlasticArea(psi, gap, tol), HoleSlopes = HoleSlopes(lambda, c, kpsi, x, lo, hi, upHole, dnHole, tol) };
+    }
+
+    /// <summary>
+    /// dE/dc_k by the envelope theorem: the residuals r = K psi - lambda f summed over hole k's nodes (psi = c_k there) and
+    /// over the free nodes held at an obstacle of hole k (psi = c_k +- d_k there; the multiplier of the bound is -r or
+    /// +r), minus 2 lambda A_k.
+    /// </summary>
+    private double[] HoleSlopes(double lambda, double[] c, double[] kpsi, double[] x, double[] lo, double[] hi, int[] upHole, int[] dnHole, double tol)
+    {
+        if (c.Length == 0) return [];
+        var slope = new double[c.Length];
+        for (int i = 0; i < _mesh.NodeCount; i++)
+        {
+            int l = _mesh.NodeLoop[i];
+            if (l >= 0 && _dist.HoleOfLoop[l] is var k && k >= 0) slope[k] += kpsi[i] - lambda * _f[i];
+        }
+        for (int i = 0; i < _free.Length; i++)
+        {
+            int k = hi[i] - x[i] <= tol ? upHole[i] : x[i] - lo[i] <= tol ? dnHole[i] : -1;
+            if (k >= 0) slope[k] += kpsi[_free[i]] - lambda * _f[_free[i]];
+        }
+        for (int k = 0; k < c.Length; k++) slope[k] -= 2 * lambda * _holeArea[k];
+        return slope;
     }
 
     /// <summary>
@@ -197,4 +251,6 @@ internal sealed record ElasticPlasticState(double Lambda, double TorquePerYield,
 {
     /// <summary>Fraction of the area that has yielded.</summary>
     public double PlasticFraction { get; init; }
+    /// <summary>dE/dc_k, the derivative of the reduced energy by each hole constant (zero at the solution).</summary>
+    public double[] HoleSlopes { get; init; } = [];
 }

@@ -47,10 +47,12 @@ internal sealed class PlasticAnalysis(SectionResult elastic, double yieldShear, 
         var ratios = options.TwistRatios.Distinct().Order().ToArray();
         var pc = new ElasticPlasticProblem(coarse, loopArea, ct);
         var pf = refine ? new ElasticPlasticProblem(fine, loopArea, ct) : pc;
-        double holeFloor = pf.HoleConstants.Length > 0 ? 1e-5 : 0; // tolerance of the hole-constant search
+        // tolerance of the hole-constant search, with room for the obstacle solve's own
+        double holeFloor = pf.HoleConstants.Length > 0 ? 100 * ElasticPlasticProblem.HoleTolerance : 0;
         var curve = new List<TorqueTwistPoint>();
         var yielded = new List<IReadOnlyList<bool>>();
-        double worstKkt = 0;
+        double worstKkt = 0, fraction = 0;
+        bool[]? union = null;
         foreach (double r in ratios)
         {
             ct.ThrowIfCancellationRequested();
@@ -59,8 +61,12 @@ internal sealed class PlasticAnalysis(SectionResult elastic, double yieldShear, 
             worstKkt = Math.Max(worstKkt, Math.Max(sc.Outcome.KktResidual, sf.Outcome.KktResidual));
             double t = yieldShear * sf.TorquePerYield;
             double est = refine ? Math.Abs(sf.TorquePerYield - sc.TorquePerYield) / sf.TorquePerYield + holeFloor : double.NaN;
-            curve.Add(new TorqueTwistPoint(r, t, t / ty, sf.PlasticFraction, est));
-            yielded.Add(Array.AsReadOnly(sf.Yielded));
+            // the plastic zone only grows with the twist (docs/theory.md): the classification's noise at the border of an
+            // element does not make it shrink from one level to the next
+            fraction = Math.Max(fraction, sf.PlasticFraction);
+            union = union is null ? (bool[])sf.Yielded.Clone() : union.Zip(sf.Yielded, (a, b) => a || b).ToArray();
+            curve.Add(new TorqueTwistPoint(r, t, t / ty, fraction, est));
+            yielded.Add(Array.AsReadOnly((bool[])union.Clone()));
         }
         if (worstKkt > 1e-8)
             warnings.Add(new AnalysisWarning("obstacle-not-converged",

@@ -19,4 +19,6 @@ internal enum QuantityKind
     Number,
     Force,
     Angle,
+    /// <summary>Warping spring: bimoment per rate of twist (N*m^2 per rad/m = N*m^3).</summary>
+    WarpingStiffness,
 }

@@ -45,6 +45,8 @@ internal static partial class QuantityText
                     if (!rest.EndsWith('³')) return null;
                     return Si(rest[..^1], QuantityKind.Length) is { } l ? 1 / (l * l * l) : null;
                 }
+            case QuantityKind.WarpingStiffness:
+                return WarpingStiffness(u);
             case QuantityKind.TwistRate:
                 {
                     int slash = u.LastIndexOf('/');
@@ -81,12 +83,34 @@ internal static partial class QuantityText
         QuantityKind.Density => "kg/m^3, g/cm^3, lb/in^3",
         QuantityKind.Force => "N, kN, lbf",
         QuantityKind.Angle => "deg, rad",
+        QuantityKind.WarpingStiffness => "N*m^3, kN*m^3, N*mm^3, lbf*in^3 (bimoment per rate of twist; also written N*m^2/(rad/m))",
         _ => "no unit",
     };
 
     private static string Normalize(string unit) => unit.Trim()
         .Replace('*', '·').Replace("^2", "²", StringComparison.Ordinal).Replace("^3", "³", StringComparison.Ordinal)
         .Replace("^4", "⁴", StringComparison.Ordinal).Replace(" ", "", StringComparison.Ordinal);
+
+    /// <summary>
+    /// A warping spring's unit, bimoment per rate of twist: force times length cubed (<c>N·m³</c>, optionally <c>/rad</c>),
+    /// or a bimoment over a twist rate (<c>N·m²/(rad/m)</c>).
+    /// </summary>
+    private static double? WarpingStiffness(string u)
+    {
+        var m = WarpingUnit().Match(u);
+        if (!m.Success) return null;
+        double? force = Si(m.Groups["f"].Value, QuantityKind.Force), len = Si(m.Groups["l"].Value, QuantityKind.Length);
+        if (force is null || len is null) return null;
+        if (m.Groups["per"].Success)
+        {
+            double? angle = AngleRadians(m.Groups["a"].Value), per = Si(m.Groups["per"].Value, QuantityKind.Length);
+            return angle is null || per is null ? null : force * len * len / (angle / per);
+        }
+        return force * len * len * len;
+    }
+
+    [GeneratedRegex(@"^(?<f>[^·/()]+)·(?<l>[^·/()²³]+)(?:³(?:/rad)?|²/\((?<a>[^/()]+)/(?<per>[^/()]+)\))$", RegexOptions.CultureInvariant)]
+    private static partial Regex WarpingUnit();
 
     private static double? AngleRadians(string unit)
     {

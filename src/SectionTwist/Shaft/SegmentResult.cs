@@ -50,6 +50,13 @@ public sealed record SegmentResult
     public bool PeakShearUnbounded { get; init; }
 
     /// <summary>
+    /// True when the shaft was solved with restrained warping and the combined (Saint-Venant plus warping) shear of that
+    /// solve exceeded the free-warping peak: <see cref="MaxShear"/>, <see cref="SafetyFactor"/> and
+    /// <see cref="ExceedsShearLimit"/> then hold the combined value, so the check covers both solves.
+    /// </summary>
+    public bool ShearFromRestrainedWarping { get; init; }
+
+    /// <summary>
     /// A composite segment's check of each material against its own limit shear (the governing one gives
     /// <see cref="ShearLimit"/> and <see cref="SafetyFactor"/>); empty for a homogeneous segment.
     /// </summary>

@@ -49,6 +49,7 @@ internal static class ShaftResultJson
                 ["shearUnbounded"] = s.ShearUnbounded,
                 ["maxCombinedNormalStress"] = s.MaxCombinedNormalStress,
             }),
+            ["springs"] = Arr(w.Springs, x => new JsonObject { ["name"] = x.Label, ["stationA"] = x.StationA, ["stationB"] = x.StationB, ["torque"] = x.Torque, ["windup"] = x.Windup }),
         },
         ["bending"] = r.Bending is null ? null : Bending.BendingJson.ToDto(r.Bending),
         ["branches"] = Arr(geared?.Branches, b => new JsonObject
@@ -105,6 +106,7 @@ internal static class ShaftResultJson
         // a sharp re-entrant corner: the mesh value is no bound on the stress, so no number is given
         ["maxShear"] = s.PeakShearUnbounded ? (double?)null : s.MaxShear,
         ["peakShearUnbounded"] = s.PeakShearUnbounded,
+        ["shearFromRestrainedWarping"] = s.ShearFromRestrainedWarping,
         ["shearLimit"] = s.ShearLimit,
         ["shearLimitBasis"] = s.Material.LimitBasis,
         ["safetyFactor"] = Num(s.SafetyFactor),

@@ -26,6 +26,7 @@ internal static class ShaftValueRange
         QuantityKind.TwistRate => (1e6, 1e-12),
         QuantityKind.Force => (1e10, 0),
         QuantityKind.Angle => (1e3, 0),
+        QuantityKind.WarpingStiffness => (1e18, 0),
         _ => (1e6, 0),
     };
 

@@ -24,34 +24,29 @@ internal static class ShaftWarping
         if (!model.Warping.Values.Any(w => w.Kind != WarpingEndKind.Free)) return r;
         if (model.Segments.Any(s => s.Section is { WarpingConstant: > 0 }) is false)
             return r with { WarpingWarnings = new[] { "warping restraints are given but no segment has a warping constant (no open section); they change nothing" } };
-        if (model.Springs.Count > 0)
-        {
-            var sp = model.Springs[0];
-            throw new SectionTwistException("warping", $"spring {sp.Label} (stations {sp.StationA} and {sp.StationB}){(model.Springs.Count > 1 ? $" and {model.Springs.Count - 1} more" : "")}: " +
-                "restrained warping cannot be combined with torsional springs (couplings); model the member on each side of the coupling as its own shaft file, or state 'warping: free'");
-        }
         var segs = model.Segments.Select(s =>
         {
-            var sec = s.Section ?? throw new SectionTwistException("warping", $"segment {s.Label} (stations {s.From} to {s.To}): a tapered segment cannot be combined with restrained warping; split it into prismatic segments of stepped sections, or state 'warping: free'");
-            double g = s.Material.ShearModulus, len = Length(model, s);
-            var mat = sec.WarpingConstant is > 0 ? s.Material : s.Material with { YoungsModulus = s.Material.YoungsModulus ?? 2.6 * g };
-            // A section without warping gets a warping length of 1e-4 of the segment: Saint-Venant torsion to round-off.
-            double iw = sec.WarpingConstant is > 0 ? sec.WarpingConstant.Value : Math.Pow(1e-4 * len, 2) * g * sec.TorsionConstant / mat.YoungsModulus!.Value;
-            var section = new WarpingSection(sec.TorsionConstant, iw, sec.MaxSectorialCoordinate ?? 0, sec.ShearPerTorque, sec.Description)
+            if (s.Taper is { } taper) return WarpingSegment.Tapered(s.From, s.To, taper, s.Material) with { Name = s.Name };
+            var sec = s.Section!;
+            // a section without a warping constant (round, closed or solid: warping negligible) gets Iw = 0, which the
+            // member solver takes as Saint-Venant torsion on the rotations only
+            var section = new WarpingSection(sec.TorsionConstant, sec.WarpingConstant is > 0 ? sec.WarpingConstant.Value : 0, sec.MaxSectorialCoordinate ?? 0, sec.ShearPerTorque, sec.Description)
             {
-                // a section without warping (round, closed) has no warping shear to speak of: its factor stays 0 silently
-                WarpingShearFactor = sec.WarpingShearFactor ?? (sec.WarpingConstant is > 0 ? 0 : double.Epsilon),
+                WarpingShearFactor = sec.WarpingShearFactor ?? 0,
                 ShearUnbounded = sec.PeakShearUnbounded,
             };
-            return new WarpingSegment(s.From, s.To, section, mat) { Name = s.Name };
+            return new WarpingSegment(s.From, s.To, section, s.Material) { Name = s.Name };
         }).ToArray();
         var member = new WarpingMember
         {
             Stations = model.Stations,
             Segments = segs,
             Loads = model.Loads,
-            FixedStations = model.FixedStations,
+            // a free shaft (no support, torques in balance) is held at its reference station, as the shaft solver holds it
+            FixedStations = model.FixedStations.Count > 0 ? model.FixedStations
+                : [model.ReferenceStation ?? model.Stations.OrderBy(x => x.Position).First().Name],
             Warping = model.Warping,
+            Springs = model.Springs,
         };
         var result = WarpingMemberSolver.Solve(member);
         if (r.Bending is { } bending) result = WarpingBending.Combine(result, bending);
@@ -66,12 +61,35 @@ internal static class ShaftWarping
                     $"segment{(negligible.Length > 1 ? "s" : "")} {string.Join(", ", negligible)}: the section is warping-negligible (warping ratio below 1: an angle, tee or stocky section, see 'section --warping'); " +
                     "its restrained-warping stresses are local end effects within about a warping length of the restraint, beyond beam (Vlasov) theory: treat them as indicative, and take its twist as Saint-Venant torsion").ToList().AsReadOnly(),
             };
-        return r with { Warping = result, WarpingWarnings = result.Warnings };
+        return Recheck(r with { Warping = result, WarpingWarnings = result.Warnings });
     }
 
-    private static double Length(ShaftModel m, ShaftSegment s)
+    /// <summary>
+    /// The shear check covers both solves: where the combined shear of the restrained-warping solve exceeds the free-warping
+    /// peak (an indeterminate member can share its torque differently once warping stiffens a part), the segment's peak,
+    /// factor of safety and limit flag take the combined value, and the governing segment is chosen again.
+    /// </summary>
+    private static ShaftResult Recheck(ShaftResult r)
     {
-        double a = m.Stations.First(x => x.Name == s.From).Position, b = m.Stations.First(x => x.Name == s.To).Position;
-        return Math.Abs(b - a);
+        var byLabel = r.Warping!.Segments.ToDictionary(s => s.Label, StringComparer.Ordinal);
+        bool changed = false;
+        var segments = r.Segments.Select(s =>
+        {
+            if (s.PeakShearUnbounded || s.MaterialChecks.Count > 0 || !byLabel.TryGetValue(s.Label, out var w) || w.ShearUnbounded
+                || !(w.MaxCombinedShear > s.MaxShear * (1 + 1e-9))) return s;
+            changed = true;
+            double tau = w.MaxCombinedShear;
+            return s with
+            {
+                MaxShear = tau,
+                SafetyFactor = s.ShearLimit is { } lim ? lim / tau : null,
+                ExceedsShearLimit = s.ShearLimit is { } l && tau > l,
+                ShearFromRestrainedWarping = true,
+            };
+        }).ToArray();
+        if (!changed) return r;
+        var governing = segments.FirstOrDefault(s => s.PeakShearUnbounded)
+            ?? segments.Where(s => s.ShearLimit is not null && s.MaxShear > 0).OrderByDescending(s => s.MaxShear / s.ShearLimit!.Value).FirstOrDefault();
+        return r with { Segments = Array.AsReadOnly(segments), GoverningSegment = governing };
     }
 }

@@ -22,6 +22,11 @@ public sealed record WarpingMember
     public required IReadOnlyList<string> FixedStations { get; init; }
     /// <summary>Warping condition per station name; stations not listed warp freely.</summary>
     public IReadOnlyDictionary<string, WarpingEnd> Warping { get; init; } = new Dictionary<string, WarpingEnd>();
+    /// <summary>
+    /// Torsional springs between stations (flexible couplings). A spring carries torque only, no bimoment: the stations
+    /// on its two sides have their own rates of twist, so a coupling also separates the warping of the parts it joins.
+    /// </summary>
+    public IReadOnlyList<TorsionalSpring> Springs { get; init; } = [];
 }
 
 /// <summary>A prismatic piece of the member between two stations.</summary>
@@ -35,11 +40,31 @@ public sealed record WarpingSegment(string From, string To, WarpingSection Secti
     public string? Name { get; init; }
     /// <summary>The display name.</summary>
     public string Label => Name ?? $"{From}-{To}";
+
+    /// <summary>
+    /// Set for a linearly tapered solid round segment (<see cref="Tapered"/>): a round section does not warp, so the
+    /// segment carries its torque as Saint-Venant torque with J varying along it (the exact element of the shaft solver),
+    /// and transmits no bimoment. Its <see cref="Section"/> then holds the flexibility-equivalent J and the peak shear per
+    /// unit torque of the thinner end, for tables.
+    /// </summary>
+    public RoundTaper? Taper { get; init; }
+
+    /// <summary>A linearly tapered solid round segment; diameters at <paramref name="from"/> and <paramref name="to"/> as in <see cref="RoundTaper"/>.</summary>
+    public static WarpingSegment Tapered(string from, string to, RoundTaper taper, Material material)
+    {
+        ArgumentNullException.ThrowIfNull(taper);
+        taper.Validate($"segment {from}-{to}");
+        double d0 = taper.StartDiameter, d1 = taper.EndDiameter, dMin = Math.Min(d0, d1);
+        // 1 / J_eq = (1/L) integral dx / J(x) for d linear in x (see SegmentElement): J_eq = 3 pi d0^3 d1^3 / (32 (d0^2 + d0 d1 + d1^2))
+        double jEq = 3 * Math.PI * d0 * d0 * d0 * d1 * d1 * d1 / (32 * (d0 * d0 + d0 * d1 + d1 * d1));
+        var section = new WarpingSection(jEq, 0, 0, 16 / (Math.PI * dMin * dMin * dMin), $"taper d={d0 * 1e3:G5}..{d1 * 1e3:G5} mm");
+        return new WarpingSegment(from, to, section, material) { Taper = taper };
+    }
 }
 
 /// <summary>Torsion and warping values of a section.</summary>
 /// <param name="TorsionConstant">Saint-Venant torsion constant J, m^4.</param>
-/// <param name="WarpingConstant">Warping constant Iw about the shear centre, m^6 (positive).</param>
+/// <param name="WarpingConstant">Warping constant Iw about the shear centre, m^6 (positive; 0 only for a <see cref="WarpingSegment.Taper"/>).</param>
 /// <param name="MaxSectorialCoordinate">Largest |omega| of the normalized warping function, m^2.</param>
 /// <param name="ShearPerTorque">Peak Saint-Venant shear per unit Saint-Venant torque, 1/m^3.</param>
 /// <param name="Description">Optional text for tables.</param>

@@ -7,6 +7,8 @@ public sealed record WarpingMemberResult
     public required IReadOnlyList<WarpingStationResult> Stations { get; init; }
     /// <summary>Segments in axis order.</summary>
     public required IReadOnlyList<WarpingSegmentResult> Segments { get; init; }
+    /// <summary>Torsional springs (couplings): torque k (phi_B - phi_A) and wind-up, as in the shaft result.</summary>
+    public IReadOnlyList<Shaft.SpringResult> Springs { get; init; } = [];
     /// <summary>Warnings about the result.</summary>
     public required IReadOnlyList<string> Warnings { get; init; }
 }
@@ -53,7 +55,7 @@ public sealed record WarpingSegmentResult
     public double? MaxCombinedNormalStress { get; init; }
     /// <summary>Largest |rotation|, rad.</summary>
     public required double MaxRotation { get; init; }
-    /// <summary>The warping length a = sqrt(E Iw / (G J)) of the segment, m.</summary>
+    /// <summary>The warping length a = sqrt(E Iw / (G J)) of the segment, m (0 for a round taper, which does not warp).</summary>
     public required double WarpingLength { get; init; }
 }
 

@@ -5,7 +5,9 @@ namespace SectionTwist.WarpingTorsion;
 /// <summary>
 /// Solves a <see cref="WarpingMember"/> by the stiffness method with exact Vlasov elements (<see cref="VlasovElement"/>),
 /// two freedoms per station (rotation phi and rate of twist phi'). Rotation supports and warping restraints remove
-/// freedoms; warping springs add to the phi' diagonal; reactions are recovered from the full system.
+/// freedoms; warping springs add to the phi' diagonal; torsional springs (couplings) join two stations' rotations only;
+/// round tapers, which do not warp, enter as the shaft solver's exact Saint-Venant element on the rotations; reactions
+/// are recovered from the full system.
 /// </summary>
 public static class WarpingMemberSolver
 {
@@ -25,17 +27,29 @@ public static class WarpingMemberSolver
         int n = 2 * stations.Length;
         var k = new double[n * n];
         var f = new double[n];
-        var elements = new List<(WarpingSegment Seg, int A, int B, VlasovElement El)>();
+        var elements = new List<MemberElement>();
+        var warps = new bool[stations.Length]; // the station's phi' is a freedom: a segment that warps ends there
         foreach (var seg in member.Segments)
         {
             int a = Station(seg.From, $"segment {seg.Label}"), b = Station(seg.To, $"segment {seg.Label}");
-            if (a > b) (a, b) = (b, a);
+            bool flip = a > b;
+            if (flip) (a, b) = (b, a);
             double len = stations[b].Position - stations[a].Position;
             if (!(len > 0)) throw new SectionTwistException("bad-member", $"segment {seg.Label}: its stations are at the same position; give it a positive length");
-            var (gj, eiw) = Rigidities(seg);
             double m = member.Loads.OfType<DistributedTorque>()
                 .Where(d => (Station(d.From, "a distributed torque"), Station(d.To, "a distributed torque")) is var (p, q) && Math.Min(p, q) == a && Math.Max(p, q) == b)
                 .Sum(d => d.TorquePerLength);
+            if (seg.Taper is not null || seg.Section.WarpingConstant == 0)
+            {
+                // a section that does not warp (a round taper, Iw = 0): Saint-Venant torsion on the rotations only, with the
+                // shaft solver's exact element; it carries no bimoment
+                var sv = SaintVenantElement(seg, a, b, len, flip, m);
+                AddSpring(k, n, 2 * a, 2 * b, sv.Stiffness);
+                f[2 * a] += sv.LoadA; f[2 * b] += sv.LoadB;
+                elements.Add(new MemberElement(seg, a, b, null, sv));
+                continue;
+            }
+            var (gj, eiw) = Rigidities(seg);
             var el = new VlasovElement(len, gj, eiw, m);
             int[] dof = [2 * a, 2 * a + 1, 2 * b, 2 * b + 1];
             for (int r = 0; r < 4; r++)
@@ -43,7 +57,15 @@ public static class WarpingMemberSolver
                 f[dof[r]] += el.Load[r];
                 for (int c = 0; c < 4; c++) k[dof[r] * n + dof[c]] += el.Stiffness[r * 4 + c];
             }
-            elements.Add((seg, a, b, el));
+            warps[a] = warps[b] = true;
+            elements.Add(new MemberElement(seg, a, b, el, null));
+        }
+        foreach (var sp in member.Springs)
+        {
+            int a = Station(sp.StationA, $"spring {sp.Label}"), b = Station(sp.StationB, $"spring {sp.Label}");
+            if (!(sp.Stiffness > 0) || !double.IsFinite(sp.Stiffness))
+                throw new SectionTwistException("bad-member", $"spring {sp.Label}: stiffness {sp.Stiffness} N*m/rad must be positive");
+            if (a != b) AddSpring(k, n, 2 * a, 2 * b, sp.Stiffness);
         }
         foreach (var p in member.Loads.OfType<PointTorque>()) f[2 * Station(p.Station, "a point torque")] += p.Torque;
         foreach (var load in member.Loads)
@@ -61,6 +83,8 @@ public static class WarpingMemberSolver
         if (member.FixedStations.Count == 0)
             throw new SectionTwistException("bad-member", "no station is held against rotation; fix at least one station (supports)");
         foreach (var s in member.FixedStations) fixedDof[2 * Station(s, "the supports")] = true;
+        // a station where no warping segment ends (a coupling's own station, a taper's end) has no phi' freedom
+        for (int i = 0; i < stations.Length; i++) if (!warps[i]) fixedDof[2 * i + 1] = true;
         foreach (var (name, end) in member.Warping)
         {
             int i = Station(name, "a warping condition");
@@ -73,7 +97,30 @@ public static class WarpingMemberSolver
             }
         }
         var d = SolveReduced(k, f, fixedDof, n);
-        return BuildResult(member, stations, elements, k, f, d, fixedDof);
+        return BuildResult(member, stations, elements, k, f, d, fixedDof, warps);
+    }
+
+    /// <summary>A segment's element: the Vlasov element of a warping segment, or the Saint-Venant element of a round taper.</summary>
+    private sealed record MemberElement(WarpingSegment Seg, int A, int B, VlasovElement? Vlasov, SegmentElement? Taper);
+
+    private static SegmentElement SaintVenantElement(WarpingSegment seg, int a, int b, double len, bool flip, double m)
+    {
+        double g = seg.Material.ShearModulus;
+        if (seg.Taper is not { } taper)
+        {
+            if (!(seg.Section.TorsionConstant > 0) || !double.IsFinite(seg.Section.TorsionConstant))
+                throw new SectionTwistException("bad-member", $"segment {seg.Label}: J must be positive (J = {seg.Section.TorsionConstant} m^4)");
+            return new SegmentElement(a, b, len, g, new SectionStiffness(seg.Section.TorsionConstant, seg.Section.ShearPerTorque), 0, 0, m);
+        }
+        taper.Validate($"segment {seg.Label}");
+        double dA = flip ? taper.EndDiameter : taper.StartDiameter, dB = flip ? taper.StartDiameter : taper.EndDiameter;
+        return new SegmentElement(a, b, len, g, null, dA, dB, m);
+    }
+
+    private static void AddSpring(double[] k, int n, int i, int j, double ks)
+    {
+        k[i * n + i] += ks; k[j * n + j] += ks;
+        k[i * n + j] -= ks; k[j * n + i] -= ks;
     }
 
     private static (double GJ, double EIw) Rigidities(WarpingSegment seg)
@@ -82,7 +129,7 @@ public static class WarpingMemberSolver
         double e = seg.Material.YoungsModulus ?? throw new SectionTwistException("bad-member",
             $"segment {seg.Label}: material {seg.Material.Name} has no Young's modulus E; give E for warping torsion");
         if (!(s.TorsionConstant > 0) || !(s.WarpingConstant > 0) || !double.IsFinite(s.WarpingConstant))
-            throw new SectionTwistException("bad-member", $"segment {seg.Label}: J and Iw must be positive (J = {s.TorsionConstant} m^4, Iw = {s.WarpingConstant} m^6); a section that does not warp needs no warping analysis");
+            throw new SectionTwistException("bad-member", $"segment {seg.Label}: J must be positive and Iw positive or zero (J = {s.TorsionConstant} m^4, Iw = {s.WarpingConstant} m^6); give Iw = 0 for a section that does not warp");
         return (seg.Material.ShearModulus * s.TorsionConstant, e * s.WarpingConstant);
     }
 
@@ -104,37 +151,49 @@ public static class WarpingMemberSolver
         return d;
     }
 
-    private static WarpingMemberResult BuildResult(WarpingMember member, Station[] stations, List<(WarpingSegment Seg, int A, int B, VlasovElement El)> elements,
-        double[] k, double[] f, double[] d, bool[] fixedDof)
+    private static WarpingMemberResult BuildResult(WarpingMember member, Station[] stations, List<MemberElement> elements,
+        double[] k, double[] f, double[] d, bool[] fixedDof, bool[] warps)
     {
         int n = d.Length;
         var reaction = new double[n];
         for (int i = 0; i < n; i++)
         {
             bool spring = i % 2 == 1 && member.Warping.TryGetValue(stations[i / 2].Name, out var w) && w.Kind == WarpingEndKind.Spring;
-            if (!fixedDof[i] && !spring) continue;
+            if (!fixedDof[i] && !spring || i % 2 == 1 && !warps[i / 2]) continue;
             double s = -f[i];
             for (int j = 0; j < n; j++) s += k[i * n + j] * d[j];
             reaction[i] = s;
         }
-        var st = stations.Select((s, i) => new WarpingStationResult(s.Name, s.Position, d[2 * i], d[2 * i + 1], reaction[2 * i], reaction[2 * i + 1])).ToArray();
+        var rate = new double[stations.Length];
+        for (int i = 0; i < stations.Length; i++) rate[i] = d[2 * i + 1];
         var segs = new List<WarpingSegmentResult>();
         Span<double> ends = stackalloc double[4];
         Span<double> phi = stackalloc double[4];
-        foreach (var (seg, a, b, el) in elements.OrderBy(e => e.A))
+        foreach (var e in elements.OrderBy(e => e.A))
         {
-            var (gj, eiw) = Rigidities(seg);
-            double e = eiw / seg.Section.WarpingConstant;
+            var seg = e.Seg;
+            int a = e.A, b = e.B;
             double x0 = stations[a].Position, len = stations[b].Position - x0;
+            if (e.Taper is { } sv)
+            {
+                segs.Add(SaintVenantResult(seg, sv, x0, d[2 * a], d[2 * b], out double rateA, out double rateB));
+                // a station without a phi' freedom reports this segment's rate of twist there
+                if (!warps[a]) rate[a] = rateA;
+                if (!warps[b]) rate[b] = rateB;
+                continue;
+            }
+            var el = e.Vlasov!;
+            var (gj, eiw) = Rigidities(seg);
+            double modulus = eiw / seg.Section.WarpingConstant;
             ends[0] = d[2 * a]; ends[1] = d[2 * a + 1]; ends[2] = d[2 * b]; ends[3] = d[2 * b + 1];
             var pts = new WarpingPoint[SamplesPerSegment];
             for (int q = 0; q < pts.Length; q++)
             {
                 double x = len * q / (pts.Length - 1);
                 el.Field(ends, x, phi);
-                double sv = Math.Abs(gj * phi[1]) * seg.Section.ShearPerTorque, tw = e * seg.Section.WarpingShearFactor * Math.Abs(phi[3]);
+                double svShear = Math.Abs(gj * phi[1]) * seg.Section.ShearPerTorque, tw = modulus * seg.Section.WarpingShearFactor * Math.Abs(phi[3]);
                 pts[q] = new WarpingPoint(x0 + x, phi[0], phi[1], gj * phi[1], -eiw * phi[3], -eiw * phi[2],
-                    e * seg.Section.MaxSectorialCoordinate * Math.Abs(phi[2]), sv, tw, sv + tw);
+                    modulus * seg.Section.MaxSectorialCoordinate * Math.Abs(phi[2]), svShear, tw, svShear + tw);
             }
             segs.Add(new WarpingSegmentResult
             {
@@ -150,14 +209,69 @@ public static class WarpingMemberSolver
                 WarpingLength = Math.Sqrt(eiw / gj),
             });
         }
+        // reaction torques that are zero in exact arithmetic (a free shaft's reference station) are written as 0
+        double torqueScale = 0;
+        for (int i = 0; i < n; i += 2) torqueScale += Math.Abs(f[i]);
+        var st = stations.Select((s, i) => new WarpingStationResult(s.Name, s.Position, d[2 * i], rate[i],
+            Units.NumberText.Clean(reaction[2 * i], torqueScale, 1e-10), reaction[2 * i + 1])).ToArray();
+        var springs = member.Springs.Select(sp =>
+        {
+            double windup = d[2 * Array.FindIndex(stations, x => x.Name == sp.StationB)] - d[2 * Array.FindIndex(stations, x => x.Name == sp.StationA)];
+            return new SpringResult(sp.Label, sp.StationA, sp.StationB, sp.Stiffness * windup, windup);
+        }).ToArray();
         var warnings = new List<string>();
+        var idle = member.Warping.Where(w => w.Value.Kind != WarpingEndKind.Free && !warps[Array.FindIndex(stations, x => x.Name == w.Key)]).Select(w => w.Key).ToArray();
+        if (idle.Length > 0)
+            warnings.Add($"station{(idle.Length > 1 ? "s" : "")} {string.Join(", ", idle)}: the warping condition changes nothing: no segment of open section ends there (round, closed and tapered segments do not warp); give it where an open segment ends, or leave it out");
         if (!member.Warping.Values.Any(w => w.Kind != WarpingEndKind.Free))
             warnings.Add("warping is free at every station: the twist is T L / (G J) with no warping stresses; if any end or support restrains warping (end plates, continuity), state it, since twist and stresses change");
-        foreach (var seg in elements.Select(x => x.Seg).Where(s => !(s.Section.WarpingShearFactor > 0)))
+        foreach (var seg in elements.Where(x => x.Vlasov is not null).Select(x => x.Seg).Where(s => !(s.Section.WarpingShearFactor > 0)))
             warnings.Add($"segment {seg.Label}: the section gives no warping shear factor; the warping shear is left out of the shear values (analyse the section with its warping function)");
         foreach (var seg in elements.Select(x => x.Seg).Where(s => s.Section.ShearUnbounded))
             warnings.Add($"segment {seg.Label}: the section has a sharp re-entrant corner; its Saint-Venant and warping shear peaks are unbounded (the tables say so); model the real fillet radii");
         warnings.Add("the combined shear adds the Saint-Venant and warping peaks (a bound: they need not lie at the same point); lateral-torsional buckling, local buckling and connection design are not checked: follow the local steel design code and licensed engineering practice");
-        return new WarpingMemberResult { Stations = st, Segments = segs.AsReadOnly(), Warnings = warnings.AsReadOnly() };
+        return new WarpingMemberResult { Stations = st, Segments = segs.AsReadOnly(), Springs = Array.AsReadOnly(springs), Warnings = warnings.AsReadOnly() };
+    }
+
+    /// <summary>
+    /// The samples of a segment in Saint-Venant torsion (a round taper, or a section with Iw = 0): internal torque
+    /// T(s) = Ta - t s, rotation phi_a + Ta F0(s) - t F1(s) with F0, F1 the flexibility integrals over [0, s]
+    /// (<see cref="SegmentElement"/>), shear |T| times the peak shear per unit torque at s; no warping values.
+    /// </summary>
+    private static WarpingSegmentResult SaintVenantResult(WarpingSegment seg, SegmentElement sv, double x0, double phiA, double phiB, out double rateA, out double rateB)
+    {
+        double ta = sv.TorqueA(phiA, phiB), t = sv.Distributed, len = sv.Length, g = sv.G;
+        double Diameter(double s) => sv.DiameterA + (sv.DiameterB - sv.DiameterA) * s / len;
+        double Rate(double s) => (ta - t * s) / (g * (sv.Section?.TorsionConstant ?? Math.PI * Math.Pow(Diameter(s), 4) / 32));
+        double ShearPerTorque(double s) => sv.Section?.ShearPerTorque ?? 16 / (Math.PI * Math.Pow(Diameter(s), 3));
+        double RotationAt(double s)
+        {
+            var part = new SegmentElement(0, 1, s, g, sv.Section, sv.DiameterA, sv.Section is null ? Diameter(s) : 0, t);
+            return phiA + ta * part.F0 - t * part.F1;
+        }
+        var pts = new WarpingPoint[SamplesPerSegment];
+        for (int q = 0; q < pts.Length; q++)
+        {
+            double s = len * q / (pts.Length - 1), torque = ta - t * s;
+            double rot = q == 0 ? phiA : q == pts.Length - 1 ? phiB : RotationAt(s);
+            double shear = Math.Abs(torque) * ShearPerTorque(s);
+            pts[q] = new WarpingPoint(x0 + s, rot, Rate(s), torque, 0, 0, 0, shear, 0, shear);
+        }
+        rateA = Rate(0);
+        rateB = Rate(len);
+        double peak = Math.Max(sv.MaxShear(ta), pts.Max(p => p.SaintVenantShear));
+        return new WarpingSegmentResult
+        {
+            Label = seg.Label,
+            Points = Array.AsReadOnly(pts),
+            MaxBimoment = 0,
+            MaxWarpingNormalStress = 0,
+            MaxSaintVenantShear = peak,
+            MaxWarpingShear = 0,
+            MaxCombinedShear = peak,
+            ShearUnbounded = seg.Section.ShearUnbounded,
+            MaxRotation = pts.Max(p => Math.Abs(p.Rotation)),
+            WarpingLength = 0,
+        };
     }
 }
