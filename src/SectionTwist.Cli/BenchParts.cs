@@ -106,7 +106,47 @@ internal static class BenchParts
         w.WriteLine(string.Create(inv, $"  parallel ({Environment.ProcessorCount} workers)    {tp,7:F2} s wall  {cpu2 - cpu1,7:F2} s CPU"));
         w.WriteLine(string.Create(inv, $"  speed-up                {ts / tp,7:F2}x wall (results identical); CPU parallel/serial {(cpu2 - cpu1) / (cpu1 - cpu0):F2}"));
         w.WriteLine($"  garbage collection      serial {gc1 - gc0}; parallel {gc2 - gc1}");
+        double machine = MachineScaling();
+        w.WriteLine(string.Create(inv, $"  machine reference       {machine,7:F2}x: the same in-cache arithmetic loop on {Environment.ProcessorCount} threads against one, just after (no memory traffic, no"));
+        w.WriteLine("                          allocation: what the cores give at best at this moment; a batch ratio near it is as good as the machine allows)");
         w.WriteLine("  (a speed-up near the worker count needs idle cores: on a loaded machine the wall ratio shows the load, the CPU ratio the overhead)");
+    }
+
+    /// <summary>
+    /// The machine's own parallel speed-up at this moment: a fixed amount of floating-point work in registers and the
+    /// first-level cache (a recurrence per thread, no allocation, no shared data), done by one thread, then split
+    /// over all cores; wall time of the one against the other. Shared hosts, frequency boost of a lone core and
+    /// neighbours' load all show in it.
+    /// </summary>
+    private static double MachineScaling()
+    {
+        int threads = Environment.ProcessorCount;
+        const long total = 400_000_000;
+        static double Work(long steps)
+        {
+            double a = 1.0000001, b = 0.9999999, c = 0.5, d = 0.25;
+            for (long i = 0; i < steps; i++)
+            {
+                a = a * b + 1e-9; b = b * c + 0.5; c = c * d + 0.4; d = d * a + 1e-3;
+            }
+            return a + b + c + d;
+        }
+        Work(1_000_000);
+        var sw = Stopwatch.StartNew();
+        double sink = Work(total);
+        double one = sw.Elapsed.TotalSeconds;
+        sw.Restart();
+        var parts = new Thread[threads];
+        var sums = new double[threads];
+        for (int t = 0; t < threads; t++)
+        {
+            int k = t;
+            parts[t] = new Thread(() => sums[k] = Work(total / threads));
+            parts[t].Start();
+        }
+        foreach (var t in parts) t.Join();
+        double all = sw.Elapsed.TotalSeconds;
+        return double.IsNaN(sink + sums.Sum()) ? double.NaN : one / all;
     }
 
     /// <summary>Collections per generation, bytes allocated and time paused by the collector, to compare two runs.</summary>
