@@ -15,6 +15,7 @@ internal sealed class CliLimits : IDisposable
 
     private readonly CancellationTokenSource _time = new();
     private readonly CancellationTokenSource _linked;
+    private readonly ManualResetEventSlim _finished = new();
 
     public CliLimits(Args args, CliContext ctx, CancellationToken external)
     {
@@ -23,7 +24,20 @@ internal sealed class CliLimits : IDisposable
         double? mb = args.Double("memory-budget");
         if (mb is { } m && !(m >= 16 && m <= 1 << 24)) throw new UsageException($"--memory-budget {m}: give the memory for one section analysis in MB, from 16 to 16777216 (e.g. 2048)");
         TimeoutSeconds = timeout ?? (ctx.IsTerminal ? 0 : DefaultTimeoutSeconds);
-        if (TimeoutSeconds > 0) _time.CancelAfter(TimeSpan.FromSeconds(Math.Min(TimeoutSeconds, int.MaxValue / 1000.0)));
+        if (TimeoutSeconds > 0)
+        {
+            // A thread of its own, not a timer: timer callbacks run on the thread pool, which a command's parallel loops
+            // can keep busy, so the limit would fire late by however long the pool takes to add a thread.
+            var limit = TimeSpan.FromSeconds(Math.Min(TimeoutSeconds, int.MaxValue / 1000.0));
+            new Thread(() =>
+            {
+                try
+                {
+                    if (!_finished.Wait(limit)) _time.Cancel();
+                }
+                catch (ObjectDisposedException) { } // the command ended as the limit passed
+            }) { IsBackground = true, Name = "time limit" }.Start();
+        }
         _linked = CancellationTokenSource.CreateLinkedTokenSource(_time.Token, external);
         ctx.Cancellation = _linked.Token;
         if (mb is { } budget) ctx.MemoryBudget = (long)(budget * (1 << 20));
@@ -42,6 +56,8 @@ internal sealed class CliLimits : IDisposable
 
     public void Dispose()
     {
+        _finished.Set();
+        _finished.Dispose();
         _linked.Dispose();
         _time.Dispose();
     }

@@ -78,7 +78,7 @@ public sealed class HostilePlasticTests
         using var cts = new CancellationTokenSource();
         var clock = Stopwatch.StartNew();
         long firedAt = -1;
-        using var timer = new Timer(_ => { firedAt = clock.ElapsedMilliseconds; cts.Cancel(); }, null, 200, Timeout.Infinite);
+        CancelSoon.After(cts, 200, () => firedAt = clock.ElapsedMilliseconds);
         try
         {
             // a fine mesh and a hole constant searched on every curve point: many seconds uncancelled

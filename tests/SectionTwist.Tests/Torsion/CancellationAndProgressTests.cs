@@ -24,7 +24,7 @@ public class CancellationAndProgressTests
         using var cts = new CancellationTokenSource();
         var clock = Stopwatch.StartNew();
         long firedAt = -1;
-        using var timer = new Timer(_ => { firedAt = clock.ElapsedMilliseconds; cts.Cancel(); }, null, cancelAfterMs, Timeout.Infinite);
+        CancelSoon.After(cts, cancelAfterMs, () => firedAt = clock.ElapsedMilliseconds);
         Assert.ThrowsAny<OperationCanceledException>(() =>
             SectionAnalyzer.Analyze(profile, options, cts.Token, new ListProgress(reports)));
         long returnedAt = clock.ElapsedMilliseconds;
