@@ -212,8 +212,12 @@ public static class WarpingMemberSolver
         // reaction torques that are zero in exact arithmetic (a free shaft's reference station) are written as 0
         double torqueScale = 0;
         for (int i = 0; i < n; i += 2) torqueScale += Math.Abs(f[i]);
-        var st = stations.Select((s, i) => new WarpingStationResult(s.Name, s.Position, d[2 * i], rate[i],
-            Units.NumberText.Clean(reaction[2 * i], torqueScale, 1e-10), reaction[2 * i + 1])).ToArray();
+        // rates of twist and bimoments that are zero in exact arithmetic (mid-span of a symmetric member) are written as 0,
+        // not as round-off whose sign depends on the order of the sums
+        double rateScale = segs.SelectMany(x => x.Points).Select(p => Math.Abs(p.RateOfTwist)).DefaultIfEmpty(0).Max();
+        double bimomentScale = segs.Select(x => x.MaxBimoment).DefaultIfEmpty(0).Max();
+        var st = stations.Select((s, i) => new WarpingStationResult(s.Name, s.Position, d[2 * i], Units.NumberText.Clean(rate[i], rateScale),
+            Units.NumberText.Clean(reaction[2 * i], torqueScale, 1e-10), Units.NumberText.Clean(reaction[2 * i + 1], bimomentScale))).ToArray();
         var springs = member.Springs.Select(sp =>
         {
             double windup = d[2 * Array.FindIndex(stations, x => x.Name == sp.StationB)] - d[2 * Array.FindIndex(stations, x => x.Name == sp.StationA)];
