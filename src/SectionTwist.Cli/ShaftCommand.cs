@@ -33,7 +33,8 @@ internal sealed class ShaftCommand : ICommand
         "  --units SYS   units of the tables, CSV files and report: SI-mm, SI-m or US (default: the file's own 'units' block)\n" +
         "  --json        print the result as JSON in SI base units (m, N*m, Pa, rad) instead of tables; --units does not change it\n" +
         "  --csv DIR     also write DIR/stations.csv, DIR/segments.csv and DIR/warnings.csv, DIR/bending.csv with a 'bending' block\n" +
-        "                and DIR/overload.csv with an 'overload' block\n" +
+        "                DIR/warping-stations.csv and DIR/warping-segments.csv when warping is restrained, and DIR/overload.csv\n" +
+        "                with an 'overload' block\n" +
         "  --report OUT  also write one self-contained HTML report (inputs, tables, pictures, verification, method; with a\n" +
         "                'dynamics' block also the further shafts and the torsional modes, as 'sectiontwist modes' computes them)\n" +
         "  Exceeded limits and unbounded peaks (sharp corners) are flagged in the 'check' column, not errors; the exit code is\n" +
@@ -103,6 +104,9 @@ internal sealed class ShaftCommand : ICommand
         w.WriteLine($"sign convention: right-hand rule about the axis from '{r.Stations[0].Name}' to '{r.Stations[^1].Name}'; " +
                     "internal torque positive when it acts counter-clockwise on the cut face looking back toward the first station");
         w.WriteLine($"rotations relative to station '{r.ReferenceStation}'");
+        if (r.Warping is not null)
+            w.WriteLine("free warping (Saint-Venant) in these tables; the file restrains warping: the restrained-warping tables after them " +
+                        "give the member's rotations, support torques, spring torques and bimoments");
         w.WriteLine();
 
         w.WriteLine("stations");

@@ -28,6 +28,26 @@ internal static class ReportText
         "No bending, axial force or dynamic effects (torsional vibration, fatigue) are included.",
     ];
 
+    /// <summary>
+    /// The assumptions of a shaft report: the default list, with the free-warping line replaced when the shaft was also
+    /// solved with restrained warping and the no-bending, no-dynamics line replaced when the report has those chapters, so
+    /// that the list does not deny a chapter the report contains.
+    /// </summary>
+    public static List<string> ShaftAssumptions(bool restrainedWarping, bool bending, bool dynamics)
+    {
+        var list = new List<string>(DefaultAssumptions);
+        if (restrainedWarping)
+            list[1] = "Saint-Venant (free-warping) torsion in the result tables; where the file restrains warping, the segments of open " +
+                      "section are also solved in non-uniform (Vlasov) torsion (chapter \"Restrained warping\"), whose rotations and " +
+                      "support torques replace the free-warping ones; closed, solid and round segments warp freely.";
+        if (bending || dynamics)
+            list[4] = (bending
+                    ? "Bending and axial force as in the chapter \"Bending with torsion\" (linear elastic beam theory, fatigue as listed there)"
+                    : "No bending or axial force")
+                + (dynamics ? "; torsional vibration as in the dynamics chapters." : "; no torsional vibration.");
+        return list;
+    }
+
     public const string DefaultCaution =
         "Caution: these results are for linear elastic Saint-Venant torsion. Stress concentrations at shoulders, keyseat ends " +
         "and fillets are not included, nor are bending, fatigue or dynamic loads. Verify the design against the applicable " +

@@ -66,7 +66,7 @@ public static class ShaftReport
         int after = chapters.Count > 1 && chapters[1].Heading.Contains("warping", StringComparison.OrdinalIgnoreCase) ? 2 : 1;
         var keyFigures = ShaftResultChapter.KeyFigures(doc, result).ToList();
         var method = new List<string>([.. ReportText.DefaultMethod, SectionsMethod]);
-        var assumptions = new List<string>(ReportText.DefaultAssumptions);
+        var assumptions = ReportText.ShaftAssumptions(result.Warping is not null, result.Bending is not null, extras?.Modes is not null && doc.Dynamics is not null);
         string caution = result.Bending is null ? ReportText.DefaultCaution : BendingChapter.Caution;
         var extraChapters = new List<ReportChapter>();
         if (extras?.Geared is { } geared)

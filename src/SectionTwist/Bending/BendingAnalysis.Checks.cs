@@ -29,7 +29,7 @@ internal sealed partial class BendingAnalysis
                         if (t == 0) _warnings.Add($"gear at '{g.Station}': no torque is applied there in the torsion model, so its mesh force is zero; apply the gear's torque at that station");
                         double wt = t / r;
                         double wr = Math.Abs(wt) * Math.Tan(g.PressureAngle) / Math.Cos(g.HelixAngle);
-                        double c = Math.Cos(g.MeshAngle), s = Math.Sin(g.MeshAngle);
+                        var (c, s) = PlaneDirection.Of(g.MeshAngle);
                         py = -wt * s - wr * c; pz = wt * c - wr * s;
                         px = wt * Math.Tan(g.HelixAngle);
                         // axial force at the pitch point (0, r c, r s): moment r x F = (0, r s Fx, -r c Fx)
@@ -45,7 +45,8 @@ internal sealed partial class BendingAnalysis
                         if (!(r > 0) || !(b.Factor >= 1)) throw new SectionTwistException("bad-pull", $"pull at '{b.Station}': the diameter must be positive and the factor at least 1");
                         if (t == 0) _warnings.Add($"pull at '{b.Station}': no torque is applied there in the torsion model, so the pull is zero");
                         double f = b.Factor * Math.Abs(t) / r;
-                        py = f * Math.Cos(b.Direction); pz = f * Math.Sin(b.Direction);
+                        var (c, s) = PlaneDirection.Of(b.Direction);
+                        py = f * c; pz = f * s;
                         kind = "pull"; text = b.Description ?? $"pull: {Units.NumberText.Format(b.Factor, 3)} x torque / pulley radius";
                         break;
                     }
@@ -83,7 +84,7 @@ internal sealed partial class BendingAnalysis
         for (int e = 0; e < _pieces.Count; e++)
         {
             sum += fx[e] + (e == tn ? -net : 0);
-            n[e] = -sum;
+            n[e] = 0.0 - sum; // no negative zero without axial loads (a CSV cell of '-0')
         }
         return n;
     }

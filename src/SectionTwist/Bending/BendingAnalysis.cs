@@ -31,7 +31,7 @@ internal sealed partial class BendingAnalysis(ShaftModel model, ShaftResult tors
         var (fy, fz, fx, cy, cz, resolved) = ResolveLoads(nn);
         var pY = new BeamPiece[_pieces.Count];
         var pZ = new BeamPiece[_pieces.Count];
-        double cosG = Math.Cos(_b.GravityDirection), sinG = Math.Sin(_b.GravityDirection);
+        var (cosG, sinG) = PlaneDirection.Of(_b.GravityDirection);
         for (int e = 0; e < _pieces.Count; e++)
         {
             var p = _pieces[e];

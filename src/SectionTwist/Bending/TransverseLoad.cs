@@ -16,7 +16,7 @@ public sealed record PointForce(string Station, double ForceY, double ForceZ, do
 {
     /// <summary>A transverse force of magnitude <paramref name="magnitude"/> (N) in direction <paramref name="direction"/> (rad from +Y toward +Z).</summary>
     public static PointForce Polar(string station, double magnitude, double direction) =>
-        new(station, magnitude * Math.Cos(direction), magnitude * Math.Sin(direction));
+        new(station, magnitude * PlaneDirection.Of(direction).Cos, magnitude * PlaneDirection.Of(direction).Sin);
 }
 
 /// <summary>

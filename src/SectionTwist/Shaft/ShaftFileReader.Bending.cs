@@ -95,7 +95,8 @@ internal sealed partial class ShaftFileReader
             {
                 double mag = _file.Quantity(fn, "force", QuantityKind.Force);
                 double dir = m.Quantity("direction", QuantityKind.Angle) ?? throw _file.Error(item, "direction", "a force magnitude needs its 'direction' (angle from +Y toward +Z, e.g. '-90 deg' for down)");
-                fy = mag * Math.Cos(dir); fz = mag * Math.Sin(dir);
+                var (c, s) = PlaneDirection.Of(dir);
+                fy = mag * c; fz = mag * s;
             }
         }
         double fx = m.Quantity("axial", QuantityKind.Force) ?? 0;

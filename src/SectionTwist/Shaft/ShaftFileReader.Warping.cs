@@ -36,7 +36,7 @@ internal sealed partial class ShaftFileReader
             // a plain number has always meant N*m^3; in a file whose units are not SI that would be a trap, so there it needs its unit
             bool si = _file.Default(QuantityKind.Torque) is null or { Factor: 1 } && _file.Default(QuantityKind.Length) is null or { Factor: 1 };
             if (!si)
-                throw _file.Error(n, "spring", $"'{YamlGuard.Short(text)}' has no unit and this file's units are not SI; write the unit, e.g. '{YamlGuard.Short(text)} N*m^3' or '{YamlGuard.Short(text)} lbf*in^3'");
+                throw _file.Error(n, "spring", $"'{YamlGuard.Short(text)}' has no unit and this file's units are not metres and N*m (only there is a plain number N*m^3); write the unit, e.g. '{YamlGuard.Short(text)} N*m^3' or '{YamlGuard.Short(text)} lbf*in^3'");
             if (!(plain >= 0) || ShaftValueRange.Check(QuantityKind.WarpingStiffness, plain) is not null)
                 throw _file.Error(n, "spring", $"the warping spring stiffness must be zero or positive and below 1e18 N*m^3, found {YamlMap.Describe(n)}");
             return WarpingEnd.Spring(plain);

@@ -8,7 +8,8 @@ namespace SectionTwist.Shaft;
 /// CSV tables of a shaft result in a <see cref="UnitSystem"/> (the unit is part of each column name, in ASCII, e.g.
 /// <c>torque_at_from_N*m</c> becomes <c>torque_at_from_Nm</c>), written with <see cref="AtomicFile"/>: stations.csv,
 /// segments.csv (with the <c>check</c> column), warnings.csv (with the overload and stage warnings), bending.csv when the
-/// model has bending and overload.csv when it has overload checks. Numbers keep
+/// model has bending, warping-stations.csv and warping-segments.csv when it restrains warping, and overload.csv when it has
+/// overload checks. Numbers keep
 /// full precision.
 /// </summary>
 internal static class ShaftResultCsv
@@ -61,7 +62,38 @@ internal static class ShaftResultCsv
     }
 
     /// <summary>
-    /// Writes stations.csv, segments.csv and warnings.csv (and bending.csv when the model has bending) into
+    /// The stations of the restrained-warping solve: rotation, rate of twist, support torque and the bimoment a restraint or
+    /// warping spring takes. These rotations replace the free-warping ones of stations.csv.
+    /// </summary>
+    public static string WarpingStations(WarpingTorsion.WarpingMemberResult w, UnitSystem u)
+    {
+        var sb = new StringBuilder($"name,{Col("position", u.Length)},rotation_rad,rotation_deg,{Col("rate_of_twist", u.TwistRate)},{Col("reaction_torque", u.Torque)},{Col("reaction_bimoment", u.Bimoment)}\n");
+        foreach (var s in w.Stations)
+            sb.Append(CultureInfo.InvariantCulture,
+                $"{Text(s.Name)},{N(u.Length.FromSi(s.Position))},{N(s.Rotation)},{N(s.Rotation * 180 / Math.PI)},{N(u.TwistRate.FromSi(s.RateOfTwist))},{N(u.Torque.FromSi(s.ReactionTorque))},{N(u.Bimoment.FromSi(s.ReactionBimoment))}\n");
+        return sb.ToString();
+    }
+
+    /// <summary>
+    /// The segments of the restrained-warping solve, largest values along each: warping length (empty for a segment that
+    /// does not warp), rotation, bimoment, warping normal stress, the shears (empty when unbounded) and the bending + warping
+    /// normal stress (empty without a bending block).
+    /// </summary>
+    public static string WarpingSegments(WarpingTorsion.WarpingMemberResult w, UnitSystem u)
+    {
+        var sb = new StringBuilder($"name,{Col("warping_length", u.Length)},max_rotation_rad,{Col("max_bimoment", u.Bimoment)},{Col("max_warping_normal_stress", u.Stress)}," +
+                                   $"{Col("max_saint_venant_shear", u.Stress)},{Col("max_warping_shear", u.Stress)},{Col("max_combined_shear", u.Stress)},shear_unbounded,{Col("max_bending_plus_warping_normal", u.Stress)}\n");
+        string Shear(WarpingTorsion.WarpingSegmentResult s, double v) => s.ShearUnbounded ? "" : N(u.Stress.FromSi(v));
+        foreach (var s in w.Segments)
+            sb.Append(CultureInfo.InvariantCulture,
+                $"{Text(s.Label)},{(s.WarpingLength > 0 ? N(u.Length.FromSi(s.WarpingLength)) : "")},{N(s.MaxRotation)},{N(u.Bimoment.FromSi(s.MaxBimoment))},{N(u.Stress.FromSi(s.MaxWarpingNormalStress))}," +
+                $"{Shear(s, s.MaxSaintVenantShear)},{Shear(s, s.MaxWarpingShear)},{Shear(s, s.MaxCombinedShear)},{(s.ShearUnbounded ? "yes" : "no")},{N(s.MaxCombinedNormalStress is { } c ? u.Stress.FromSi(c) : null)}\n");
+        return sb.ToString();
+    }
+
+    /// <summary>
+    /// Writes stations.csv, segments.csv and warnings.csv (and bending.csv when the model has bending, warping-stations.csv
+    /// and warping-segments.csv when it restrains warping, overload.csv with overload checks) into
     /// <paramref name="directory"/>; returns the files written.
     /// </summary>
     public static IReadOnlyList<string> WriteAll(ShaftResult r, string directory, UnitSystem units, GearedShaftResult? geared = null)
@@ -77,6 +109,11 @@ internal static class ShaftResultCsv
         Put("segments.csv", Segments(r, units));
         Put("warnings.csv", Warnings(r, geared));
         if (r.Bending is { } b) Put("bending.csv", Bending.BendingCsv.Samples(b, units));
+        if (r.Warping is { } w)
+        {
+            Put("warping-stations.csv", WarpingStations(w, units));
+            Put("warping-segments.csv", WarpingSegments(w, units));
+        }
         if (r.Overload is { } o) Put("overload.csv", Overload(o, units));
         return files;
     }

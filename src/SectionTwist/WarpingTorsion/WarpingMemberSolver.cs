@@ -127,7 +127,7 @@ public static class WarpingMemberSolver
     {
         var s = seg.Section;
         double e = seg.Material.YoungsModulus ?? throw new SectionTwistException("bad-member",
-            $"segment {seg.Label}: material {seg.Material.Name} has no Young's modulus E; give E for warping torsion");
+            $"segment {seg.Label}: material {seg.Material.Name} has no Young's modulus E, which restrained warping needs (E Iw); give it E in its entry under 'materials:' (e.g. 'E: 210 GPa') or use a library material");
         if (!(s.TorsionConstant > 0) || !(s.WarpingConstant > 0) || !double.IsFinite(s.WarpingConstant))
             throw new SectionTwistException("bad-member", $"segment {seg.Label}: J must be positive and Iw positive or zero (J = {s.TorsionConstant} m^4, Iw = {s.WarpingConstant} m^6); give Iw = 0 for a section that does not warp");
         return (seg.Material.ShearModulus * s.TorsionConstant, e * s.WarpingConstant);
@@ -158,10 +158,14 @@ public static class WarpingMemberSolver
         var reaction = new double[n];
         for (int i = 0; i < n; i++)
         {
-            bool spring = i % 2 == 1 && member.Warping.TryGetValue(stations[i / 2].Name, out var w) && w.Kind == WarpingEndKind.Spring;
+            var end = i % 2 == 1 && member.Warping.TryGetValue(stations[i / 2].Name, out var w) ? w : null;
+            bool spring = end is { Kind: WarpingEndKind.Spring };
             if (!fixedDof[i] && !spring || i % 2 == 1 && !warps[i / 2]) continue;
             double s = -f[i];
             for (int j = 0; j < n; j++) s += k[i * n + j] * d[j];
+            // k holds the warping spring on its diagonal, so k d - f vanishes at a spring's free phi': the bimoment the
+            // spring applies to the member is -K phi', i.e. the members' own k d - f without the spring's term
+            if (spring && !fixedDof[i]) s -= end!.Stiffness * d[i];
             reaction[i] = s;
         }
         var rate = new double[stations.Length];

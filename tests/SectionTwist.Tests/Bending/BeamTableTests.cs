@@ -26,6 +26,24 @@ public class BeamTableTests
         Tol.Rel(32 * (w * l / 4) / (Math.PI * d * d * d), At(r, l / 2).Stress.VonMises, 1e-12, "32 M / (pi d^3)");
     }
 
+    // A force and the weight straight down (-90 deg, the default gravity direction) load the Z plane only: the Y plane
+    // carries nothing, so its bearing forces are exactly 0, not the 6E-17 of cos(-90 deg) times the load (statics, exact).
+    [Fact]
+    public void Loads_along_an_axis_leave_the_other_plane_exactly_unloaded()
+    {
+        double l = 3, d = 0.05;
+        var b = new BendingModel
+        {
+            Bearings = [new Bearing("S0"), new Bearing("S2")], SelfWeight = true,
+            Loads = [PointForce.Polar("S1", 1e4, -Math.PI / 2), PointForce.Polar("S1", 10, 3 * Math.PI / 2)],
+        };
+        var r = ShaftSolver.Solve(MakeShaft([0, l / 2, l], [d, d], b)).Bending!;
+        Assert.All(r.Bearings, x => Assert.Equal(0, x.ForceY));
+        Assert.All(r.Samples, x => Assert.True(x.MomentY == 0 && x.ShearY == 0 && x.DeflectionY == 0, $"Y plane loaded at {x.Position}"));
+        Assert.All(r.Samples, x => Assert.False(double.IsNegative(x.AxialForce), "no axial load: +0, not -0 (a '-0' CSV cell)"));
+        Tol.Rel((1e4 + 10 + 7850 * 9.80665 * Math.PI * d * d / 4 * l) / 2, r.Bearings[0].ForceZ, 1e-12, "R = W/2");
+    }
+
     // Uniform load w on a simple span: M_max = w l^2 / 8, y_max = 5 w l^4 / (384 E I). Roark's, 7th ed., Table 8.1,
     // case 2e with w_a = w_l (uniform), from memory. Here the load is the shaft's own weight rho g A.
     [Fact]

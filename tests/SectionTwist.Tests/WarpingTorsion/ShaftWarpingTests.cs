@@ -255,7 +255,7 @@ public class ShaftWarpingTests
     public void A_plain_warping_spring_needs_its_unit_in_a_file_that_is_not_si()
     {
         var ex = Assert.Throws<SectionTwistException>(() => ShaftFile.Parse(Beam + "warping: {A: {spring: 2e4}}\n", resolver: ShaftSections.CreateResolver(Coarse)));
-        Assert.Contains("has no unit and this file's units are not SI; write the unit, e.g. '2e4 N*m^3'", ex.Message, StringComparison.Ordinal);
+        Assert.Contains("has no unit and this file's units are not metres and N*m (only there is a plain number N*m^3); write the unit, e.g. '2e4 N*m^3'", ex.Message, StringComparison.Ordinal);
         var bad = Assert.Throws<SectionTwistException>(() => ShaftFile.Parse(Beam + "warping: {A: {spring: 20 kN*m}}\n", resolver: ShaftSections.CreateResolver(Coarse)));
         Assert.Contains("'kN*m' is not a unit of this kind; use one of N*m^3", bad.Message, StringComparison.Ordinal);
         string si = Beam.Replace("units: {length: mm, torque: N*m}", "units: {length: m, torque: N*m}", StringComparison.Ordinal).Replace("after: 1200", "after: 1.2", StringComparison.Ordinal);

@@ -109,6 +109,20 @@ public class WarpingMemberTests
         Assert.Contains(Run(WarpingEnd.Free).Warnings, w => w.StartsWith("warping is free"));
     }
 
+    // A warping spring takes the bimoment K phi' (the definition of the spring): the station's bimoment reaction is that
+    // bimoment, equal and opposite to the member's own bimoment at the root (statics, exact), not 0.
+    [Fact]
+    public void A_warping_spring_reports_the_bimoment_it_takes()
+    {
+        double t = 500, l = 2, ks = 2.5e4;
+        var r = WarpingMemberSolver.Solve(Member([0, l], [new PointTorque("B", t)], ["A"], new() { ["A"] = WarpingEnd.Spring(ks) }));
+        var root = r.Stations[0];
+        Assert.NotEqual(0, root.RateOfTwist);
+        Tol.Rel(ks * Math.Abs(root.RateOfTwist), Math.Abs(root.ReactionBimoment), 1e-9, "spring bimoment K phi'");
+        Tol.Rel(Math.Abs(r.Segments[0].Points[0].Bimoment), Math.Abs(root.ReactionBimoment), 1e-9, "the member's bimoment at the root");
+        Assert.Equal(-Math.Sign(root.RateOfTwist), Math.Sign(root.ReactionBimoment));
+    }
+
     // Uniform torque m on a cantilever restrained at the root and free at the tip: the root reaction is -m L
     // (equilibrium) and, as a -> 0, phi(L) -> m L^2 / (2 G J) (Saint-Venant torsion under a uniform torque, common
     // practice, no source).
