@@ -11,6 +11,21 @@ internal static class ShaftWarping
 {
     public static ShaftResult Attach(ShaftResult r)
     {
+        var done = AttachWarping(r);
+        // a rotating shaft (the bending default) is checked with each boundary point at its worst angle to the moment: for
+        // an I-beam or channel that is bending about the weak axis, several times the strong-axis stress of a member that
+        // does not rotate (common practice, no source: structural members of open section do not rotate)
+        var openBent = r.Bending is null || r.Model.Bending is not { Rotating: true } ? []
+            : r.Model.Segments.Where(s => s.Section is { WarpingSensitive: true }).Select(s => s.Label).ToArray();
+        if (openBent.Length == 0) return done;
+        string note = $"segment{(openBent.Length > 1 ? "s" : "")} {string.Join(", ", openBent)}: open section checked in bending as a rotating shaft " +
+                      "('rotating: true', the default): every boundary point is taken at its worst angle to the bending moment, for an I-section " +
+                      "or channel the weak axis; for a beam or frame member that does not rotate, write 'rotating: false' in the bending block";
+        return done with { WarpingWarnings = done.WarpingWarnings.Prepend(note).ToArray() };
+    }
+
+    private static ShaftResult AttachWarping(ShaftResult r)
+    {
         var model = r.Model;
         var open = model.Segments.Where(s => s.Section is { WarpingSensitive: true }).Select(s => s.Label).ToArray();
         var warnings = new List<string>();

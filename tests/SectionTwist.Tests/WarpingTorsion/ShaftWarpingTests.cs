@@ -96,6 +96,20 @@ public class ShaftWarpingTests
         Assert.Null(Solve(Beam + "warping: {A: restrained}\n").Warping!.Segments[0].MaxCombinedNormalStress);
     }
 
+    // An I-beam with a bending block and the default 'rotating: true' is checked about its weak axis at every point (each
+    // boundary point at its worst angle): the output says so and names 'rotating: false' for a member that does not rotate
+    // (common practice, no source: structural members of open section do not rotate). With 'rotating: false' no note.
+    [Fact]
+    public void An_open_section_bent_as_a_rotating_shaft_draws_a_note()
+    {
+        string text = Beam.Replace("  - {name: B, after: 1200}", "  - {name: M, after: 600}\n  - {name: B, after: 600}", StringComparison.Ordinal)
+            .Replace("  - {from: A, to: B, section: beam, material: frame}", "  - {from: A, to: M, section: beam, material: frame}\n  - {from: M, to: B, section: beam, material: frame}", StringComparison.Ordinal)
+            + "warping: {A: restrained}\nbending:\n  bearings: [{at: A}, {at: B}]\n  loads:\n    - {at: M, force: {y: 0, z: -5 kN}}\n";
+        Assert.Contains(Solve(text).WarpingWarnings, w => w.Contains("write 'rotating: false'", StringComparison.Ordinal) && w.StartsWith("segments A-M, M-B:", StringComparison.Ordinal));
+        Assert.DoesNotContain(Solve(text + "  rotating: false\n").WarpingWarnings, w => w.Contains("rotating", StringComparison.Ordinal));
+        Assert.DoesNotContain(Solve(Beam + "warping: {A: restrained}\n").WarpingWarnings, w => w.Contains("rotating", StringComparison.Ordinal));
+    }
+
     /// <summary>The stiffness of an open cantilever restrained at its root and free to warp at its tip: T / phi(L) = G J / (L - a tanh(L/a)).</summary>
     private static double CantileverStiffness(ShaftSegment seg, double l)
     {
