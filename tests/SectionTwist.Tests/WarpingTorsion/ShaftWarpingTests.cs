@@ -24,6 +24,10 @@ public class ShaftWarpingTests
 
         """;
 
+    /// <summary>The head of a shaft file in mm and N*m with steel S355 and one section 'beam' of the template.</summary>
+    private static string Frame(string template) =>
+        $"units: {{length: mm, torque: N*m}}\nmaterials:\n  frame: {{library: steel-s355}}\nsections:\n  beam: {{template: \"{template}\"}}\n";
+
     private static readonly SectionTwist.Torsion.AnalysisOptions Coarse = new() { Accuracy = 1e-3 };
 
     private static ShaftResult Solve(string text) =>
@@ -144,12 +148,7 @@ public class ShaftWarpingTests
     [Fact]
     public void Two_restrained_beams_joined_by_a_coupling_share_the_torque_by_their_closed_form_stiffnesses()
     {
-        const string text = """
-            units: {length: mm, torque: N*m}
-            materials:
-              frame: {library: steel-s355}
-            sections:
-              beam: {template: "ibeam:h=200,b=100,tw=5.6,tf=8.5,r=12"}
+        string text = Frame("ibeam:h=200,b=100,tw=5.6,tf=8.5,r=12") + """
             stations:
               - {name: A, at: 0}
               - {name: B, after: 1200}
@@ -217,12 +216,7 @@ public class ShaftWarpingTests
     [Fact]
     public void The_shear_check_covers_a_torque_share_moved_by_restrained_warping()
     {
-        const string text = """
-            units: {length: mm, torque: N*m}
-            materials:
-              frame: {library: steel-s355}
-            sections:
-              beam: {template: "channel:h=120,b=55,tw=7,tf=9,r=9"}
+        string text = Frame("channel:h=120,b=55,tw=7,tf=9,r=9") + """
             stations:
               - {name: A, at: 0}
               - {name: B, after: 300}
