@@ -1,4 +1,5 @@
 using SectionTwist.Geometry;
+using SectionTwist.Torsion;
 using SkiaSharp;
 
 namespace SectionTwist.Rendering.Section;
@@ -22,6 +23,23 @@ internal readonly record struct SectionLayout(int Width, int Height, SKRect Plot
 
     /// <summary>Pixel position of a world point (m).</summary>
     public SKPoint ToPixel(double x, double y) => new((float)(OriginX + x * PixelsPerMetre), (float)(OriginY - y * PixelsPerMetre));
+
+    /// <summary>
+    /// The pixel corners of the field's triangle starting at <paramref name="t"/> (an index into
+    /// <see cref="SectionField.Triangles"/>) and the value of each corner node; returns the values' range.
+    /// </summary>
+    public (double Min, double Max) Corners(SectionField f, int t, Func<int, double> value, Span<double> x, Span<double> y, Span<double> v)
+    {
+        double vmin = double.PositiveInfinity, vmax = double.NegativeInfinity;
+        for (int j = 0; j < 3; j++)
+        {
+            int n = f.Triangles[t + j];
+            var p = ToPixel(f.X[n], f.Y[n]);
+            x[j] = p.X; y[j] = p.Y; v[j] = value(n);
+            vmin = Math.Min(vmin, v[j]); vmax = Math.Max(vmax, v[j]);
+        }
+        return (vmin, vmax);
+    }
 
     /// <summary>World point (m) at a pixel.</summary>
     public Point2 ToWorld(float px, float py) => new((px - OriginX) / PixelsPerMetre, (OriginY - py) / PixelsPerMetre);

@@ -118,14 +118,7 @@ public static class SectionPicture
         double width = top / bands;
         for (int t = 0; t + 2 < tri.Count; t += 3)
         {
-            double vmin = double.PositiveInfinity, vmax = double.NegativeInfinity;
-            for (int j = 0; j < 3; j++)
-            {
-                int n = tri[t + j];
-                var p = L.ToPixel(f.X[n], f.Y[n]);
-                x[j] = p.X; y[j] = p.Y; v[j] = f.ShearMagnitude(n) * factor;
-                vmin = Math.Min(vmin, v[j]); vmax = Math.Max(vmax, v[j]);
-            }
+            var (vmin, vmax) = L.Corners(f, t, n => f.ShearMagnitude(n) * factor, x, y, v);
             int k0 = Math.Clamp((int)Math.Floor(vmin / width), 0, bands - 1);
             int k1 = Math.Clamp((int)Math.Floor(vmax / width), 0, bands - 1);
             for (int k = k0; k <= k1; k++)
@@ -196,14 +189,7 @@ public static class SectionPicture
         var tri = f.Triangles;
         for (int t = 0; t + 2 < tri.Count; t += 3)
         {
-            double vmin = double.PositiveInfinity, vmax = double.NegativeInfinity;
-            for (int j = 0; j < 3; j++)
-            {
-                int n = tri[t + j];
-                var p = L.ToPixel(f.X[n], f.Y[n]);
-                x[j] = p.X; y[j] = p.Y; v[j] = f.Phi[n];
-                vmin = Math.Min(vmin, v[j]); vmax = Math.Max(vmax, v[j]);
-            }
+            var (vmin, vmax) = L.Corners(f, t, n => f.Phi[n], x, y, v);
             for (int l = 1; l <= lines; l++)
             {
                 double level = pmin + (pmax - pmin) * l / (lines + 1);

@@ -82,14 +82,7 @@ public static class WarpingPicture
         var tri = f.Triangles;
         for (int t = 0; t + 2 < tri.Count; t += 3)
         {
-            double vmin = double.PositiveInfinity, vmax = double.NegativeInfinity;
-            for (int j = 0; j < 3; j++)
-            {
-                int n = tri[t + j];
-                var p = L.ToPixel(f.X[n], f.Y[n]);
-                x[j] = p.X; y[j] = p.Y; v[j] = omega[n] * toDisplay;
-                vmin = Math.Min(vmin, v[j]); vmax = Math.Max(vmax, v[j]);
-            }
+            var (vmin, vmax) = L.Corners(f, t, n => omega[n] * toDisplay, x, y, v);
             int k0 = Math.Clamp((int)Math.Floor((vmin - bottom) / width), 0, bands - 1);
             int k1 = Math.Clamp((int)Math.Floor((vmax - bottom) / width), 0, bands - 1);
             for (int k = k0; k <= k1; k++)
@@ -131,12 +124,7 @@ public static class WarpingPicture
         var tri = f.Triangles;
         for (int t = 0; t + 2 < tri.Count; t += 3)
         {
-            for (int j = 0; j < 3; j++)
-            {
-                int n = tri[t + j];
-                var p = L.ToPixel(f.X[n], f.Y[n]);
-                x[j] = p.X; y[j] = p.Y; v[j] = omega[n];
-            }
+            L.Corners(f, t, n => omega[n], x, y, v);
             if (!ContourGeometry.IsoSegment(x, y, v, 0, out double x0, out double y0, out double x1, out double y1)) continue;
             path.MoveTo((float)x0, (float)y0);
             path.LineTo((float)x1, (float)y1);
