@@ -63,8 +63,12 @@ internal sealed class PlasticAnalysis(SectionResult elastic, double yieldShear, 
             double est = refine ? Math.Abs(sf.TorquePerYield - sc.TorquePerYield) / sf.TorquePerYield + holeFloor : double.NaN;
             // the plastic zone only grows with the twist (docs/theory.md): the classification's noise at the border of an
             // element does not make it shrink from one level to the next
-            fraction = Math.Max(fraction, sf.PlasticFraction);
-            union = union is null ? (bool[])sf.Yielded.Clone() : union.Zip(sf.Yielded, (a, b) => a || b).ToArray();
+            // up to the first-yield twist the section is elastic: yield has begun at a point at most, an area of zero
+            // (the 0.5 % band of the classification would otherwise count a thin ring of a round bar as yielded)
+            bool elastic = r <= 1 + 1e-12;
+            var now = elastic ? new bool[sf.Yielded.Length] : sf.Yielded;
+            fraction = elastic ? fraction : Math.Max(fraction, sf.PlasticFraction);
+            union = union is null ? (bool[])now.Clone() : union.Zip(now, (a, b) => a || b).ToArray();
             curve.Add(new TorqueTwistPoint(r, t, t / ty, fraction, est));
             yielded.Add(Array.AsReadOnly((bool[])union.Clone()));
         }

@@ -109,6 +109,7 @@ internal sealed partial class ShaftFileReader
                 UltimateStrength = su,
                 StrengthBasis = strengthsGiven || lib is null ? MaterialBasis.User : lib.StrengthBasis,
             };
+            _materialNodes[result[name]] = v;
         }
         return result;
     }

@@ -16,6 +16,8 @@ internal sealed partial class ShaftFileReader
     private readonly string _baseDirectory;
     private readonly Func<SectionSource, SectionStiffness>? _resolver;
     private Dictionary<string, Material> _materials = new(StringComparer.Ordinal);
+    /// <summary>The file entry of each material defined under 'materials:', for messages that point at it.</summary>
+    private readonly Dictionary<Material, YamlNode> _materialNodes = new(ReferenceEqualityComparer.Instance);
     private readonly Dictionary<string, double> _stations = new(StringComparer.Ordinal);
     private readonly List<Station> _stationList = [];
     private readonly List<(string A, string B)> _segmentEnds = [];
@@ -91,7 +93,20 @@ internal sealed partial class ShaftFileReader
             Warping = root.Get("warping") is { } wn ? ReadWarping(wn) : null,
             Overload = root.Get("overload") is { } on ? ReadOverload(on, segments) : null,
         };
+        CheckWarpingModulus(model);
         return new ShaftDocument(path, model, units) { Dynamics = root.Get("dynamics") is { } dn ? ReadDynamics(dn, model, materials, sections) : null };
+    }
+
+    /// <summary>
+    /// Restrained warping needs E for every segment of open section (E Iw); a material of this file without it is named
+    /// at its own entry, where the remedy goes, before any solve.
+    /// </summary>
+    private void CheckWarpingModulus(ShaftModel model)
+    {
+        if (model.Warping is not { } w || !w.Values.Any(x => x.Kind != WarpingTorsion.WarpingEndKind.Free)) return;
+        foreach (var s in model.Segments)
+            if (s.Section is { WarpingConstant: > 0 } && s.Material.YoungsModulus is null && _materialNodes.TryGetValue(s.Material, out var node))
+                throw _file.Error(node, "E", $"material '{YamlGuard.Short(s.Material.Name)}' has no Young's modulus, which the restrained warping of segment {s.Label} needs (E Iw); add e.g. 'E: 210 GPa' to it, or take a library material");
     }
 
     /// <summary>Line and column (1-based) of the first tab in a line's leading white space, or null.</summary>

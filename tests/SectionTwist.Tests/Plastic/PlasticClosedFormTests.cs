@@ -81,6 +81,23 @@ public sealed class PlasticClosedFormTests
         Assert.True(Tol.RelErr(exact, r.FullyPlasticTorque) <= r.FullyPlasticTorqueError + 1e-6, "the estimate bounds the true error");
     }
 
+    // A thick tube (D 50, d 20): elastic core radius R theta_y / theta as for the solid bar (same sources as the circle
+    // below), so the plastic area is (R^2 - max(R theta_y / theta, r_i)^2) / (R^2 - r_i^2): 0 at first yield, 42.9 % at
+    // 1.25, 89.3 % at 2, all of it from 2.5 on; and the yielded area never shrinks as the twist grows.
+    [Fact]
+    public void Thick_tube_yielded_area_follows_the_elastic_core_and_never_shrinks()
+    {
+        var r = Run("tube:D=50,d=20", new PlasticOptions { TwistRatios = [1, 1.25, 2, 3] });
+        const double ro = 25, ri = 10;
+        foreach (var p in r.Curve)
+        {
+            double core = Math.Max(ro / p.TwistRatio, ri);
+            Tol.Abs((ro * ro - core * core) / (ro * ro - ri * ri), p.PlasticFraction, 0.02, $"elastic core at theta/theta_y = {p.TwistRatio}");
+        }
+        Assert.Equal(0, r.Curve[0].PlasticFraction);
+        Assert.True(r.Curve.Zip(r.Curve.Skip(1)).All(q => q.Second.PlasticFraction >= q.First.PlasticFraction), "the plastic zone only grows");
+    }
+
     [Fact]
     public void Circle_torque_twist_curve_matches_the_elastic_plastic_closed_form()
     {

@@ -270,6 +270,19 @@ public class ShaftWarpingTests
         Assert.Equal(2e4, ShaftFile.Parse(si + "warping: {A: {spring: 2e4}}\n", resolver: ShaftSections.CreateResolver(Coarse)).Model.Warping!["A"].Stiffness);
     }
 
+    // A material without E cannot carry restrained warping (E Iw): named at its own entry, where the remedy goes, before
+    // any solve (the house rule for bad input; common practice, no source).
+    [Fact]
+    public void A_material_without_e_is_named_at_its_line_when_warping_is_restrained()
+    {
+        string text = Beam.Replace("  frame: {library: steel-s355}", "  frame: {G: 80 GPa, allowableShear: 80 MPa}", StringComparison.Ordinal) + "warping: {A: restrained}\n";
+        var ex = Assert.Throws<SectionTwistException>(() => ShaftFile.Parse(text, resolver: ShaftSections.CreateResolver(Coarse)));
+        Assert.Contains("shaft.yaml:3:", ex.Message, StringComparison.Ordinal);
+        Assert.Contains("material 'frame' has no Young's modulus, which the restrained warping of segment A-B needs", ex.Message, StringComparison.Ordinal);
+        // free warping needs no E
+        Assert.Null(ShaftFile.Parse(text.Replace("warping: {A: restrained}", "warping: free", StringComparison.Ordinal), resolver: ShaftSections.CreateResolver(Coarse)).Model.Segments[0].Material.YoungsModulus);
+    }
+
     [Fact]
     public void A_bad_warping_value_names_the_line_and_the_remedy()
     {
