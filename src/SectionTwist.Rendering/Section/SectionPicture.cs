@@ -1,3 +1,4 @@
+using SectionTwist.Torsion;
 using SectionTwist.Rendering.Drawing;
 using SectionTwist.Units;
 using SkiaSharp;
@@ -203,10 +204,13 @@ public static class SectionPicture
         c.DrawPath(path, paint);
     }
 
-    private static void DrawOutline(SKCanvas c, SectionPlotData data, SectionLayout L)
+    private static void DrawOutline(SKCanvas c, SectionPlotData data, SectionLayout L) => DrawOutline(c, data.Field, L);
+
+    /// <summary>The field's boundary loops as a black line (also the warping picture's outline).</summary>
+    internal static void DrawOutline(SKCanvas c, SectionField f, SectionLayout L)
     {
         using var path = new SKPath();
-        foreach (var loop in data.Field.Boundaries)
+        foreach (var loop in f.Boundaries)
         {
             if (loop.Count < 2) continue;
             path.MoveTo(L.ToPixel(loop[0]));

@@ -133,20 +133,7 @@ public static class WarpingPicture
         c.DrawPath(path, paint);
     }
 
-    private static void DrawOutline(SKCanvas c, SectionField f, SectionLayout L)
-    {
-        using var path = new SKPath();
-        foreach (var loop in f.Boundaries)
-        {
-            if (loop.Count < 2) continue;
-            path.MoveTo(L.ToPixel(loop[0]));
-            for (int i = 1; i < loop.Count; i++) path.LineTo(L.ToPixel(loop[i]));
-            path.Close();
-        }
-        using var paint = Ink.Stroke(SKColors.Black, 1.4f);
-        paint.StrokeJoin = SKStrokeJoin.Round;
-        c.DrawPath(path, paint);
-    }
+    private static void DrawOutline(SKCanvas c, SectionField f, SectionLayout L) => SectionPicture.DrawOutline(c, f, L);
 
     /// <summary>A small ring at the place of the largest |omega|.</summary>
     private static void DrawMaximum(SKCanvas c, SKPoint p)
